@@ -1,0 +1,27 @@
+import { defineConfig } from "vitest/config";
+import path from "node:path";
+
+const alias = { "@": path.resolve(__dirname), "server-only": path.resolve(__dirname, "tests/fixtures/server-only.ts") };
+
+export default defineConfig({
+  resolve: { alias },
+  test: {
+    projects: [
+      {
+        resolve: { alias },
+        test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "integration",
+          include: ["tests/integration/**/*.test.ts"],
+          environment: "node",
+          setupFiles: ["tests/integration/setup.ts"],
+          testTimeout: 30000,
+          hookTimeout: 30000,
+        },
+      },
+    ],
+  },
+});
