@@ -1,0 +1,95 @@
+// Calendar-date helpers shared by every rule in lib/. Dates are ISO "YYYY-MM-DD" strings
+// with no time zone: a calendar date as the club sees it. Arithmetic runs on UTC midnights so
+// that daylight-saving changes can never shift a day.
+
+export type IsoDate = string;
+
+const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
+
+export function isIsoDate(value: string): boolean {
+  const m = ISO_DATE.exec(value);
+  if (!m) return false;
+  const y = Number(m[1]);
+  const mo = Number(m[2]);
+  const d = Number(m[3]);
+  return mo >= 1 && mo <= 12 && d >= 1 && d <= lastDayOfMonth(y, mo);
+}
+
+export function parseIsoDate(value: string): { year: number; month: number; day: number } {
+  if (!isIsoDate(value)) throw new RangeError(`Not an ISO calendar date: "${value}"`);
+  const [y, m, d] = value.split("-").map(Number) as [number, number, number];
+  return { year: y, month: m, day: d };
+}
+
+export function formatIsoDate(year: number, month: number, day: number): IsoDate {
+  return `${String(year).padStart(4, "0")}-${String(month).padStart(2, "0")}-${String(day).padStart(2, "0")}`;
+}
+
+export function isLeapYear(year: number): boolean {
+  return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+}
+
+/** month is 1–12 */
+export function lastDayOfMonth(year: number, month: number): number {
+  return new Date(Date.UTC(year, month, 0)).getUTCDate();
+}
+
+/** The month `n` months after (year, month); n may be negative. */
+export function shiftMonth(year: number, month: number, n: number): { year: number; month: number } {
+  const index = year * 12 + (month - 1) + n;
+  return { year: Math.floor(index / 12), month: (index % 12 + 12) % 12 + 1 };
+}
+
+/** Last day of the month that is `months` calendar months after the month of `date`. */
+export function endOfMonthAfter(date: IsoDate, months: number): IsoDate {
+  const { year, month } = parseIsoDate(date);
+  const t = shiftMonth(year, month, months);
+  return formatIsoDate(t.year, t.month, lastDayOfMonth(t.year, t.month));
+}
+
+/** First day of the month that is `months` calendar months after the month of `date`. */
+export function startOfMonthAfter(date: IsoDate, months: number): IsoDate {
+  const { year, month } = parseIsoDate(date);
+  const t = shiftMonth(year, month, months);
+  return formatIsoDate(t.year, t.month, 1);
+}
+
+function toUtcMs(date: IsoDate): number {
+  const { year, month, day } = parseIsoDate(date);
+  return Date.UTC(year, month - 1, day);
+}
+
+export function addDays(date: IsoDate, days: number): IsoDate {
+  const d = new Date(toUtcMs(date) + days * 86_400_000);
+  return formatIsoDate(d.getUTCFullYear(), d.getUTCMonth() + 1, d.getUTCDate());
+}
+
+/** Whole days from `from` to `to` (positive when `to` is later). */
+export function daysBetween(from: IsoDate, to: IsoDate): number {
+  return Math.round((toUtcMs(to) - toUtcMs(from)) / 86_400_000);
+}
+
+export function compareIsoDates(a: IsoDate, b: IsoDate): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+
+/** Calendar date of an instant in a time zone (IANA name), e.g. the club's "today". */
+export function isoDateInTimeZone(instant: Date, timeZone: string): IsoDate {
+  const parts = new Intl.DateTimeFormat("en-CA", {
+    timeZone,
+    year: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+  }).formatToParts(instant);
+  const get = (t: string) => parts.find((p) => p.type === t)?.value ?? "";
+  return `${get("year")}-${get("month")}-${get("day")}`;
+}
+
+export function isValidTimeZone(timeZone: string): boolean {
+  try {
+    new Intl.DateTimeFormat("en-US", { timeZone });
+    return true;
+  } catch {
+    return false;
+  }
+}
