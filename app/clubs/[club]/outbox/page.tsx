@@ -1,0 +1,18 @@
+import { notFound } from "next/navigation";
+import { OutboxTable } from "@/components/outbox-table";
+import { PageHeader } from "@/components/ui/page-header";
+import { listClubOutbox } from "@/db/queries/outbox";
+import { requireClubContext } from "@/lib/server/club-context";
+
+export default async function OutboxPage({ params }: { params: Promise<{ club: string }> }) {
+  const { club: slug } = await params;
+  const { db, club, ability } = await requireClubContext(slug);
+  if (!ability.can("read", "Outbox")) notFound();
+  const rows = listClubOutbox(db, club.id).map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), sentAt: r.sentAt?.toISOString() ?? null }));
+  return (
+    <div className="max-w-6xl">
+      <PageHeader title="Outbox" lead="Every e-mail sent on the club's behalf. Messages wait here and are retried until the provider takes them." />
+      <OutboxTable slug={club.slug} initial={rows} />
+    </div>
+  );
+}

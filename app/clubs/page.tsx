@@ -1,0 +1,30 @@
+import Link from "next/link";
+import { redirect } from "next/navigation";
+import { getDb } from "@/db/client";
+import { listClubsForUser } from "@/db/queries/clubs";
+import { getSessionUser } from "@/lib/server/session";
+import { ROLE_LABELS } from "@/permissions";
+import { SignOutButton } from "@/components/shell/sign-out-button";
+
+export default async function ClubsIndex() {
+  const user = await getSessionUser();
+  if (!user) redirect("/sign-in?callbackUrl=/clubs");
+  const clubs = listClubsForUser(getDb(), user.id);
+  if (clubs.length === 1 && user.platformRole !== "operator") redirect(`/clubs/${clubs[0]!.slug}`);
+  return (
+    <main className="mx-auto max-w-2xl p-4 sm:p-8">
+      <h1 className="text-2xl font-bold">Your clubs</h1>
+      {clubs.length === 0 ? <p className="mt-3 text-ink-700">You are not in any club yet. A club admin can invite you.</p> : null}
+      <ul className="mt-4 grid gap-3">
+        {clubs.map((c) => (
+          <li key={c.slug} className="card">
+            <Link href={`/clubs/${c.slug}`} className="text-lg font-bold">{c.name}</Link>
+            <p className="text-sm text-ink-500">{c.roles.map((r) => ROLE_LABELS[r]).join(" · ")}</p>
+          </li>
+        ))}
+      </ul>
+      {user.platformRole === "operator" ? <p className="mt-4"><Link href="/operator">Operator console</Link></p> : null}
+      <div className="mt-6 rounded bg-fin-700 p-2 inline-block"><SignOutButton /></div>
+    </main>
+  );
+}

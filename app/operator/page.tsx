@@ -1,0 +1,30 @@
+import Link from "next/link";
+import { AssignAdminForm } from "@/components/operator/assign-admin-form";
+import { PageHeader } from "@/components/ui/page-header";
+import { getDb } from "@/db/client";
+import { listOperatorClubSummaries } from "@/db/queries/operator";
+import { getSessionUser } from "@/lib/server/session";
+
+export default async function OperatorHome() {
+  const user = (await getSessionUser())!;
+  const summaries = listOperatorClubSummaries(getDb(), user.id);
+  return (
+    <div>
+      <PageHeader title="Clubs you administer" lead={`${summaries.length} clubs. Totals only: member-level detail stays with each club.`} actions={<Link href="/operator/clubs/new">Create a club</Link>} />
+      <ul className="grid gap-4 md:grid-cols-2">
+        {summaries.map((c) => (
+          <li key={c.id} className="card">
+            <h2 className="text-lg font-bold">{c.name}</h2>
+            <p className="text-sm text-ink-500">/clubs/{c.slug} · {c.timeZone} · {c.currency} · {c.unitSystem === "metric" ? "metric" : "US units"}</p>
+            <dl className="mt-3 grid grid-cols-2 gap-2 text-sm">
+              <div><dt className="text-ink-500">Active members</dt><dd className="text-xl font-bold tabular">{c.activeMembers}</dd></div>
+              <div><dt className="text-ink-500">Admins</dt><dd className="text-xl font-bold tabular">{c.admins}</dd></div>
+            </dl>
+            {c.admins === 0 ? <p className="mt-2 text-sm text-sock-700">No active admin yet: appoint one.</p> : null}
+            <AssignAdminForm clubId={c.id} clubName={c.name} />
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}

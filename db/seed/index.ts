@@ -1,0 +1,24 @@
+import { count } from "drizzle-orm";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { databaseFile, openDatabase, type Db } from "@/db/client";
+import { migrateDatabase } from "@/db/migrate";
+import { clubs } from "@/db/schema";
+import { seedFoundation } from "./foundation";
+
+export async function seedDemo(db: Db): Promise<void> {
+  await seedFoundation(db);
+}
+
+if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.argv[1])) {
+  const db = openDatabase();
+  migrateDatabase(db);
+  const existing = db.select({ n: count() }).from(clubs).get()?.n ?? 0;
+  if (existing > 0 && !process.argv.includes("--force")) {
+    console.log(`${databaseFile()} already holds ${existing} clubs; not seeding again (delete the file to start over).`);
+  } else {
+    await seedDemo(db);
+    console.log(`Seeded the demo scenario into ${databaseFile()}`);
+  }
+  db.$client.close();
+}

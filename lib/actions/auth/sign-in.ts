@@ -1,0 +1,42 @@
+"use server";
+import { AuthError, CredentialsSignin } from "next-auth";
+import { signIn } from "@/auth";
+import { zodFieldErrors } from "@/lib/actions/create-action";
+import type { ActionState } from "@/lib/actions/action-state";
+import { magicLinkSchema, passwordSignInSchema, safeCallbackUrl } from "@/lib/validation/auth";
+
+const GENERIC = "That e-mail and password do not match an active account.";
+const LIMITED = "Too many failed sign-ins for this address. Wait 15 minutes, or use an e-mail link instead.";
+
+export async function signInWithPassword(_prev: ActionState, formData: FormData): Promise<ActionState> {
+  const parsed = passwordSignInSchema.safeParse(Object.fromEntries(formData));
+  if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: zodFieldErrors(parsed.error) };
+  try {
+    await signIn("credentials", {
+      email: parsed.data.email,
+      password: parsed.data.password,
+      redirectTo: safeCallbackUrl(parsed.data.callbackUrl ?? "/clubs"),
+    });
+  } catch (error) {
+    if (error instanceof CredentialsSignin) {
+      return { ok: false, message: error.code === "rate_limited" ? LIMITED : GENERIC, fieldErrors: {} };
+    }
+    if (error instanceof AuthError) return { ok: false, message: GENERIC, fieldErrors: {} };
+    throw error; // the redirect after a successful sign-in
+  }
+  return { ok: true, message: "Signed in.", fieldErrors: {} };
+}
+
+export async function requestMagicLink(_prev: ActionState, formData: FormData): Promise<ActionState> {
+  const parsed = magicLinkSchema.safeParse(Object.fromEntries(formData));
+  if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: zodFieldErrors(parsed.error) };
+  try {
+    await signIn("email", { email: parsed.data.email, redirectTo: safeCallbackUrl(parsed.data.callbackUrl ?? "/clubs") });
+  } catch (error) {
+    if (error instanceof AuthError) {
+      return { ok: false, message: "The sign-in link could not be prepared. Try again in a minute.", fieldErrors: {} };
+    }
+    throw error;
+  }
+  return { ok: true, message: "If an account uses that address, a sign-in link is on its way.", fieldErrors: {} };
+}

@@ -1,0 +1,91 @@
+// Reasons that come from one inspection item's next-due point.
+
+import { formatHours } from "./hours";
+import { makeReason, type RankedReason, type ReasonEffect } from "./reason";
+import type { DueSoonThresholds, InspectionItem, MissingData, NextDue } from "./types";
+
+function cite(item: InspectionItem): string {
+  return item.source ? ` (${item.source})` : "";
+}
+
+const MISSING_TEXT: Record<MissingData, { code: string; text: string }> = {
+  "no-completion": { code: "no-completion", text: "no completion on record" },
+  "no-completion-hours": { code: "hours-unknown", text: "no meter hours recorded with the last completion" },
+  "no-current-hours": { code: "hours-unknown", text: "current meter hours not known" },
+  "no-expiry-date": { code: "expiry-unknown", text: "no expiry date recorded with the last completion" },
+  "no-use-record": { code: "use-unknown", text: "cumulative use not recorded" },
+};
+
+function missingReasons(item: InspectionItem, next: NextDue): RankedReason[] {
+  const effect: ReasonEffect = item.required ? "unknown" : "advisory";
+  // Without any completion the other gaps say nothing new.
+  const gaps: MissingData[] = next.missing.includes("no-completion") ? ["no-completion"] : next.missing;
+  return gaps.map((gap) => {
+    const { code, text } = MISSING_TEXT[gap];
+    return makeReason(effect, code, `${item.name}: ${text}${cite(item)}`);
+  });
+}
+
+function hoursOverdueText(next: NextDue, currentHours: number): string {
+  const due = next.dueHours ?? 0;
+  const limit = next.overrunLimitHours ?? due;
+  const base = `due at ${formatHours(due)} h, meter now ${formatHours(currentHours)} h`;
+  if (limit <= due) return base;
+  if (currentHours <= limit) {
+    return `${base}; may be flown only to reach a place where it can be done, up to ${formatHours(limit)} h`;
+  }
+  return `${base}, beyond the overrun allowance of ${formatHours(limit)} h`;
+}
+
+function overdueParts(next: NextDue, currentHours: number): string[] {
+  const parts: string[] = [];
+  if (next.daysLeft !== null && next.daysLeft < 0) parts.push(`overdue since ${next.dueDate}`);
+  if (next.hoursLeft !== null && next.hoursLeft < 0) parts.push(`overdue: ${hoursOverdueText(next, currentHours)}`);
+  if (next.useLeftHours !== null && next.useLeftHours < 0 && next.useLimitHours !== null) {
+    const used = next.useLimitHours - next.useLeftHours;
+    parts.push(`overdue: ${formatHours(used)} h of cumulative use, more than ${formatHours(next.useLimitHours)} h`);
+  }
+  return parts;
+}
+
+function overdueReason(item: InspectionItem, next: NextDue, currentHours: number): RankedReason | null {
+  const parts = overdueParts(next, currentHours);
+  if (parts.length === 0) return null;
+  const text = `${item.name} ${parts.join("; ")}${cite(item)}`;
+  if (item.ifrOnly) return makeReason("limited", "ifr-test-overdue", `${text}: no IFR flight until it is done`);
+  if (item.required) return makeReason("grounded", "inspection-overdue", text);
+  return makeReason("advisory", "item-overdue", text);
+}
+
+function plural(n: number, unit: string): string {
+  return `${n} ${unit}${n === 1 ? "" : "s"}`;
+}
+
+function dueSoonReason(item: InspectionItem, next: NextDue, soon: DueSoonThresholds): RankedReason | null {
+  const parts: string[] = [];
+  if (next.daysLeft !== null && next.daysLeft >= 0 && next.daysLeft <= soon.days) {
+    parts.push(`due by ${next.dueDate} (${plural(next.daysLeft, "day")} left)`);
+  }
+  if (next.hoursLeft !== null && next.dueHours !== null && next.hoursLeft >= 0 && next.hoursLeft <= soon.hours) {
+    parts.push(`due at ${formatHours(next.dueHours)} h (${formatHours(next.hoursLeft)} h left)`);
+  }
+  if (parts.length === 0) return null;
+  return makeReason("advisory", "due-soon", `${item.name} ${parts.join("; ")}${cite(item)}`);
+}
+
+/** Every reason one applicable item gives: missing data, overdue, or due soon. */
+export function itemReasons(
+  item: InspectionItem,
+  next: NextDue,
+  currentHours: number | null,
+  soon: DueSoonThresholds,
+): RankedReason[] {
+  const reasons = missingReasons(item, next);
+  const overdue = overdueReason(item, next, currentHours ?? Number.NaN);
+  if (overdue) reasons.push(overdue);
+  else {
+    const dueSoon = dueSoonReason(item, next, soon);
+    if (dueSoon) reasons.push(dueSoon);
+  }
+  return reasons;
+}

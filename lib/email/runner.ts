@@ -1,0 +1,38 @@
+import { getDb } from "@/db/client";
+import { createEmailProvider, type EmailProvider } from "./provider";
+import { drainOutbox } from "./worker";
+
+// The in-process worker: started once by instrumentation.ts, and nudged right after a message is
+// queued so that a sign-in link does not wait for the next tick.
+const state = globalThis as unknown as { __outbox?: { provider: EmailProvider; running: Promise<void> | null; again: boolean; timer?: NodeJS.Timeout } };
+
+function getState() {
+  state.__outbox ??= { provider: createEmailProvider(), running: null, again: false };
+  return state.__outbox;
+}
+
+export function kickOutbox(): void {
+  const s = getState();
+  if (s.running) {
+    s.again = true;
+    return;
+  }
+  s.running = drainOutbox(getDb(), s.provider)
+    .then(() => undefined)
+    .catch((error) => console.error("[outbox] drain failed", error))
+    .finally(() => {
+      s.running = null;
+      if (s.again) {
+        s.again = false;
+        kickOutbox();
+      }
+    });
+}
+
+export function startOutboxWorker(intervalMs = Number(process.env.OUTBOX_INTERVAL_MS ?? 2000)): void {
+  const s = getState();
+  if (s.timer) return;
+  s.timer = setInterval(kickOutbox, intervalMs);
+  s.timer.unref();
+  kickOutbox();
+}

@@ -1,0 +1,93 @@
+import { AbilityBuilder, createMongoAbility, type MongoAbility } from "@casl/ability";
+import { ROLES, ROLE_LABELS, type Role } from "./roles";
+import type { Action, SubjectName } from "./subjects";
+
+export type AppAbility = MongoAbility<[Action, SubjectName | Record<string, unknown>]>;
+
+export type AbilityInput = { userId: string; roles: readonly Role[] };
+
+type Builder = AbilityBuilder<AppAbility>;
+
+// The one permission table: what each role grants inside its club. Abilities of several roles
+// add up. Rules with { userId } apply to the person's own records only.
+const GRANTS: Record<Role, (b: Builder, userId: string) => void> = {
+  member: ({ can }, userId) => {
+    can("read", ["Club", "Member", "Aircraft", "Inspection", "Squawk", "GroundingNotice", "Flight", "Booking", "Bulletin", "Checkout", "Tools", "Upload"]);
+    can("create", ["Squawk", "Flight", "Booking", "SafetyReport", "Upload"]);
+    can("acknowledge", "Bulletin");
+    can("update", "Booking", { userId });
+    can(["read", "readDetails"], "SafetyReport", { reporterId: userId });
+    can(["read", "create", "update"], ["Currency", "MemberDocument"], { userId });
+    can(["read", "readDetails", "update"], "Medical", { userId });
+    can(["read", "pay"], "Account", { userId });
+  },
+  instructor: ({ can }) => {
+    can("read", ["CurrencyBoard", "Currency", "MemberDocument"]);
+    can(["create", "update"], "Checkout");
+    can(["create", "update"], ["Booking", "Flight"]);
+  },
+  safety: ({ can }) => {
+    can(["create", "publish", "update", "readAcknowledgements", "export"], "Bulletin");
+    can(["read", "readDetails", "triage", "update"], "SafetyReport");
+    can(["create", "lift"], "GroundingNotice");
+    can("read", ["CurrencyBoard", "Currency", "MemberDocument"]);
+  },
+  treasurer: ({ can }) => {
+    can(["read", "create", "export"], "Ledger");
+    can(["read", "export"], "Account");
+    can(["create", "refund", "read"], "Payment");
+    can(["read", "reconcile"], "Reconciliation");
+    can(["read", "update"], "Rates");
+    can("read", "Member");
+  },
+  maintenance: ({ can }) => {
+    can(["create", "update"], ["Aircraft", "Inspection"]);
+    can(["record"], "Inspection");
+    can(["triage", "close", "update"], "Squawk");
+    can(["create", "lift"], "GroundingNotice");
+    can("update", "Flight");
+  },
+  admin: ({ can }) => {
+    can(["read", "update"], ["Club", "ClubSettings"]);
+    can(["read", "invite", "assignRoles", "deactivate", "update"], "Member");
+    can(["read", "create", "update"], "Invitation");
+    can("read", ["AuditLog", "Outbox"]);
+    can("readAcknowledgements", "Bulletin");
+    can("read", ["CurrencyBoard", "Currency", "MemberDocument"]);
+    can(["read", "readDetails"], "Medical");
+    can(["read", "export"], ["Account", "Ledger"]);
+    can(["create", "update"], "Aircraft");
+  },
+  // A mechanic sees the aircraft records of this one club and nothing about its people or money.
+  mechanic: ({ can }) => {
+    can("read", ["Club", "Aircraft", "Inspection", "Squawk", "GroundingNotice", "Flight", "Upload"]);
+    can(["create", "update", "record"], "Inspection");
+    can(["create", "triage", "close", "update"], "Squawk");
+    can("create", "Upload");
+    can("lift", "GroundingNotice");
+  },
+};
+
+export function defineAbilityFor({ userId, roles }: AbilityInput): AppAbility {
+  const builder = new AbilityBuilder<AppAbility>(createMongoAbility);
+  for (const role of new Set(roles)) GRANTS[role](builder, userId);
+  // Nobody, whatever their roles, reads who filed an anonymous report: it is not stored.
+  return builder.build();
+}
+
+/** Roles that would allow `action` on `subject` (type-level), for "why is this disabled". */
+export function rolesThatAllow(action: Action, subject: SubjectName): Role[] {
+  return ROLES.filter((role) => {
+    const ability = defineAbilityFor({ userId: "__probe__", roles: [role] });
+    return ability.rulesFor(action, subject).some((r) => !r.inverted);
+  });
+}
+
+/** Plain-words reason shown beside a hidden or disabled control. */
+export function explainDenied(action: Action, subject: SubjectName): string {
+  const roles = rolesThatAllow(action, subject).filter((r) => r !== "mechanic");
+  if (roles.length === 0) return "No role in this club can do this.";
+  const names = roles.map((r) => ROLE_LABELS[r].toLowerCase());
+  const list = names.length === 1 ? names[0] : `${names.slice(0, -1).join(", ")} or ${names.at(-1)}`;
+  return `Only a ${list} can do this.`;
+}

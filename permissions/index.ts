@@ -1,0 +1,4 @@
+export * from "./roles";
+export * from "./subjects";
+export * from "./abilities";
+export * from "./operator";
