@@ -1,7 +1,7 @@
 import tseslint from "typescript-eslint";
 
 export default tseslint.config(
-  { ignores: ["node_modules/", ".next/", "data/", "uploads/", "db/migrations/", "next-env.d.ts", "tests/.artifacts/"] },
+  { ignores: ["node_modules/", ".next/", ".next-*/", "data/", "uploads/", "db/migrations/", "next-env.d.ts", "tests/.artifacts/"] },
   ...tseslint.configs.recommended,
   {
     rules: {

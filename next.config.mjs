@@ -1,5 +1,7 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
+  // A separate build folder per concurrent worker (NEXT_DIST_DIR=.next-e2e …); .next by default.
+  distDir: process.env.NEXT_DIST_DIR ?? ".next",
   serverExternalPackages: ["better-sqlite3"],
   poweredByHeader: false,
   typedRoutes: false,

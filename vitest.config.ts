@@ -1,7 +1,7 @@
 import { defineConfig } from "vitest/config";
 import path from "node:path";
 
-const alias = { "@": path.resolve(__dirname), "server-only": path.resolve(__dirname, "tests/fixtures/server-only.ts") };
+const alias = { "@": import.meta.dirname, "server-only": path.join(import.meta.dirname, "tests/fixtures/server-only.ts") };
 
 export default defineConfig({
   resolve: { alias },

@@ -1,8 +1,13 @@
-import { AbilityBuilder, createMongoAbility, type MongoAbility } from "@casl/ability";
+import { AbilityBuilder, createMongoAbility, subject, type MongoAbility } from "@casl/ability";
 import { ROLES, ROLE_LABELS, type Role } from "./roles";
 import type { Action, SubjectName } from "./subjects";
 
 export type AppAbility = MongoAbility<[Action, SubjectName | Record<string, unknown>]>;
+
+/** A record to check against conditions, e.g. own("Account", userId) for "their own account". */
+export function own(name: SubjectName, userId: string, extra: Record<string, unknown> = {}): Record<string, unknown> {
+  return subject(name, { userId, ...extra }) as unknown as Record<string, unknown>;
+}
 
 export type AbilityInput = { userId: string; roles: readonly Role[] };
 

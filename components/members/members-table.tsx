@@ -26,7 +26,10 @@ export function MembersTable({ rows, slug, canManage }: { rows: MemberTableRow[]
 
   function setParams(next: Record<string, string | null>) {
     const sp = new URLSearchParams(params.toString());
-    for (const [k, v] of Object.entries(next)) (v === null || v === "" ? sp.delete(k) : sp.set(k, v));
+    for (const [k, v] of Object.entries(next)) {
+      if (v === null || v === "") sp.delete(k);
+      else sp.set(k, v);
+    }
     router.replace(`${pathname}?${sp.toString()}`, { scroll: false });
   }
 

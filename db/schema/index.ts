@@ -2,3 +2,4 @@ export * from "./auth";
 export * from "./clubs";
 export * from "./audit";
 export * from "./outbox";
+export * from "./uploads";

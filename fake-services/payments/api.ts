@@ -22,8 +22,18 @@ export interface ApiDeps {
   publicUrl: () => string;
 }
 
+// The SDK sends Bearer; Basic with the key as user name is accepted too, for curl -u.
+function readApiKey(req: IncomingMessage): string | null {
+  const bearer = readBearer(req);
+  if (bearer) return bearer;
+  const m = /^Basic\s+(\S+)$/i.exec(req.headers.authorization?.trim() ?? "");
+  if (!m) return null;
+  const user = Buffer.from(m[1] ?? "", "base64").toString("utf8").split(":")[0];
+  return user || null;
+}
+
 function authenticate(req: IncomingMessage): void {
-  const key = readBearer(req);
+  const key = readApiKey(req);
   if (!key) {
     throw new ApiError(
       401,

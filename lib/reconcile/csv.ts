@@ -8,8 +8,8 @@ export type CsvColumnRef = string | number;
 
 export type CsvMapping = {
   date: CsvColumnRef;
-  /** Several columns (e.g. payee and memo) are joined with a space. */
-  description: CsvColumnRef | readonly CsvColumnRef[];
+  /** Several columns (e.g. payee and memo) are joined with a space; absent → empty descriptions. */
+  description?: CsvColumnRef | readonly CsvColumnRef[];
   reference?: CsvColumnRef;
   /** One signed amount column … */
   amount?: CsvColumnRef;
@@ -141,7 +141,8 @@ export function parseCsvReport(text: string, mapping: CsvMapping): CsvReport {
   const header = hasHeader ? records[0] : undefined;
   if (records.length === 0) return { lines: [], errors: [] };
   const resolve = makeResolver(header);
-  const descriptionRefs = Array.isArray(mapping.description) ? mapping.description : [mapping.description];
+  const d = mapping.description;
+  const descriptionRefs = d === undefined ? [] : Array.isArray(d) ? d : [d];
   const optional = (ref: CsvColumnRef | undefined) => (ref === undefined ? undefined : resolve(ref));
   const cols: Columns = {
     date: resolve(mapping.date),

@@ -27,6 +27,7 @@ export {
 export {
   reconciliationSummary,
   type AmountLike,
+  type AmountList,
   type ReconciliationInput,
   type ReconciliationSummary,
 } from "./summary";

@@ -25,7 +25,8 @@ function decodeEntities(text: string): string {
 
 /** VERSION from an OFX 1.x SGML header ("VERSION:102") or an OFX 2.x "<?OFX … VERSION="211"?>". */
 function headerVersion(header: string): string | undefined {
-  return /VERSION\s*[:=]\s*"?(\d+)/i.exec(header)?.[1];
+  const pi = /<\?OFX\b[^>]*?\bVERSION\s*=\s*"(\d+)"/i.exec(header);
+  return pi?.[1] ?? /^\s*VERSION\s*:\s*(\d+)/im.exec(header)?.[1];
 }
 
 /**

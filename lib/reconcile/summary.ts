@@ -1,19 +1,22 @@
 /** An amount, or anything that carries one (a bank line, a book item). */
 export type AmountLike = number | { amountMinor: number };
 
+/** The items themselves, or their total. */
+export type AmountList = number | readonly AmountLike[];
+
 export type ReconciliationInput = {
   /** Closing balance printed on the bank statement. */
   statementBalanceMinor: number;
   /** The bank account's balance in the club's books on the same date. */
   bookBalanceMinor: number;
   /** Deposits recorded in the books that the bank has not yet credited. */
-  depositsInTransit?: readonly AmountLike[];
+  depositsInTransit?: AmountList;
   /** Cheques written and booked that have not yet cleared the bank. */
-  outstandingCheques?: readonly AmountLike[];
+  outstandingCheques?: AmountList;
   /** Bank charges on the statement not yet in the books (service fees, returned items). */
-  bankChargesNotInBooks?: readonly AmountLike[];
+  bankChargesNotInBooks?: AmountList;
   /** Credits on the statement not yet in the books (interest, direct deposits). */
-  bankCreditsNotInBooks?: readonly AmountLike[];
+  bankCreditsNotInBooks?: AmountList;
 };
 
 export type ReconciliationSummary = {
@@ -30,9 +33,9 @@ export type ReconciliationSummary = {
   agrees: boolean;
 };
 
-function sizeOf(items: readonly AmountLike[] | undefined, name: string): number {
+function sizeOf(items: AmountList | undefined, name: string): number {
   let total = 0;
-  for (const item of items ?? []) {
+  for (const item of typeof items === "number" ? [items] : (items ?? [])) {
     const amount = typeof item === "number" ? item : item.amountMinor;
     if (!Number.isSafeInteger(amount)) throw new RangeError(`${name}: ${amount} is not a whole number of minor units`);
     // Each list already says which way its items move the balance, so only their size counts:

@@ -71,11 +71,12 @@ export function parseAmountText(text: string, options: AmountOptions = {}): numb
   return value === 0 ? 0 : value;
 }
 
-export type DateFormat = "ISO" | "MM/DD/YYYY" | "DD/MM/YYYY" | "DD.MM.YYYY";
+export type DateFormat = "ISO" | "YYYY-MM-DD" | "MM/DD/YYYY" | "DD/MM/YYYY" | "DD.MM.YYYY";
 
 const DATE_PATTERNS: Record<DateFormat, { re: RegExp; order: [number, number, number] }> = {
   // Groups in the order year, month, day; a trailing time ("T10:22", " 10:22:05") is ignored.
   ISO: { re: /^(\d{4})-(\d{2})-(\d{2})(?:[T ].*)?$/, order: [1, 2, 3] },
+  "YYYY-MM-DD": { re: /^(\d{4})-(\d{2})-(\d{2})(?:[T ].*)?$/, order: [1, 2, 3] },
   "MM/DD/YYYY": { re: /^(\d{1,2})\/(\d{1,2})\/(\d{4})(?: .*)?$/, order: [3, 1, 2] },
   "DD/MM/YYYY": { re: /^(\d{1,2})\/(\d{1,2})\/(\d{4})(?: .*)?$/, order: [3, 2, 1] },
   "DD.MM.YYYY": { re: /^(\d{1,2})\.(\d{1,2})\.(\d{4})(?: .*)?$/, order: [3, 2, 1] },

@@ -1,0 +1,25 @@
+import type { Upload } from "@/db/schema";
+import { own, type AppAbility } from "@/permissions";
+
+// Who may read a stored file follows what it belongs to. Unknown kinds are readable by nobody.
+export function canReadUpload(ability: AppAbility, upload: Pick<Upload, "subjectType" | "ownerUserId">): boolean {
+  switch (upload.subjectType) {
+    case "Squawk":
+    case "Aircraft":
+      return ability.can("read", "Squawk");
+    case "InspectionCompletion":
+      return ability.can("read", "Inspection");
+    case "Bulletin":
+      return ability.can("read", "Bulletin");
+    case "MemberDocument":
+      return ability.can("read", own("MemberDocument", upload.ownerUserId ?? ""));
+    case "SafetyReport":
+      return ability.can("read", "SafetyReport") && ability.can("triage", "SafetyReport");
+    case "FuelReceipt":
+      return ability.can("read", own("Account", upload.ownerUserId ?? ""));
+    case "BankStatement":
+      return ability.can("reconcile", "Reconciliation");
+    default:
+      return false;
+  }
+}
