@@ -2,7 +2,7 @@
 const nextConfig = {
   // A separate build folder per concurrent worker (NEXT_DIST_DIR=.next-e2e …); .next by default.
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
-  serverExternalPackages: ["better-sqlite3"],
+  serverExternalPackages: ["better-sqlite3", "pdfkit"],
   poweredByHeader: false,
   typedRoutes: false,
   eslint: { ignoreDuringBuilds: true },

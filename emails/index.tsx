@@ -3,6 +3,13 @@ import type { ReactElement } from "react";
 import { InvitationEmail, type InvitationProps } from "./invitation";
 import { MagicLinkEmail, type MagicLinkProps } from "./magic-link";
 import { NoticeEmail, type NoticeProps } from "./notice";
+import { GroundingNoticeEmail, type GroundingNoticeProps } from "./grounding-notice";
+import { BulletinEmail, type BulletinProps } from "./bulletin";
+import { BulletinReminderEmail, type BulletinReminderProps } from "./bulletin-reminder";
+import { DocumentExpiryEmail, type DocumentExpiryProps } from "./document-expiry";
+import { StatementEmail, type StatementEmailProps } from "./statement";
+import { ReceiptEmail, type ReceiptEmailProps } from "./receipt";
+import { DuesReminderEmail, type DuesReminderEmailProps } from "./dues-reminder";
 
 // Every template the outbox can send, by name. A row stores the name and the props; the worker
 // renders when it sends, so a template fix applies to messages still waiting.
@@ -10,6 +17,13 @@ export type EmailTemplates = {
   "magic-link": MagicLinkProps;
   invitation: InvitationProps;
   notice: NoticeProps;
+  "grounding-notice": GroundingNoticeProps;
+  bulletin: BulletinProps;
+  "bulletin-reminder": BulletinReminderProps;
+  "document-expiry": DocumentExpiryProps;
+  statement: StatementEmailProps;
+  receipt: ReceiptEmailProps;
+  "dues-reminder": DuesReminderEmailProps;
 };
 export type EmailTemplateName = keyof EmailTemplates;
 
@@ -17,6 +31,13 @@ const components: { [K in EmailTemplateName]: (props: EmailTemplates[K]) => Reac
   "magic-link": (p) => <MagicLinkEmail {...p} />,
   invitation: (p) => <InvitationEmail {...p} />,
   notice: (p) => <NoticeEmail {...p} />,
+  "grounding-notice": (p) => <GroundingNoticeEmail {...p} />,
+  bulletin: (p) => <BulletinEmail {...p} />,
+  "bulletin-reminder": (p) => <BulletinReminderEmail {...p} />,
+  "document-expiry": (p) => <DocumentExpiryEmail {...p} />,
+  statement: (p) => <StatementEmail {...p} />,
+  receipt: (p) => <ReceiptEmail {...p} />,
+  "dues-reminder": (p) => <DuesReminderEmail {...p} />,
 };
 
 export function isEmailTemplateName(name: string): name is EmailTemplateName {

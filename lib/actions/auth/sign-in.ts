@@ -1,5 +1,6 @@
 "use server";
 import { AuthError, CredentialsSignin } from "next-auth";
+import { redirect } from "next/navigation";
 import { signIn } from "@/auth";
 import { zodFieldErrors } from "@/lib/actions/create-action";
 import type { ActionState } from "@/lib/actions/action-state";
@@ -31,12 +32,13 @@ export async function requestMagicLink(_prev: ActionState, formData: FormData): 
   const parsed = magicLinkSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: zodFieldErrors(parsed.error) };
   try {
-    await signIn("email", { email: parsed.data.email, redirectTo: safeCallbackUrl(parsed.data.callbackUrl ?? "/clubs") });
+    await signIn("email", { email: parsed.data.email, redirectTo: safeCallbackUrl(parsed.data.callbackUrl ?? "/clubs"), redirect: false });
   } catch (error) {
     if (error instanceof AuthError) {
       return { ok: false, message: "The sign-in link could not be prepared. Try again in a minute.", fieldErrors: {} };
     }
     throw error;
   }
-  return { ok: true, message: "If an account uses that address, a sign-in link is on its way.", fieldErrors: {} };
+  // Our own page, whether or not an account exists: the answer reveals nothing.
+  redirect("/sign-in/check-email");
 }

@@ -1,0 +1,23 @@
+import { bulletinAckStats, getBulletin } from "@/db/queries/safety-bulletins";
+import { apiError, withClub } from "@/lib/server/api";
+import { toCsv } from "@/lib/safety/csv";
+
+export const dynamic = "force-dynamic";
+
+/** The acknowledgement list as CSV (RFC 4180), one row per audience member. */
+export async function GET(_req: Request, { params }: { params: Promise<{ club: string; bulletinId: string }> }) {
+  const { club, bulletinId } = await params;
+  return withClub(club, ["export", "Bulletin"], (ctx) => {
+    const bulletin = getBulletin(ctx.db, ctx.club.id, bulletinId);
+    if (!bulletin || bulletin.status !== "published") return apiError("not_found", "Not found.");
+    const stats = bulletinAckStats(ctx.db, ctx.club.id, bulletin);
+    const csv = toCsv(
+      ["Bulletin", "Version", "Member", "E-mail", "Acknowledged", "Acknowledged at (UTC)", "Deadline"],
+      stats.rows.map((r) => [bulletin.title, bulletin.version, r.name ?? "", r.email, r.acknowledgedAt ? "yes" : "no", r.acknowledgedAt?.toISOString() ?? "", bulletin.acknowledgeBy ?? ""]),
+    );
+    const name = `acknowledgements-${bulletin.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "bulletin"}-v${bulletin.version}.csv`;
+    return new Response(csv, {
+      headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="${name}"`, "Cache-Control": "no-store" },
+    });
+  });
+}

@@ -1,0 +1,52 @@
+import "server-only";
+import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { alias } from "drizzle-orm/sqlite-core";
+import type { Db, Tx } from "@/db/client";
+import { aircraft, squawkEvents, squawks, users, type SquawkRow } from "@/db/schema";
+
+type Handle = Db | Tx;
+
+export function getSquawk(db: Handle, clubId: string, squawkId: string): SquawkRow | undefined {
+  return db.select().from(squawks).where(and(eq(squawks.clubId, clubId), eq(squawks.id, squawkId))).get();
+}
+
+export type SquawkListRow = SquawkRow & { registration: string; reportedByName: string | null };
+
+export function listSquawks(db: Handle, clubId: string, opts: { aircraftId?: string; status?: "open" | "closed"; limit?: number } = {}): SquawkListRow[] {
+  const rows = db
+    .select({ squawk: squawks, registration: aircraft.registration, reportedByName: users.name })
+    .from(squawks)
+    .innerJoin(aircraft, and(eq(aircraft.id, squawks.aircraftId), eq(aircraft.clubId, squawks.clubId)))
+    .leftJoin(users, eq(users.id, squawks.reportedById))
+    .where(
+      and(
+        eq(squawks.clubId, clubId),
+        opts.aircraftId ? eq(squawks.aircraftId, opts.aircraftId) : undefined,
+        opts.status ? eq(squawks.status, opts.status) : undefined,
+      ),
+    )
+    .orderBy(desc(squawks.createdAt))
+    .limit(opts.limit ?? 200)
+    .all();
+  return rows.map((r) => ({ ...r.squawk, registration: r.registration, reportedByName: r.reportedByName }));
+}
+
+export type SquawkEventView = { id: string; squawkId: string; kind: "reported" | "triaged" | "closed"; fromTriage: string | null; toTriage: string | null; note: string | null; actorName: string | null; at: Date };
+
+export function listSquawkEvents(db: Handle, clubId: string, squawkIds: string[]): SquawkEventView[] {
+  if (squawkIds.length === 0) return [];
+  const actor = alias(users, "actor");
+  return db
+    .select({ id: squawkEvents.id, squawkId: squawkEvents.squawkId, kind: squawkEvents.kind, fromTriage: squawkEvents.fromTriage, toTriage: squawkEvents.toTriage, note: squawkEvents.note, actorName: actor.name, at: squawkEvents.createdAt })
+    .from(squawkEvents)
+    .leftJoin(actor, eq(actor.id, squawkEvents.actorId))
+    .where(and(eq(squawkEvents.clubId, clubId), inArray(squawkEvents.squawkId, squawkIds)))
+    .orderBy(asc(squawkEvents.createdAt))
+    .all();
+}
+
+export function recordSquawkEvent(tx: Tx, event: { clubId: string; squawkId: string; kind: "reported" | "triaged" | "closed"; actorId: string; fromTriage?: string | null; toTriage?: string | null; note?: string | null }): void {
+  tx.insert(squawkEvents)
+    .values({ clubId: event.clubId, squawkId: event.squawkId, kind: event.kind, actorId: event.actorId, fromTriage: event.fromTriage ?? null, toTriage: event.toTriage ?? null, note: event.note ?? null })
+    .run();
+}

@@ -1,0 +1,31 @@
+"use server";
+import { outsideFlightEntries } from "@/db/schema";
+import { clubAction } from "@/lib/actions/create-action";
+import { ActionError } from "@/lib/actions/action-state";
+import { clubToday } from "@/lib/actions/safety/bulletin-publishing";
+import { compareIsoDates } from "@/lib/dates";
+import { own } from "@/permissions";
+import { outsideFlightSchema } from "@/lib/validation/safety";
+
+/** Landings flown outside the club's own log (another club, a rental) count toward currency. */
+export const recordOutsideFlight = clubAction({
+  schema: outsideFlightSchema,
+  permission: (ability, _input, ctx) => ability.can("create", own("Currency", ctx.user.id)),
+  success: "Flight added to your currency.",
+  run(tx, ctx, input) {
+    if (compareIsoDates(input.flownOn, clubToday(ctx)) > 0) throw new ActionError("Some fields need attention; nothing was saved.", { flownOn: ["The date cannot be in the future."] });
+    tx.insert(outsideFlightEntries)
+      .values({
+        clubId: ctx.club.id,
+        userId: ctx.user.id,
+        flownOn: input.flownOn,
+        aircraftDescription: input.aircraftDescription,
+        typeGroup: input.typeGroup ?? null,
+        dayLandings: input.dayLandings,
+        nightFullStopLandings: input.nightFullStopLandings,
+        note: input.note ?? null,
+      })
+      .run();
+    return { revalidate: [`/clubs/${ctx.club.slug}/me`] };
+  },
+});

@@ -1,0 +1,46 @@
+"use server";
+import { and, eq } from "drizzle-orm";
+import { squawks } from "@/db/schema";
+import { getSquawk, recordSquawkEvent } from "@/db/queries/fleet-squawks";
+import { clubAction } from "@/lib/actions/create-action";
+import { ActionError } from "@/lib/actions/action-state";
+import { writeAudit } from "@/lib/server/audit";
+import { triageSquawkSchema } from "@/lib/validation/fleet";
+import { fleetPaths } from "./paths";
+
+const MESSAGES = {
+  grounding: "Triaged as grounding: the aircraft shows grounded until the squawk is closed with a return to service.",
+  deferred: "Deferred with its limitation (14 CFR 91.213(d)): the aircraft shows flyable with limits.",
+  note: "Kept as a note: it stays on the aircraft's list without limiting it.",
+} as const;
+
+export const triageSquawk = clubAction({
+  schema: triageSquawkSchema,
+  permission: ["triage", "Squawk"],
+  success: "Squawk triaged.",
+  run(tx, { club, user }, input) {
+    const current = getSquawk(tx, club.id, input.squawkId);
+    if (!current) throw new ActionError("That squawk was not found in this club.", {}, "not_found");
+    if (current.status !== "open") throw new ActionError("That squawk is closed; report a new one if the problem is back.", {}, "conflict");
+    const deferred = input.triage === "deferred";
+    const change = {
+      triage: input.triage,
+      limitation: deferred ? input.limitation : null,
+      placarded: deferred ? input.placarded : false,
+      deferralDeterminedBy: deferred ? input.deferralDeterminedBy : null,
+    };
+    tx.update(squawks).set(change).where(and(eq(squawks.clubId, club.id), eq(squawks.id, current.id))).run();
+    const note = [deferred ? `Limitation: ${input.limitation}. Determined by ${input.deferralDeterminedBy}; placarded inoperative.` : null, input.note].filter(Boolean).join(" ");
+    recordSquawkEvent(tx, { clubId: club.id, squawkId: current.id, kind: "triaged", actorId: user.id, fromTriage: current.triage, toTriage: input.triage, note: note || null });
+    writeAudit(tx, {
+      clubId: club.id,
+      actorId: user.id,
+      action: "squawk.triage",
+      subjectType: "Squawk",
+      subjectId: current.id,
+      before: { triage: current.triage, limitation: current.limitation, placarded: current.placarded },
+      after: change,
+    });
+    return { message: MESSAGES[input.triage], revalidate: fleetPaths(club.slug, current.aircraftId) };
+  },
+});

@@ -1,0 +1,137 @@
+import { and, eq, inArray, max } from "drizzle-orm";
+import { clubs, journalEntries, journalLines, ledgerAccounts, reconciliationPeriods, type EntryKind } from "@/db/schema";
+import { isIsoDate, type IsoDate } from "@/lib/dates";
+import { assertBalanced, reversalOf } from "@/lib/money";
+import type { DbLike } from "./accounts";
+import { LedgerError, PeriodLockedError } from "./errors";
+
+export type PostLine = { accountId: string; debitMinor?: number; creditMinor?: number; memo?: string };
+
+export type PostEntryInput = {
+  date: IsoDate;
+  kind: EntryKind;
+  memo: string;
+  lines: readonly PostLine[];
+  memberUserId?: string | null;
+  dueOn?: IsoDate | null;
+  sourceType?: string;
+  sourceId?: string;
+  /** Posting twice with the same key posts once; the second call returns the first entry. */
+  sourceKey?: string;
+  reference?: string | null;
+  reversesEntryId?: string;
+  createdById?: string | null;
+};
+
+export type PostedEntry = { entryId: string; created: boolean };
+
+/** The last day of the latest locked (reconciled) period, or null when nothing is locked. */
+export function lockedThrough(tx: DbLike, clubId: string): IsoDate | null {
+  const row = tx
+    .select({ end: max(reconciliationPeriods.periodEnd) })
+    .from(reconciliationPeriods)
+    .where(and(eq(reconciliationPeriods.clubId, clubId), eq(reconciliationPeriods.locked, true)))
+    .get();
+  return row?.end ?? null;
+}
+
+/** Throws PeriodLockedError when `date` is inside a locked period. */
+export function assertDateOpen(tx: DbLike, clubId: string, date: IsoDate): void {
+  const through = lockedThrough(tx, clubId);
+  if (through && date <= through) throw new PeriodLockedError(date, through);
+}
+
+export function findEntryBySourceKey(tx: DbLike, clubId: string, sourceKey: string): string | null {
+  const row = tx.select({ id: journalEntries.id }).from(journalEntries).where(and(eq(journalEntries.clubId, clubId), eq(journalEntries.sourceKey, sourceKey))).get();
+  return row?.id ?? null;
+}
+
+/**
+ * Posts one balanced entry in the club's currency. Refuses an unbalanced entry
+ * (assertBalanced), a date inside a locked period, and accounts of another club. With a
+ * sourceKey it is idempotent: a key already posted returns that entry and writes nothing.
+ * Call it inside the caller's transaction.
+ */
+export function postEntry(tx: DbLike, clubId: string, entry: PostEntryInput): PostedEntry {
+  if (entry.sourceKey) {
+    const existing = findEntryBySourceKey(tx, clubId, entry.sourceKey);
+    if (existing) return { entryId: existing, created: false };
+  }
+  assertBalanced(entry.lines);
+  if (!isIsoDate(entry.date)) throw new LedgerError(`"${entry.date}" is not a calendar date.`, "invalid", "date");
+  if (entry.dueOn && !isIsoDate(entry.dueOn)) throw new LedgerError(`"${entry.dueOn}" is not a calendar date.`, "invalid", "dueOn");
+  assertDateOpen(tx, clubId, entry.date);
+  const club = tx.select({ currency: clubs.currency }).from(clubs).where(eq(clubs.id, clubId)).get();
+  if (!club) throw new LedgerError("That club was not found.", "not-found");
+  const accountIds = [...new Set(entry.lines.map((l) => l.accountId))];
+  const known = tx.select({ id: ledgerAccounts.id }).from(ledgerAccounts).where(and(eq(ledgerAccounts.clubId, clubId), inArray(ledgerAccounts.id, accountIds))).all();
+  if (known.length !== accountIds.length) throw new LedgerError("An account of the entry does not belong to this club.", "not-found");
+  const [row] = tx
+    .insert(journalEntries)
+    .values({
+      clubId,
+      entryDate: entry.date,
+      kind: entry.kind,
+      memo: entry.memo,
+      currency: club.currency,
+      memberUserId: entry.memberUserId ?? null,
+      dueOn: entry.dueOn ?? null,
+      sourceType: entry.sourceType ?? null,
+      sourceId: entry.sourceId ?? null,
+      sourceKey: entry.sourceKey ?? null,
+      reference: entry.reference ?? null,
+      reversesEntryId: entry.reversesEntryId ?? null,
+      createdById: entry.createdById ?? null,
+    })
+    .returning({ id: journalEntries.id })
+    .all();
+  const entryId = row!.id;
+  tx.insert(journalLines)
+    .values(
+      entry.lines.map((l, i) => ({
+        clubId,
+        entryId,
+        lineNo: i + 1,
+        accountId: l.accountId,
+        debitMinor: l.debitMinor ?? 0,
+        creditMinor: l.creditMinor ?? 0,
+        currency: club.currency,
+        memo: l.memo ?? null,
+      })),
+    )
+    .run();
+  return { entryId, created: true };
+}
+
+export type ReverseOptions = { date?: IsoDate; memo?: string; createdById?: string | null; kind?: EntryKind };
+
+/**
+ * Posts the reversing entry of `entryId` (every line on the other side). Dated like the
+ * original unless `date` is given; when the original sits in a locked period, pass today.
+ * An entry is reversed at most once, and a reversal is never itself reversed.
+ */
+export function reverseEntry(tx: DbLike, clubId: string, entryId: string, opts: ReverseOptions = {}): PostedEntry {
+  const original = tx.select().from(journalEntries).where(and(eq(journalEntries.clubId, clubId), eq(journalEntries.id, entryId))).get();
+  if (!original) throw new LedgerError("That entry was not found in this club.", "not-found");
+  if (original.reversesEntryId) throw new LedgerError("This entry is itself a reversal; post a new entry instead.", "already-reversed");
+  const already = tx.select({ id: journalEntries.id }).from(journalEntries).where(and(eq(journalEntries.clubId, clubId), eq(journalEntries.reversesEntryId, entryId))).get();
+  if (already) throw new LedgerError("This entry has already been reversed.", "already-reversed");
+  const lines = tx.select().from(journalLines).where(and(eq(journalLines.clubId, clubId), eq(journalLines.entryId, entryId))).orderBy(journalLines.lineNo).all();
+  const reversal = reversalOf(
+    { id: original.id, date: original.entryDate, memo: original.memo, lines: lines.map((l) => ({ accountId: l.accountId, debitMinor: l.debitMinor, creditMinor: l.creditMinor, memo: l.memo ?? undefined })) },
+    { date: opts.date, memo: opts.memo },
+  );
+  return postEntry(tx, clubId, {
+    date: reversal.date,
+    kind: opts.kind ?? "reversal",
+    memo: reversal.memo ?? `Reversal of ${original.memo}`,
+    lines: reversal.lines.map((l) => ({ accountId: String(l.accountId), debitMinor: l.debitMinor, creditMinor: l.creditMinor, memo: l.memo })),
+    memberUserId: original.memberUserId,
+    sourceType: original.sourceType ?? undefined,
+    sourceId: original.sourceId ?? undefined,
+    sourceKey: `reversal:${original.id}`,
+    reference: original.reference,
+    reversesEntryId: original.id,
+    createdById: opts.createdById ?? null,
+  });
+}

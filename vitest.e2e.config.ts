@@ -1,0 +1,17 @@
+import path from "node:path";
+import { defineConfig } from "vitest/config";
+
+const alias = { "@": import.meta.dirname, "server-only": path.join(import.meta.dirname, "tests/fixtures/server-only.ts") };
+
+// Browser tests: one production build, one server, run file by file against it.
+export default defineConfig({
+  resolve: { alias },
+  test: {
+    name: "e2e",
+    include: ["tests/e2e/**/*.test.ts"],
+    globalSetup: ["tests/e2e/global-setup.ts"],
+    fileParallelism: false,
+    testTimeout: 90_000,
+    hookTimeout: 180_000,
+  },
+});
