@@ -5,14 +5,18 @@ const alias = { "@": import.meta.dirname, "server-only": path.join(import.meta.d
 
 export default defineConfig({
   resolve: { alias },
+  // tsconfig keeps JSX for Next; tests compile it with the automatic runtime.
+  oxc: { jsx: { runtime: "automatic" } },
   test: {
     projects: [
       {
         resolve: { alias },
+        oxc: { jsx: { runtime: "automatic" } },
         test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" },
       },
       {
         resolve: { alias },
+        oxc: { jsx: { runtime: "automatic" } },
         test: {
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],

@@ -6,6 +6,8 @@ const alias = { "@": import.meta.dirname, "server-only": path.join(import.meta.d
 // Browser tests: one production build, one server, run file by file against it.
 export default defineConfig({
   resolve: { alias },
+  // tsconfig keeps JSX for Next; tests compile it with the automatic runtime.
+  oxc: { jsx: { runtime: "automatic" } },
   test: {
     name: "e2e",
     include: ["tests/e2e/**/*.test.ts"],

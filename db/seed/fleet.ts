@@ -7,7 +7,7 @@ import { eq, inArray } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { aircraft, clubs, flights, inspectionCompletions, inspectionItems, squawkEvents, squawks, type Club } from "@/db/schema";
 import { calendarDue, roundHours } from "@/lib/airworthiness";
-import { addDays, isoDateInTimeZone, parseIsoDate, shiftMonth, formatIsoDate, lastDayOfMonth } from "@/lib/dates";
+import { addDays, daysBetween, formatIsoDate, isoDateInTimeZone, lastDayOfMonth, parseIsoDate, shiftMonth } from "@/lib/dates";
 import { defaultItemColumns } from "@/lib/fleet/default-items";
 import { DEMO_PEOPLE } from "./scenario";
 import { flightHistory } from "./fleet-history";
@@ -66,14 +66,36 @@ function clubMembers(key: string, userIds: Record<string, string>): string[] {
   return DEMO_PEOPLE.filter((p) => p.clubs[key]?.includes("member")).map((p) => userIds[p.email]!);
 }
 
-function completionsFor(p: Plane, key: string, today: string, tach: number): { doneOn: string; hours: number | null; expiresOn?: string }[] {
+type History = ReturnType<typeof flightHistory>;
+const TACH_PER_DAY = 0.55; // before the logged history: the fleet's average use, invented
+
+/** Tach reading on a date, from the flight history (or extrapolated before it). */
+function tachOn(history: History, date: string): number {
+  const first = history[0]!;
+  if (date < first.flownOn) return roundHours(first.tachOut - daysBetween(date, first.flownOn) * TACH_PER_DAY);
+  const flight = history.find((f) => f.flownOn >= date) ?? history.at(-1)!;
+  return flight.tachOut;
+}
+
+/** Date on which the tach read `hours`, from the history (or extrapolated before it). */
+function dateAtTach(history: History, hours: number): string {
+  const first = history[0]!;
+  if (hours < first.tachOut) return addDays(first.flownOn, -Math.ceil((first.tachOut - hours) / TACH_PER_DAY));
+  return (history.find((f) => f.tachIn >= hours) ?? history.at(-1)!).flownOn;
+}
+
+function completionsFor(p: Plane, key: string, today: string, history: History): { doneOn: string; hours: number | null; expiresOn?: string }[] {
+  const dated = (doneOn: string) => ({ doneOn, hours: tachOn(history, doneOn) });
+  const counted = (hoursAgo: number) => {
+    const hours = roundHours(p.tach - hoursAgo);
+    return { doneOn: dateAtTach(history, hours), hours };
+  };
   const annualOn = monthsBefore(today, p.annualMonthsAgo);
   switch (key) {
     case "annual":
-      // the one before, too, so the history has depth
-      return [{ doneOn: monthsBefore(today, p.annualMonthsAgo + 12), hours: roundHours(tach - 260) }, { doneOn: annualOn, hours: roundHours(tach - 20 * p.annualMonthsAgo) }];
+      return [dated(monthsBefore(today, p.annualMonthsAgo + 12)), dated(annualOn)];
     case "100-hour":
-      return p.hundredLeft === undefined ? [] : [{ doneOn: addDays(today, -Math.round((100 - p.hundredLeft) / 2)), hours: roundHours(tach - (100 - p.hundredLeft)) }];
+      return p.hundredLeft === undefined ? [] : [counted(100 - p.hundredLeft)];
     case "elt":
       return [{ doneOn: annualOn, hours: null }];
     case "elt-battery":
@@ -85,7 +107,7 @@ function completionsFor(p: Plane, key: string, today: string, tach: number): { d
     case "vor-check":
       return p.ifr ? [{ doneOn: addDays(today, -9), hours: null }] : [];
     case "oil-change":
-      return [{ doneOn: addDays(today, -Math.round((50 - p.oilLeft) * 1.5)), hours: roundHours(tach - (50 - p.oilLeft)) }];
+      return [counted(50 - p.oilLeft)];
     default:
       return [];
   }
@@ -107,8 +129,10 @@ function seedPlane(tx: Parameters<Parameters<Db["transaction"]>[0]>[0], club: Cl
   const cols = defaultItemColumns({ months: club.settings.oilChangeMonths, hours: club.settings.oilChangeHours });
   const items = tx.insert(inspectionItems).values(cols.map((c) => ({ ...c, clubId: club.id, aircraftId }))).returning({ id: inspectionItems.id, key: inspectionItems.key }).all();
   const mechanics = MECHANICS[key]!;
+  const metric = club.unitSystem === "metric";
+  const history = flightHistory({ count: 40, days: 70, today, hobbs: p.hobbs, tach: p.tach, pilots: members.length, seed: index * 97 + p.hobbs, metric });
   const done = items.flatMap((item, i) =>
-    completionsFor(p, item.key, today, p.tach).map((c) => ({
+    completionsFor(p, item.key, today, history).map((c) => ({
       clubId: club.id, aircraftId, itemId: item.id, doneOn: c.doneOn, hours: c.hours, expiresOn: c.expiresOn ?? null,
       mechanicName: mechanics[i % mechanics.length]!.name, mechanicCertificate: mechanics[i % mechanics.length]!.certificate,
       notes: item.key === "annual" ? "Found airworthy. Logbook entry signed." : null, recordedById: mechanicUser ?? null,
@@ -116,8 +140,6 @@ function seedPlane(tx: Parameters<Parameters<Db["transaction"]>[0]>[0], club: Cl
   );
   if (done.length) tx.insert(inspectionCompletions).values(done).run();
 
-  const metric = club.unitSystem === "metric";
-  const history = flightHistory({ count: 36, days: 75, today, hobbs: p.hobbs, tach: p.tach, pilots: members.length, seed: index * 97 + p.hobbs, metric });
   tx.insert(flights)
     .values(history.map(({ pilotIndex, ...f }) => ({ ...f, clubId: club.id, aircraftId, pilotId: members[pilotIndex]!, fuelUnit: metric ? ("l" as const) : ("gal" as const), oilUnit: metric ? ("l" as const) : ("qt" as const), recordedById: members[pilotIndex]! })))
     .run();

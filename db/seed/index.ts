@@ -5,9 +5,11 @@ import { databaseFile, openDatabase, type Db } from "@/db/client";
 import { migrateDatabase } from "@/db/migrate";
 import { clubs } from "@/db/schema";
 import { seedFoundation } from "./foundation";
+import { seedFleet } from "./fleet";
 
 export async function seedDemo(db: Db): Promise<void> {
-  await seedFoundation(db);
+  const foundation = await seedFoundation(db);
+  seedFleet(db, foundation);
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.argv[1])) {

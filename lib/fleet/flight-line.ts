@@ -56,6 +56,21 @@ export function sortDue(list: DueSummary[]): DueSummary[] {
   );
 }
 
+/**
+ * What the flight line shows as "next due": everything overdue, unknown or due soon, and
+ * otherwise the nearest item by date and the nearest by hours (they are not comparable, so one
+ * of each), up to `max` rows in due-list order.
+ */
+export function pickNextDue(due: DueSummary[], max = 4): DueSummary[] {
+  const picked = new Set(due.filter((d) => d.overdue || d.incomplete || d.dueSoon));
+  const byDate = due.find((d) => !picked.has(d) && d.daysLeft !== null);
+  const far = Number.POSITIVE_INFINITY;
+  const byHours = [...due].filter((d) => !picked.has(d) && d.hoursLeft !== null).sort((a, b) => (a.hoursLeft ?? far) - (b.hoursLeft ?? far))[0];
+  if (byDate) picked.add(byDate);
+  if (byHours) picked.add(byHours);
+  return due.filter((d) => picked.has(d)).slice(0, max);
+}
+
 /** The due list of one aircraft's applicable items. */
 export function summarizeDue(items: InspectionItem[], flags: ReturnType<typeof toFlags>, today: string, hours: number | null, soon: DueSoonThresholds): DueSummary[] {
   const list: DueSummary[] = [];

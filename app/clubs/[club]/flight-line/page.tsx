@@ -1,0 +1,24 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { FlightLineBoard } from "@/components/fleet/flight-line-board";
+import { PageHeader } from "@/components/ui/page-header";
+import { SafetyCaution } from "@/components/ui/safety-caution";
+import { getFlightLine } from "@/db/queries/fleet-status";
+import { requireClubContext } from "@/lib/server/club-context";
+
+export const metadata: Metadata = { title: "Flight line" };
+export const dynamic = "force-dynamic";
+
+export default async function FlightLinePage({ params }: { params: Promise<{ club: string }> }) {
+  const { club: slug } = await params;
+  const { db, club, ability } = await requireClubContext(slug);
+  if (!ability.can("read", "Aircraft")) notFound();
+  const initial = getFlightLine(db, club);
+  return (
+    <div className="max-w-6xl">
+      <PageHeader title="Flight line" lead={`Every aircraft of ${club.name} with its status and the reasons for it, on ${initial.today}.`} />
+      <div className="mb-4"><SafetyCaution compact /></div>
+      <FlightLineBoard slug={club.slug} initial={initial} />
+    </div>
+  );
+}

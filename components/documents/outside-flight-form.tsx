@@ -1,0 +1,32 @@
+"use client";
+import { useActionState } from "react";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { initialActionState } from "@/lib/actions/action-state";
+import { recordOutsideFlight } from "@/lib/actions/documents/record-outside-flight";
+
+export function OutsideFlightForm({ slug, today, typeGroups }: { slug: string; today: string; typeGroups: string[] }) {
+  const [state, action] = useActionState(recordOutsideFlight, initialActionState);
+  const e = state.fieldErrors;
+  return (
+    <form action={action} noValidate aria-label="Add a flight from elsewhere" key={state.ok ? `${state.message}-${Date.now()}` : "outside"}>
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <div className="grid gap-x-4 sm:grid-cols-2">
+        <Field label="Date flown" name="flownOn" type="date" max={today} errors={e.flownOn} />
+        <Field label="Aircraft" name="aircraftDescription" maxLength={120} errors={e.aircraftDescription} hint="Type, and where you flew it." />
+        <Field label="Day landings" name="dayLandings" type="number" min={0} max={99} inputMode="numeric" defaultValue="0" errors={e.dayLandings} />
+        <Field label="Night full-stop landings" name="nightFullStopLandings" type="number" min={0} max={99} inputMode="numeric" defaultValue="0" errors={e.nightFullStopLandings} />
+        <SelectField label="Same type group as a club aircraft? (optional)" name="typeGroup" defaultValue="" errors={e.typeGroup}>
+          <option value="">No / not sure</option>
+          {typeGroups.map((g) => (
+            <option key={g} value={g}>{g}</option>
+          ))}
+        </SelectField>
+        <Field label="Note (optional)" name="note" maxLength={500} errors={e.note} />
+      </div>
+      <SubmitButton>Add flight</SubmitButton>
+    </form>
+  );
+}

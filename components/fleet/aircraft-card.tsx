@@ -1,0 +1,68 @@
+import Link from "next/link";
+import { StatusBadge } from "@/components/ui/status-badge";
+import { formatHours } from "@/lib/airworthiness";
+import { pickNextDue } from "@/lib/fleet/flight-line";
+import { TRIAGE_WORDS } from "@/lib/fleet/status-words";
+import type { FlightLineEntry } from "@/lib/fleet/types";
+import { dueLabel, dueText, dueTone } from "./due-text";
+
+function meter(value: number | null): string {
+  return value === null ? "not recorded" : formatHours(value);
+}
+
+/** One aircraft on the flight line: status word and shape, every reason, next due, open squawks. */
+export function AircraftCard({ entry, slug }: { entry: FlightLineEntry; slug: string }) {
+  const a = entry.aircraft;
+  const href = `/clubs/${slug}/aircraft/${a.id}`;
+  const headingId = `ac-${a.id}`;
+  const next = pickNextDue(entry.due);
+  return (
+    <article className="card flex min-w-0 flex-col gap-3" aria-labelledby={headingId} data-registration={a.registration} data-status={entry.status}>
+      <header className="flex flex-wrap items-start justify-between gap-2">
+        <div className="min-w-0">
+          <h2 id={headingId} className="text-xl font-bold">
+            <Link href={href}>{a.registration}</Link>
+          </h2>
+          <p className="text-sm text-ink-700">{a.make} {a.model}{a.homeField ? ` · ${a.homeField}` : ""}</p>
+        </div>
+        <StatusBadge status={entry.status} large />
+      </header>
+
+      <section aria-label={`Reasons for ${a.registration}`}>
+        {entry.reasons.length === 0 ? (
+          <p className="text-sm text-ink-700">No open squawks, notices or due items on record.</p>
+        ) : (
+          <ul className="space-y-1 text-sm">
+            {entry.reasons.map((r, i) => (
+              <li key={`${r.code}-${i}`} className={`flex gap-2 ${r.grounding ? "font-bold text-stop-800" : "text-ink-900"}`}>
+                <span aria-hidden="true">{r.grounding ? "■" : "•"}</span>
+                <span className="min-w-0 break-words">{r.grounding ? <span className="sr-only">Grounding reason: </span> : null}{r.text}</span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+
+      {next.length ? (
+        <section aria-label={`Next due for ${a.registration}`}>
+          <h3 className="text-sm font-bold uppercase tracking-wide text-ink-500">Next due</h3>
+          <ul className="mt-1 space-y-0.5 text-sm">
+            {next.map((d) => (
+              <li key={d.key} className={dueTone(d)}>
+                {dueLabel(d) ? `${dueLabel(d)}: ` : ""}{d.name} {dueText(d)}
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+
+      <footer className="mt-auto flex flex-wrap items-center justify-between gap-2 border-t border-sand-200 pt-2 text-sm text-ink-700">
+        <span className="tabular font-mono">Hobbs {meter(a.hobbs)} · Tach {meter(a.tach)}</span>
+        <Link href={`${href}#squawks`}>
+          {entry.openSquawks.length === 0 ? "No open squawks" : `${entry.openSquawks.length} open squawk${entry.openSquawks.length === 1 ? "" : "s"}`}
+          {entry.openSquawks.some((s) => s.triage === "untriaged") ? ` (${TRIAGE_WORDS.untriaged.toLowerCase()})` : ""}
+        </Link>
+      </footer>
+    </article>
+  );
+}

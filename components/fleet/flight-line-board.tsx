@@ -1,0 +1,52 @@
+"use client";
+import { useQuery } from "@tanstack/react-query";
+import type { FlightLineEntry } from "@/lib/fleet/types";
+import { STATUS_WORDS } from "@/lib/fleet/status-words";
+import { StatusShape } from "@/components/ui/status-badge";
+import { AircraftCard } from "./aircraft-card";
+
+export type FlightLineData = { today: string; generatedAt: string; timeZone: string; entries: FlightLineEntry[] };
+
+const REFRESH_MS = 30_000;
+
+function clock(iso: string, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-GB", { timeZone, hour: "2-digit", minute: "2-digit", second: "2-digit", hourCycle: "h23" }).format(new Date(iso));
+}
+
+/** The flight line, kept live from the JSON route; the server-rendered data shows first. */
+export function FlightLineBoard({ slug, initial }: { slug: string; initial: FlightLineData }) {
+  const { data, isError, isFetching } = useQuery({
+    queryKey: ["flight-line", slug],
+    queryFn: async (): Promise<FlightLineData> => {
+      const res = await fetch(`/api/clubs/${slug}/flight-line`, { cache: "no-store" });
+      if (!res.ok) throw new Error(`Flight line ${res.status}`);
+      return (await res.json()) as FlightLineData;
+    },
+    initialData: initial,
+    refetchInterval: REFRESH_MS,
+    refetchOnWindowFocus: true,
+  });
+  const counts = data.entries.reduce<Record<string, number>>((acc, e) => ({ ...acc, [e.status]: (acc[e.status] ?? 0) + 1 }), {});
+  return (
+    <div>
+      <div className="mb-4 flex flex-wrap items-center justify-between gap-2 text-sm">
+        <ul className="flex flex-wrap gap-3" aria-label="Fleet summary">
+          {(["grounded", "unknown", "limited", "flyable"] as const).filter((s) => counts[s]).map((s) => (
+            <li key={s} className="inline-flex items-center gap-1"><StatusShape status={s} size={14} /> {counts[s]} {STATUS_WORDS[s].toLowerCase()}</li>
+          ))}
+        </ul>
+        <p role="status" aria-live="polite" className={isError ? "font-bold text-stop-800" : "text-ink-500"}>
+          {isError
+            ? `Could not refresh. Showing the records as of ${clock(data.generatedAt, data.timeZone)}; they may be out of date.`
+            : `${isFetching ? "Refreshing… " : ""}As of ${clock(data.generatedAt, data.timeZone)} (${data.timeZone}), refreshed every 30 s.`}
+        </p>
+      </div>
+      {data.entries.length === 0 ? <p className="card">No aircraft on the club&apos;s fleet yet.</p> : null}
+      <div className="grid gap-4 lg:grid-cols-2">
+        {data.entries.map((entry) => (
+          <AircraftCard key={entry.aircraft.id} entry={entry} slug={slug} />
+        ))}
+      </div>
+    </div>
+  );
+}
