@@ -52,7 +52,7 @@ export function AckPanel({ slug, bulletinId, initial, canExport, canRemind, curr
                     <span className="inline-flex items-center gap-1 text-sock-700"><ShapeIcon shape="ring" />Not yet</span>
                   )}
                 </td>
-                <td className="px-3 py-2 font-mono tabular">{r.acknowledgedAt ? r.acknowledgedAt.slice(0, 16).replace("T", " ") : "—"}</td>
+                <td className="whitespace-nowrap px-3 py-2 font-mono tabular">{r.acknowledgedAt ? r.acknowledgedAt.slice(0, 16).replace("T", " ") : "—"}</td>
               </tr>
             ))}
             {data.rows.length === 0 ? <tr><td colSpan={3} className="px-3 py-4 text-center text-ink-500">Nobody is in this audience.</td></tr> : null}

@@ -12,6 +12,7 @@ export function clubNavItems(slug: string, ability: AppAbility): NavItem[] {
     { href: `${base}/flights`, label: "Flight log", description: "Meter times and landings", show: ability.can("read", "Flight") },
     { href: `${base}/bookings`, label: "Bookings", description: "Reserve an aircraft", show: ability.can("create", "Booking") },
     { href: `${base}/safety`, label: "Safety", description: "Bulletins, reports, currency", show: ability.can("read", "Bulletin") },
+    { href: `${base}/me`, label: "My currency & documents", description: "Currency, medical, documents, checkouts", show: ability.can("read", "Currency") },
     { href: `${base}/members`, label: "Members", description: "Roster and roles", show: ability.can("read", "Member") },
     { href: `${base}/account`, label: "My account", description: "Balance, statements, pay", show: ability.can("pay", "Account") },
     { href: `${base}/money`, label: "Money", description: "Ledger, billing and reconciliation", show: ability.can("read", "Ledger") },

@@ -6,3 +6,4 @@ export * from "./uploads";
 export * from "./fleet";
 export * from "./safety";
 export * from "./money";
+export * from "./bookings";

@@ -6,10 +6,16 @@ import { migrateDatabase } from "@/db/migrate";
 import { clubs } from "@/db/schema";
 import { seedFoundation } from "./foundation";
 import { seedFleet } from "./fleet";
+import { seedSafety } from "./safety";
+import { seedMoney } from "./money";
+import { seedBookings } from "./bookings";
 
 export async function seedDemo(db: Db): Promise<void> {
   const foundation = await seedFoundation(db);
   seedFleet(db, foundation);
+  seedSafety(db, foundation);
+  seedMoney(db, foundation);
+  seedBookings(db, foundation);
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.argv[1])) {

@@ -57,18 +57,20 @@ export function sortDue(list: DueSummary[]): DueSummary[] {
 }
 
 /**
- * What the flight line shows as "next due": everything overdue, unknown or due soon, and
- * otherwise the nearest item by date and the nearest by hours (they are not comparable, so one
- * of each), up to `max` rows in due-list order.
+ * What the flight line shows as "next due": everything overdue, unknown or due soon, then the
+ * nearest items by date and by hours taken in turn (a date and an hour count are not
+ * comparable, so neither kind crowds out the other), at least `min` rows when there are that
+ * many, in due-list order.
  */
-export function pickNextDue(due: DueSummary[], max = 4): DueSummary[] {
+export function pickNextDue(due: DueSummary[], min = 3): DueSummary[] {
   const picked = new Set(due.filter((d) => d.overdue || d.incomplete || d.dueSoon));
-  const byDate = due.find((d) => !picked.has(d) && d.daysLeft !== null);
   const far = Number.POSITIVE_INFINITY;
-  const byHours = [...due].filter((d) => !picked.has(d) && d.hoursLeft !== null).sort((a, b) => (a.hoursLeft ?? far) - (b.hoursLeft ?? far))[0];
-  if (byDate) picked.add(byDate);
-  if (byHours) picked.add(byHours);
-  return due.filter((d) => picked.has(d)).slice(0, max);
+  const byDate = due.filter((d) => !picked.has(d) && d.daysLeft !== null);
+  const byHours = due.filter((d) => !picked.has(d) && d.hoursLeft !== null).sort((a, b) => (a.hoursLeft ?? far) - (b.hoursLeft ?? far));
+  for (let i = 0; picked.size < min && (i < byDate.length || i < byHours.length); i++) {
+    for (const d of [byDate[i], byHours[i]]) if (d && picked.size < min) picked.add(d);
+  }
+  return due.filter((d) => picked.has(d));
 }
 
 /** The due list of one aircraft's applicable items. */

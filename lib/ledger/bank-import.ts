@@ -6,6 +6,7 @@ import { and, eq } from "drizzle-orm";
 import { bankLines, bankStatements } from "@/db/schema";
 import { parseCsvReport, parseOfxStatement, ReconcileParseError, type CsvMapping } from "@/lib/reconcile";
 import type { DbLike } from "./accounts";
+import { monthRange } from "./months";
 import { LedgerError } from "./errors";
 
 export type ParsedStatementLine = { date: string; amountMinor: number; description: string; reference?: string; fitId?: string };
@@ -35,7 +36,14 @@ export function parseStatementFile(input: { format: "csv" | "ofx"; text: string;
     const report = parseCsvReport(input.text, input.mapping);
     if (report.errors.length) return { ok: false, errors: report.errors.slice(0, 20).map((e) => e.message).concat(report.errors.length > 20 ? [`… and ${report.errors.length - 20} more rows`] : []) };
     const dates = report.lines.map((l) => l.date).sort();
-    return { ok: true, lines: report.lines, periodStart: dates[0] ?? "", periodEnd: dates.at(-1) ?? "", closingBalanceMinor: null };
+    const first = dates[0] ?? "";
+    const last = dates.at(-1) ?? "";
+    // A CSV carries no period: lines all in one month are read as that month's statement.
+    if (first && first.slice(0, 7) === last.slice(0, 7)) {
+      const month = monthRange(first.slice(0, 7));
+      return { ok: true, lines: report.lines, periodStart: month.start, periodEnd: month.end, closingBalanceMinor: null };
+    }
+    return { ok: true, lines: report.lines, periodStart: first, periodEnd: last, closingBalanceMinor: null };
   } catch (error) {
     if (error instanceof ReconcileParseError || error instanceof TypeError) return { ok: false, errors: [error.message] };
     throw error;

@@ -1,7 +1,7 @@
 // Bank reconciliation against the books: which bank-account postings and card payouts a
 // statement line is, and the period report (standard accounting practice: adjusted bank
 // balance = statement + deposits in transit − outstanding cheques = adjusted book balance).
-import { and, eq, inArray, isNull, lte, notExists, sql } from "drizzle-orm";
+import { and, eq, inArray, isNull, lte, ne, notExists, sql } from "drizzle-orm";
 import { bankLines, bankStatements, cardPayouts, journalEntries, journalLines, paymentRefunds, payments, reconciliationMatches } from "@/db/schema";
 import { addDays, type IsoDate } from "@/lib/dates";
 import { autoMatch, reconciliationSummary, type BookItem, type ReconciliationSummary } from "@/lib/reconcile";
@@ -14,7 +14,7 @@ export type PayoutItem = { id: string; cardPayoutId: string; payoutId: string; d
 
 const LATE_BOOKING_DAYS = 10;
 
-/** Bank-account postings not yet matched to any bank line, dated on or before `through`. */
+/** Bank-account postings not yet matched to any bank line, dated on or before `through` (the opening balance aside). */
 export function unmatchedBookLines(tx: DbLike, clubId: string, through: IsoDate): BookLineItem[] {
   const bank = accountId(tx, clubId, "bank");
   return tx
@@ -26,6 +26,7 @@ export function unmatchedBookLines(tx: DbLike, clubId: string, through: IsoDate)
         eq(journalLines.clubId, clubId),
         eq(journalLines.accountId, bank),
         lte(journalEntries.entryDate, through),
+        ne(journalEntries.kind, "opening"),
         notExists(tx.select({ one: sql`1` }).from(reconciliationMatches).where(eq(reconciliationMatches.journalLineId, journalLines.id))),
       ),
     )
@@ -175,7 +176,8 @@ export function periodReport(tx: DbLike, clubId: string, statementId: string): P
   for (const b of book) {
     const amount = b.debit - b.credit;
     bookBalance += amount;
-    if (!b.clearedOn || b.clearedOn > end) uncleared.push({ id: `line:${b.journalLineId}`, journalLineId: b.journalLineId, entryId: b.entryId, date: b.date, amountMinor: amount, memo: b.memo, reference: b.reference, kind: b.kind });
+    // The opening balance is the agreed starting point with the bank, not an item to clear.
+    if (b.kind !== "opening" && (!b.clearedOn || b.clearedOn > end)) uncleared.push({ id: `line:${b.journalLineId}`, journalLineId: b.journalLineId, entryId: b.entryId, date: b.date, amountMinor: amount, memo: b.memo, reference: b.reference, kind: b.kind });
   }
   const lines = tx
     .select({ id: bankLines.id, date: bankLines.postedOn, amountMinor: bankLines.amountMinor, description: bankLines.description, bookedOn: journalEntries.entryDate })

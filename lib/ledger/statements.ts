@@ -55,6 +55,8 @@ export function issueStatements(tx: DbLike, clubId: string, input: { month: stri
     const list = byMember.get(userId) ?? [];
     const f = statementFigures(list.map((m) => ({ entryId: m.entryId, date: m.date, memo: m.memo, amountMinor: m.amountMinor })), start, end);
     if (f.openingMinor === 0 && f.lines.length === 0 && !input.force) continue;
+    const contact = contacts.get(userId);
+    if (!contact) continue;
     const inserted = tx
       .insert(statements)
       .values({ clubId, memberUserId: userId, periodStart: start, periodEnd: end, openingMinor: f.openingMinor, chargesMinor: f.chargesMinor, creditsMinor: f.creditsMinor, closingMinor: f.closingMinor, currency: club.currency, billingRunId: input.billingRunId ?? null, emailedAt: new Date() })
@@ -62,8 +64,6 @@ export function issueStatements(tx: DbLike, clubId: string, input: { month: stri
       .returning({ id: statements.id })
       .all();
     if (inserted.length === 0 && !input.force) continue;
-    const contact = contacts.get(userId);
-    if (!contact) continue;
     const balanceNow = list.reduce((acc, m) => acc + m.amountMinor, 0);
     const urls = statementUrls(club.slug, userId, input.month);
     emails.push({

@@ -61,7 +61,9 @@ export function summarizeCurrency(input: CurrencyInput): { items: CurrencyItem[]
     { key: "flight_review", label: "Flight review", state: documentState(reviewDue, today, input.documentWarnDays), lastDay: reviewDue },
     { key: "medical", label: "Medical", state: documentState(input.medicalExpiresOn, today, input.documentWarnDays), lastDay: input.medicalExpiresOn },
   ];
-  const groups = [...new Map(input.checkoutTypeGroups.map((g) => [normalizeTypeGroup(g), g])).entries()].sort((a, b) => a[1].localeCompare(b[1]));
+  const byKey = new Map<string, string>();
+  for (const g of input.checkoutTypeGroups) if (!byKey.has(normalizeTypeGroup(g))) byKey.set(normalizeTypeGroup(g), g);
+  const groups = [...byKey.entries()].sort((a, b) => a[1].localeCompare(b[1]));
   for (const [key, group] of groups) {
     const flown = input.typeFlights.filter((f) => normalizeTypeGroup(f.typeGroup) === key);
     const r = recencyInType(flown, today, input.recencyDaysInType);

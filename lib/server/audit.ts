@@ -5,7 +5,16 @@ export type AuditAction =
   | "club.create" | "club.settings.update" | "club.admin.assign"
   | "member.invite" | "member.invitation.revoke" | "member.join" | "member.roles.change" | "member.deactivate" | "member.reactivate"
   | "aircraft.create" | "aircraft.update" | "inspection.item.create" | "inspection.item.update" | "inspection.record"
-  | "squawk.triage" | "squawk.close" | "grounding.issue" | "grounding.lift" | "flight.meter.review";
+  | "squawk.triage" | "squawk.close" | "grounding.issue" | "grounding.lift" | "flight.meter.review"
+  | "money.billing.run" | "money.plan.save" | "money.plan.assign" | "money.payment.manual" | "money.payment.refund"
+  | "money.entry.adjust" | "money.entry.reverse" | "money.bank.import" | "money.bank.match" | "money.bank.unmatch"
+  | "money.bank.ignore" | "money.bank.book" | "money.period.lock" | "money.rates.save" | "money.settings.save"
+  | "money.reminders.send" | "money.statement.email"
+  | "bulletin.create" | "bulletin.draft.update" | "bulletin.publish" | "bulletin.remind"
+  | "safety_report.triage" | "safety_report.grounding" | "member_document.record" | "member_document.remind" | "medical.record"
+  | "checkout.record" | "checkout.revoke"
+  | "booking.create" | "booking.change" | "booking.cancel" | "booking.dispatch" | "booking.checkin"
+  | "calendar.link.create" | "calendar.link.revoke" | "weight-balance.profile.update" | "preflight.template.update" | "preflight.record";
 
 export function writeAudit(
   tx: Tx | Db,

@@ -21,7 +21,10 @@ const idField = z.string({ error: "Missing record id." }).trim().min(1, { error:
 const checkbox = z.preprocess((v) => v === "on" || v === "true" || v === "1" || v === true, z.boolean());
 
 /** A file input: nothing chosen (no name, no bytes) is "no file"; anything else is checked by its content later. */
-export const optionalFile = z.unknown().transform((v) => (v instanceof Blob && !(v.size === 0 && (!("name" in v) || !v.name)) ? (v as File) : undefined));
+export const optionalFile = z.preprocess(
+  (v) => (v instanceof Blob && !(v.size === 0 && (!("name" in v) || !v.name)) ? v : undefined),
+  z.custom<File>((v) => v instanceof Blob, { error: "Choose a file." }).optional(),
+);
 
 const typeGroupText = z.string().trim().min(1, { error: "Choose a type group." }).max(60, { error: "Use at most 60 characters for the type group." });
 
@@ -35,8 +38,13 @@ const bulletinFields = {
   attachment: optionalFile,
 };
 
+// Cross-field checks run even when another field already failed, so every message shows at once;
+// each check reads only the fields it names and tolerates their being malformed.
+const always = { when: (payload: { value: unknown }) => typeof payload.value === "object" && payload.value !== null };
+const dateOk = (v: unknown): v is string => typeof v === "string" && isIsoDate(v);
+
 const needsTypeGroup = (v: { audience: string; audienceTypeGroup?: string }) => v.audience !== "type_group" || !!v.audienceTypeGroup;
-const typeGroupIssue = { error: "Choose the type group this bulletin is for.", path: ["audienceTypeGroup"] };
+const typeGroupIssue = { error: "Choose the type group this bulletin is for.", path: ["audienceTypeGroup"], ...always };
 
 export const createBulletinSchema = z
   .object({
@@ -102,8 +110,8 @@ export const recordDocumentSchema = z
     expiresOn: optionalDate("the expiry date"),
     file: optionalFile,
   })
-  .refine((v) => v.kind !== "renters_insurance" || !!v.expiresOn, { error: "Enter the date the policy ends.", path: ["expiresOn"] })
-  .refine((v) => !v.expiresOn || v.expiresOn >= v.issuedOn, { error: "The expiry date cannot be before the issue date.", path: ["expiresOn"] });
+  .refine((v) => v.kind !== "renters_insurance" || !!v.expiresOn, { error: "Enter the date the policy ends.", path: ["expiresOn"], ...always })
+  .refine((v) => !dateOk(v.expiresOn) || !dateOk(v.issuedOn) || v.expiresOn >= v.issuedOn, { error: "The expiry date cannot be before the issue date.", path: ["expiresOn"], ...always });
 
 export const recordMedicalSchema = z
   .object({
@@ -114,9 +122,9 @@ export const recordMedicalSchema = z
     birthDate: optionalDate("your date of birth"),
     limitations: optionalText(500, "Keep the limitations to 500 characters."),
   })
-  .refine((v) => v.kind !== "faa_class" || v.medicalClass !== undefined, { error: "Choose class 1, 2 or 3.", path: ["medicalClass"] })
-  .refine((v) => v.kind !== "basicmed" || !!v.courseDate, { error: "Enter the date you completed the BasicMed course.", path: ["courseDate"] })
-  .refine((v) => !v.birthDate || v.birthDate < v.examDate, { error: "The date of birth must be before the exam date.", path: ["birthDate"] });
+  .refine((v) => v.kind !== "faa_class" || v.medicalClass !== undefined, { error: "Choose class 1, 2 or 3.", path: ["medicalClass"], ...always })
+  .refine((v) => v.kind !== "basicmed" || !!v.courseDate, { error: "Enter the date you completed the BasicMed course.", path: ["courseDate"], ...always })
+  .refine((v) => !dateOk(v.birthDate) || !dateOk(v.examDate) || v.birthDate < v.examDate, { error: "The date of birth must be before the exam date.", path: ["birthDate"], ...always });
 
 export const birthDateSchema = z.object({ birthDate: isoDateField("your date of birth") });
 

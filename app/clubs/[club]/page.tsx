@@ -1,20 +1,25 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { Fragment, type ReactNode } from "react";
+import { HomeCurrency } from "@/components/currency/home-currency";
+import { HomeBulletins } from "@/components/safety/home-bulletins";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
+import { isoDateInTimeZone } from "@/lib/dates";
 import { requireClubContext } from "@/lib/server/club-context";
-import { ROLE_LABELS } from "@/permissions";
+import { own, ROLE_LABELS } from "@/permissions";
 
 export const metadata: Metadata = { title: "Club home" };
 
 export default async function ClubHome({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { club, user, membership, ability } = await requireClubContext(slug);
+  const { db, club, user, membership, ability } = await requireClubContext(slug);
   const base = `/clubs/${club.slug}`;
-  const tiles = [
+  const today = isoDateInTimeZone(new Date(), club.timeZone);
+  const tiles: { title: string; body?: string; href?: string; node?: ReactNode; show: boolean }[] = [
     { title: "Flight line", body: "Each aircraft's status with its reasons, and what comes due next.", href: `${base}/flight-line`, show: ability.can("read", "Aircraft") },
-    { title: "Safety bulletins", body: "Unread bulletins to acknowledge will appear here.", show: ability.can("read", "Bulletin") },
-    { title: "Your currency", body: "Passenger currency, flight review and medical dates will appear here.", show: ability.can("read", "Currency") },
+    { title: "Safety bulletins", node: <HomeBulletins db={db} clubId={club.id} slug={club.slug} userId={user.id} roles={membership.roles} today={today} />, show: ability.can("read", "Bulletin") },
+    { title: "Your currency", node: <HomeCurrency db={db} club={club} userId={user.id} today={today} />, show: ability.can("read", own("Currency", user.id)) },
     { title: "Your account", body: "Your balance, statements and the pay button will appear here.", show: ability.can("pay", "Account") },
     { title: "Members", body: "The roster, roles and invitations.", href: `${base}/members`, show: ability.can("read", "Member") },
   ].filter((t) => t.show);
@@ -23,7 +28,7 @@ export default async function ClubHome({ params }: { params: Promise<{ club: str
       <PageHeader title={club.name} lead={`Welcome, ${user.name ?? user.email}. You are here as ${membership.roles.map((r) => ROLE_LABELS[r].toLowerCase()).join(", ")}.`} />
       <SafetyCaution />
       <section aria-label="At a glance" className="mt-5 grid gap-4 sm:grid-cols-2">
-        {tiles.map((tile) => (
+        {tiles.map((tile) => tile.node ? <Fragment key={tile.title}>{tile.node}</Fragment> : (
           <article key={tile.title} className="card">
             <h2 className="text-lg font-bold">{tile.href ? <Link href={tile.href}>{tile.title}</Link> : tile.title}</h2>
             <p className="mt-1 text-ink-700">{tile.body}</p>

@@ -1,0 +1,33 @@
+import { NextResponse } from "next/server";
+import { journalLinesForExport, listJournal } from "@/db/queries/money-ledger";
+import { minorToDecimalString, currencyExponent } from "@/lib/money";
+import { toCsv } from "@/lib/ledger/csv-export";
+import { apiError, withClub } from "@/lib/server/api";
+import { isoDateField } from "@/lib/validation/money";
+
+export const dynamic = "force-dynamic";
+
+/** The club's journal as JSON, or every line as CSV with ?format=csv (needs "export"). */
+export async function GET(req: Request, { params }: { params: Promise<{ club: string }> }) {
+  const { club } = await params;
+  const url = new URL(req.url);
+  return withClub(club, ["read", "Ledger"], (ctx) => {
+    const range: { from?: string; to?: string } = {};
+    for (const key of ["from", "to"] as const) {
+      const v = url.searchParams.get(key);
+      if (!v) continue;
+      const parsed = isoDateField(key === "from" ? "the first date" : "the last date").safeParse(v);
+      if (!parsed.success) return apiError("invalid", "Dates are YYYY-MM-DD.", { [key]: parsed.error.issues.map((i) => i.message) });
+      range[key] = parsed.data;
+    }
+    if (url.searchParams.get("format") !== "csv") return NextResponse.json({ currency: ctx.club.currency, entries: listJournal(ctx.db, ctx.club.id, range) });
+    if (!ctx.ability.can("export", "Ledger")) return apiError("forbidden", "Only a treasurer or club admin can export the journal.");
+    const exp = currencyExponent(ctx.club.currency);
+    const rows = journalLinesForExport(ctx.db, ctx.club.id, range);
+    const csv = toCsv(
+      ["Date", "Entry", "Kind", "Memo", "Reference", "Account code", "Account", "Debit", "Credit", "Currency"],
+      rows.map((r) => [r.date, r.entryId, r.kind, r.memo, r.reference ?? "", r.accountCode, r.account, r.debitMinor ? minorToDecimalString(r.debitMinor, exp) : "", r.creditMinor ? minorToDecimalString(r.creditMinor, exp) : "", r.currency]),
+    );
+    return new Response(csv, { headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="journal-${ctx.club.slug}.csv"` } });
+  });
+}

@@ -1,0 +1,41 @@
+import { getMemberName } from "@/db/queries/money-accounts";
+import { monthLabel } from "@/lib/ledger/months";
+import { clubToday } from "@/lib/ledger/settings";
+import { renderStatementPdf } from "@/lib/ledger/statement-pdf";
+import { statementFor } from "@/lib/ledger/statements";
+import { apiError, withClub } from "@/lib/server/api";
+import { monthField } from "@/lib/validation/money";
+import { own } from "@/permissions";
+
+export const dynamic = "force-dynamic";
+
+/** A member's monthly statement as PDF: their own, or any member's for a treasurer or admin. */
+export async function GET(_req: Request, { params }: { params: Promise<{ club: string; userId: string; month: string }> }) {
+  const { club, userId, month } = await params;
+  return withClub(club, null, async (ctx) => {
+    // Someone else's statement is answered like a missing one.
+    if (!ctx.ability.can("read", own("Account", userId))) return apiError("not_found", "Not found.");
+    const parsed = monthField.safeParse(month);
+    if (!parsed.success) return apiError("invalid", "Give the month as YYYY-MM.", { month: parsed.error.issues.map((i) => i.message) });
+    const member = getMemberName(ctx.db, ctx.club.id, userId);
+    if (!member) return apiError("not_found", "Not found.");
+    const figures = statementFor(ctx.db, ctx.club.id, userId, parsed.data);
+    const pdf = await renderStatementPdf({
+      clubName: ctx.club.name,
+      memberName: member.name,
+      memberEmail: member.email,
+      periodLabel: monthLabel(parsed.data),
+      currency: ctx.club.currency,
+      figures,
+      balanceNowMinor: figures.balanceNowMinor,
+      generatedOn: clubToday(ctx.club),
+    });
+    return new Response(new Uint8Array(pdf), {
+      headers: {
+        "Content-Type": "application/pdf",
+        "Content-Disposition": `inline; filename="statement-${ctx.club.slug}-${parsed.data}.pdf"`,
+        "Cache-Control": "private, no-store",
+      },
+    });
+  });
+}

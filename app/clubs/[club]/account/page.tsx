@@ -1,0 +1,36 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { Suspense } from "react";
+import { AccountView } from "@/components/money/account-view";
+import { PayButton } from "@/components/money/pay-button";
+import { PageHeader } from "@/components/ui/page-header";
+import { getMemberAccount } from "@/db/queries/money-accounts";
+import { formatMoney } from "@/lib/money";
+import { clubToday } from "@/lib/ledger/settings";
+import { requireClubContext } from "@/lib/server/club-context";
+import { own } from "@/permissions";
+
+export const metadata: Metadata = { title: "My account" };
+
+export default async function MyAccountPage({ params }: { params: Promise<{ club: string }> }) {
+  const { club: slug } = await params;
+  const { db, club, user, ability } = await requireClubContext(slug);
+  if (!ability.can("read", own("Account", user.id))) notFound();
+  const data = getMemberAccount(db, club.id, user.id, clubToday(club));
+  const canPay = ability.can("pay", own("Account", user.id)) && data.balanceMinor >= 50;
+  return (
+    <div className="max-w-4xl">
+      <PageHeader title="My account" lead={`Your account with ${club.name}, in ${club.currency}.`} />
+      <Suspense fallback={<div className="h-64 animate-pulse rounded bg-sand-200" />}>
+        <AccountView
+          data={data}
+          currency={club.currency}
+          slug={club.slug}
+          userId={user.id}
+          statementHref={(m) => `/clubs/${club.slug}/account/statements/${m}`}
+          payButton={canPay ? <PayButton slug={club.slug} amountText={formatMoney(data.balanceMinor, club.currency)} /> : <p className="text-ink-700">Nothing to pay right now.</p>}
+        />
+      </Suspense>
+    </div>
+  );
+}

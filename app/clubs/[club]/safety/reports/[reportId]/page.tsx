@@ -1,0 +1,76 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { ReportStatusBadge } from "@/components/safety/status-shapes";
+import { GroundFromReportForm, TriageForm } from "@/components/safety/triage-forms";
+import { buttonClass } from "@/components/ui/button";
+import { PageHeader } from "@/components/ui/page-header";
+import { getReport, getReporterName, listClubAircraftChoices, listReportEvents } from "@/db/queries/safety-reports";
+import { FACTOR_LABELS, REPORT_STATUS_LABELS, type ContributingFactor } from "@/lib/safety/labels";
+import { canReadReport, canTriageReports } from "@/lib/safety/report-access";
+import { nextReportStatuses } from "@/lib/safety/report-states";
+import { requireClubContext } from "@/lib/server/club-context";
+
+export const metadata: Metadata = { title: "Safety report" };
+
+export default async function ReportPage({ params, searchParams }: { params: Promise<{ club: string; reportId: string }>; searchParams: Promise<{ filed?: string }> }) {
+  const { club: slug, reportId } = await params;
+  const sp = await searchParams;
+  const { db, club, ability } = await requireClubContext(slug);
+  const report = getReport(db, club.id, reportId);
+  // Not readable is answered exactly like not there.
+  if (!report || !canReadReport(ability, report)) notFound();
+  const officer = canTriageReports(ability);
+  const events = officer ? listReportEvents(db, club.id, report.id) : [];
+  const aircraft = listClubAircraftChoices(db, club.id);
+  const base = `/clubs/${club.slug}/safety`;
+  return (
+    <div className="max-w-5xl">
+      <p className="mb-2 text-sm"><Link href={`${base}/reports`}>← Reports</Link></p>
+      {sp.filed ? <p role="status" className="mb-4 rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">Report filed. Thank you. The safety officer has been told.</p> : null}
+      <PageHeader title={`Safety report of ${report.occurredOn}`} lead={<span className="inline-flex flex-wrap items-center gap-2"><ReportStatusBadge status={report.status} /> {report.anonymous ? "Filed anonymously — no link to the reporter is stored." : `Filed by ${getReporterName(db, club.id, report) ?? "a member"}.`}</span>} />
+      <article className="card mb-6">
+        <dl className="mb-4 grid gap-x-6 gap-y-2 sm:grid-cols-3">
+          <div><dt className="text-sm font-bold text-ink-700">When</dt><dd>{report.occurredOn}{report.occurredTime ? ` ${report.occurredTime}` : ""}</dd></div>
+          <div><dt className="text-sm font-bold text-ink-700">Where</dt><dd className="break-words">{report.location}</dd></div>
+          <div><dt className="text-sm font-bold text-ink-700">Aircraft</dt><dd>{aircraft.find((a) => a.id === report.aircraftId)?.label ?? (report.aircraftId ? "A club aircraft" : "None given")}</dd></div>
+        </dl>
+        <h2 className="mb-1 font-bold">What happened</h2>
+        <p className="mb-4 whitespace-pre-wrap break-words">{report.whatHappened}</p>
+        <h2 className="mb-1 font-bold">Contributing factors</h2>
+        <p className="break-words">{report.contributingFactors.length ? report.contributingFactors.map((f) => FACTOR_LABELS[f as ContributingFactor] ?? f).join(", ") : "None marked"}{report.factorsNote ? ` — ${report.factorsNote}` : ""}</p>
+      </article>
+      {officer ? (
+        <div className="grid gap-6 lg:grid-cols-2">
+          <section className="card min-w-0" aria-labelledby="triage-h">
+            <h2 id="triage-h" className="mb-3 text-lg font-bold">Triage</h2>
+            <TriageForm slug={club.slug} reportId={report.id} next={nextReportStatuses(report.status)} />
+            <p className="mt-4"><Link href={`${base}/bulletins/new?fromReport=${report.id}`} className={buttonClass("secondary", "no-underline")}>Turn the lesson into a bulletin</Link></p>
+          </section>
+          <section className="card min-w-0" aria-labelledby="ground-h">
+            <h2 id="ground-h" className="mb-1 text-lg font-bold">Ground an aircraft</h2>
+            <p className="mb-3 text-sm text-ink-700">Issues a safety grounding notice at once and e-mails every member. Lifting it is done from the aircraft&apos;s page.</p>
+            <GroundFromReportForm slug={club.slug} reportId={report.id} aircraft={aircraft} preselected={report.aircraftId} />
+          </section>
+          <section className="card min-w-0 lg:col-span-2" aria-labelledby="history-h">
+            <h2 id="history-h" className="mb-2 text-lg font-bold">History</h2>
+            <ol className="flex flex-col gap-2 text-sm">
+              <li>{report.createdAt.toISOString().slice(0, 10)} · Received</li>
+              {events.map((e) => (
+                <li key={e.id} className="break-words">
+                  {e.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC · {e.actorName ?? "Safety officer"} ·{" "}
+                  {e.kind === "status" ? `${REPORT_STATUS_LABELS[e.fromStatus!]} → ${REPORT_STATUS_LABELS[e.toStatus!]}` : null}
+                  {e.kind === "bulletin" && e.bulletinId ? <>Bulletin <Link href={`${base}/bulletins/${e.bulletinId}`}>{e.bulletinTitle ?? "draft"}</Link></> : null}
+                  {e.kind === "grounding" ? "Aircraft grounded" : null}
+                  {e.note ? <span className="block text-ink-700">{e.note}</span> : null}
+                </li>
+              ))}
+            </ol>
+          </section>
+        </div>
+      ) : (
+        <p className="text-ink-700">The safety officer reads and follows up your report. You will see its state change here.</p>
+      )}
+    </div>
+  );
+}

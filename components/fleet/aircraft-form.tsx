@@ -1,0 +1,82 @@
+"use client";
+import { useActionState } from "react";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { initialActionState } from "@/lib/actions/action-state";
+import { createAircraft } from "@/lib/actions/fleet/create-aircraft";
+import { updateAircraft } from "@/lib/actions/fleet/update-aircraft";
+import { CheckboxField, FileField, TextAreaField } from "./form-bits";
+
+export type AircraftFormValues = {
+  id: string;
+  registration: string;
+  make: string;
+  model: string;
+  typeGroup: string;
+  category: string;
+  classRating: string;
+  serialNumber: string | null;
+  year: number | null;
+  homeField: string | null;
+  hourlyRate: string;
+  rateMeter: "hobbs" | "tach";
+  maintenanceMeter: "hobbs" | "tach";
+  currentHobbs: number | null;
+  currentTach: number | null;
+  usedForHire: boolean;
+  usedForInstruction: boolean;
+  ifrEquipped: boolean;
+  usedForIfr: boolean;
+  engineTboHours: number | null;
+  engineTimeSinceOverhaul: number | null;
+  notes: string | null;
+};
+
+export function AircraftForm({ slug, currency, values }: { slug: string; currency: string; values?: AircraftFormValues }) {
+  const [state, action] = useActionState(values ? updateAircraft : createAircraft, initialActionState);
+  const e = state.fieldErrors;
+  const v = values;
+  return (
+    <form action={action} noValidate aria-label={v ? `Edit ${v.registration}` : "Add an aircraft"}>
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      {v ? <input type="hidden" name="aircraftId" value={v.id} /> : null}
+      <div className="grid gap-x-3 sm:grid-cols-2">
+        <Field label="Registration" name="registration" defaultValue={v?.registration} errors={e.registration} autoCapitalize="characters" />
+        <Field label="Type group (for checkouts)" name="typeGroup" defaultValue={v?.typeGroup} errors={e.typeGroup} />
+        <Field label="Make" name="make" defaultValue={v?.make} errors={e.make} />
+        <Field label="Model" name="model" defaultValue={v?.model} errors={e.model} />
+        <Field label="Category" name="category" defaultValue={v?.category ?? "Airplane"} errors={e.category} />
+        <Field label="Class" name="classRating" defaultValue={v?.classRating ?? "Single-engine land"} errors={e.classRating} />
+        <Field label="Serial number" name="serialNumber" defaultValue={v?.serialNumber ?? ""} errors={e.serialNumber} />
+        <Field label="Year" name="year" inputMode="numeric" defaultValue={v?.year?.toString() ?? ""} errors={e.year} />
+        <Field label="Home field" name="homeField" defaultValue={v?.homeField ?? ""} errors={e.homeField} />
+        <Field label={`Hourly rate (${currency})`} name="hourlyRate" inputMode="decimal" defaultValue={v?.hourlyRate ?? ""} errors={e.hourlyRate} />
+        <SelectField label="Rate charged by" name="rateMeter" defaultValue={v?.rateMeter ?? "hobbs"} errors={e.rateMeter}>
+          <option value="hobbs">Hobbs</option>
+          <option value="tach">Tach</option>
+        </SelectField>
+        <SelectField label="Inspections count by" name="maintenanceMeter" defaultValue={v?.maintenanceMeter ?? "tach"} errors={e.maintenanceMeter}>
+          <option value="tach">Tach</option>
+          <option value="hobbs">Hobbs</option>
+        </SelectField>
+        <Field label="Current Hobbs" name="currentHobbs" inputMode="decimal" defaultValue={v?.currentHobbs?.toFixed(1) ?? ""} errors={e.currentHobbs} />
+        <Field label="Current tach" name="currentTach" inputMode="decimal" defaultValue={v?.currentTach?.toFixed(1) ?? ""} errors={e.currentTach} />
+        <Field label="Engine TBO (h, optional)" name="engineTboHours" inputMode="decimal" defaultValue={v?.engineTboHours?.toString() ?? ""} errors={e.engineTboHours} />
+        <Field label="Engine time since overhaul (h, optional)" name="engineTimeSinceOverhaul" inputMode="decimal" defaultValue={v?.engineTimeSinceOverhaul?.toString() ?? ""} errors={e.engineTimeSinceOverhaul} />
+      </div>
+      <fieldset className="mb-4">
+        <legend className="field-label">Which rules apply</legend>
+        <CheckboxField name="usedForInstruction" label="Used for flight instruction for hire (100-hour, 14 CFR 91.409(b))" defaultChecked={v?.usedForInstruction} errors={e.usedForInstruction} />
+        <CheckboxField name="usedForHire" label="Carries persons for hire (100-hour)" defaultChecked={v?.usedForHire} errors={e.usedForHire} />
+        <CheckboxField name="ifrEquipped" label="Equipped for IFR (altimeter/static 91.411, VOR check 91.171)" defaultChecked={v?.ifrEquipped} errors={e.ifrEquipped} />
+        <CheckboxField name="usedForIfr" label="Used for IFR flight" defaultChecked={v?.usedForIfr} errors={e.usedForIfr} />
+      </fieldset>
+      <TextAreaField label="Notes (optional)" name="notes" defaultValue={v?.notes ?? ""} errors={e.notes} rows={2} />
+      {v ? <FileField label="Photo (optional)" name="photo" accept="image/jpeg,image/png,image/webp,image/heic" hint="JPEG, PNG, WebP or HEIC, up to 10 MB." errors={e.photo} /> : null}
+      {v ? <p className="mb-3 text-sm text-ink-500">Changing the meters here is a correction and is kept in the audit log; flights move them normally.</p> : null}
+      <SubmitButton>{v ? "Save aircraft" : "Add aircraft"}</SubmitButton>
+    </form>
+  );
+}

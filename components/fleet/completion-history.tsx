@@ -1,0 +1,30 @@
+import type { CompletionHistoryRow, UploadLink } from "@/db/queries/fleet";
+import { formatHours } from "@/lib/airworthiness";
+
+export function CompletionHistory({ slug, rows, files }: { slug: string; rows: CompletionHistoryRow[]; files: UploadLink[] }) {
+  if (rows.length === 0) return <p className="text-ink-700">No completions recorded yet.</p>;
+  return (
+    <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+      <table className="w-full min-w-[40rem] text-left text-sm">
+        <thead className="bg-sand-200">
+          <tr><th className="px-3 py-2">Done</th><th className="px-3 py-2">Item</th><th className="px-3 py-2">Mechanic</th><th className="px-3 py-2">Notes and files</th></tr>
+        </thead>
+        <tbody>
+          {rows.map((c) => (
+            <tr key={c.id} className="border-t border-sand-200 align-top">
+              <td className="px-3 py-2 font-mono tabular">{c.doneOn}{c.hours !== null ? ` · ${formatHours(c.hours)} h` : ""}{c.expiresOn ? ` · expires ${c.expiresOn}` : ""}</td>
+              <td className="px-3 py-2">{c.itemName}</td>
+              <td className="px-3 py-2">{c.mechanicName}<span className="block text-xs text-ink-500">{c.mechanicCertificate}</span></td>
+              <td className="px-3 py-2">
+                {c.notes ?? ""}
+                {files.filter((f) => f.subjectId === c.id).map((f) => (
+                  <a key={f.id} className="block" href={`/api/clubs/${slug}/uploads/${f.id}`} target="_blank" rel="noreferrer">{f.originalName}</a>
+                ))}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,84 @@
+"use client";
+import { useActionState, useState } from "react";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { initialActionState } from "@/lib/actions/action-state";
+import { createInspectionItem } from "@/lib/actions/fleet/create-inspection-item";
+import { recordCompletion } from "@/lib/actions/fleet/record-completion";
+import { updateInspectionItem } from "@/lib/actions/fleet/update-inspection-item";
+import { CheckboxField, FileField, TextAreaField } from "./form-bits";
+
+export function RecordCompletionForm({ slug, itemId, itemName, today, hoursBased, fixedDate, meterName, meterNow }: { slug: string; itemId: string; itemName: string; today: string; hoursBased: boolean; fixedDate: boolean; meterName: string; meterNow: number | null }) {
+  const [state, action] = useActionState(recordCompletion, initialActionState);
+  const e = state.fieldErrors;
+  const p = `c-${itemId}`;
+  return (
+    <form action={action} noValidate aria-label={`Record ${itemName}`} key={state.ok ? `${state.message}-${Date.now()}` : "complete"}>
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="itemId" value={itemId} />
+      <Field label="Date done" name="doneOn" id={`${p}-on`} type="date" defaultValue={today} max={today} errors={e.doneOn} />
+      <Field label={`${meterName === "hobbs" ? "Hobbs" : "Tach"} when done${hoursBased ? "" : " (optional)"}`} name="hours" id={`${p}-hours`} inputMode="decimal" defaultValue={meterNow?.toFixed(1) ?? ""} errors={e.hours} />
+      {fixedDate ? <Field label="Expires on" name="expiresOn" id={`${p}-exp`} type="date" errors={e.expiresOn} hint="For the ELT battery: the date half its useful life is gone (14 CFR 91.207(c))." /> : null}
+      <Field label="Mechanic's name" name="mechanicName" id={`${p}-mech`} errors={e.mechanicName} />
+      <Field label="Certificate number" name="mechanicCertificate" id={`${p}-cert`} errors={e.mechanicCertificate} />
+      <TextAreaField label="Notes (optional)" name="notes" id={`${p}-notes`} rows={2} errors={e.notes} />
+      <FileField label="Work order or logbook page (optional)" name="document" id={`${p}-doc`} accept="image/jpeg,image/png,image/webp,image/heic,application/pdf" hint="PDF or photo, up to 10 MB." errors={e.document} />
+      <SubmitButton>Record completion</SubmitButton>
+    </form>
+  );
+}
+
+export function CreateItemForm({ slug, aircraftId }: { slug: string; aircraftId: string }) {
+  const [state, action] = useActionState(createInspectionItem, initialActionState);
+  const [kind, setKind] = useState("calendar-months");
+  const e = state.fieldErrors;
+  const months = kind === "calendar-months" || kind === "months-or-hours";
+  const hours = kind === "hours" || kind === "months-or-hours";
+  return (
+    <form action={action} noValidate aria-label="Add an inspection item" key={state.ok ? `${state.message}-${Date.now()}` : "item"}>
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="aircraftId" value={aircraftId} />
+      <Field label="Name" name="name" id="item-name" errors={e.name} placeholder="e.g. AD 0000-00-00 recurring fuel-line check" />
+      <SelectField label="Origin" name="origin" id="item-origin" defaultValue="directive" errors={e.origin}>
+        <option value="directive">Recurring airworthiness directive</option>
+        <option value="club">Club item</option>
+      </SelectField>
+      <SelectField label="Comes due" name="ruleKind" id="item-rule" value={kind} onChange={(ev) => setKind(ev.target.value)} errors={e.ruleKind}>
+        <option value="calendar-months">Every N calendar months</option>
+        <option value="hours">Every N hours</option>
+        <option value="months-or-hours">Months or hours, whichever first</option>
+        <option value="days">Every N days</option>
+        <option value="fixed-date">On a date set at each completion</option>
+      </SelectField>
+      <div className="grid grid-cols-2 gap-x-3">
+        {months ? <Field label="Calendar months" name="months" id="item-months" inputMode="numeric" errors={e.months} /> : null}
+        {hours ? <Field label="Hours" name="hours" id="item-hours" inputMode="decimal" errors={e.hours} /> : null}
+        {hours ? <Field label="Overrun allowed (h)" name="overrunHours" id="item-overrun" inputMode="decimal" errors={e.overrunHours} /> : null}
+        {kind === "days" ? <Field label="Days" name="days" id="item-days" inputMode="numeric" errors={e.days} /> : null}
+      </div>
+      <Field label="Source (optional)" name="source" id="item-source" errors={e.source} placeholder="e.g. AD 0000-00-00" />
+      <CheckboxField name="required" id="item-required" label="Required: grounds the aircraft when overdue" defaultChecked errors={e.required} />
+      <CheckboxField name="ifrOnly" id="item-ifr" label="Needed only for IFR flight" errors={e.ifrOnly} />
+      <SubmitButton>Add item</SubmitButton>
+    </form>
+  );
+}
+
+export function UpdateItemForm({ slug, itemId, hasUsage, canRetire }: { slug: string; itemId: string; hasUsage: boolean; canRetire: boolean }) {
+  const [state, action] = useActionState(updateInspectionItem, initialActionState);
+  const p = `u-${itemId}`;
+  return (
+    <form action={action} noValidate aria-label="Update inspection item">
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="itemId" value={itemId} />
+      {hasUsage ? <Field label="Cumulative use since the last completion (h)" name="usageUsedHours" id={`${p}-use`} inputMode="decimal" errors={state.fieldErrors.usageUsedHours} /> : null}
+      {canRetire ? <CheckboxField name="retire" id={`${p}-retire`} label="Retire this item (it no longer applies); its history stays" errors={state.fieldErrors.retire} /> : null}
+      <Field label="Note (optional)" name="note" id={`${p}-note`} errors={state.fieldErrors.note} />
+      <SubmitButton variant="secondary">Save item</SubmitButton>
+    </form>
+  );
+}

@@ -1,0 +1,89 @@
+import "server-only";
+import { and, desc, eq } from "drizzle-orm";
+import type { Db, Tx } from "@/db/client";
+import { flights, type Aircraft, type Club } from "@/db/schema";
+import { averageFlightHours, DEFAULT_FLIGHT_HOURS, projectedMeterHours } from "@/lib/bookings/average-flight";
+import type { GuardInput } from "@/lib/bookings/guards";
+import { isoDateInTimeZone } from "@/lib/dates";
+import { buildFlightLineEntry } from "@/lib/fleet/flight-line";
+import { memberArrears } from "@/lib/ledger/arrears";
+import { formatMoney } from "@/lib/money";
+import { normalizeTypeGroup } from "@/lib/safety/audience";
+import { getMemberCurrency } from "./currency";
+import { loadFleetRecords } from "./fleet-status";
+import { countActiveBookingsBetween } from "./bookings";
+import { findStandingCheckout } from "./safety-checkouts";
+
+// Everything the booking guards weigh, gathered from the other areas' own queries: the flight
+// line's status computation (lib/fleet), the currency board's (db/queries/currency) and the
+// ledger's arrears rule (lib/ledger/arrears). Nothing here decides; lib/bookings/guards does.
+
+type Handle = Db | Tx;
+
+const RECENT_FLIGHTS = 50;
+
+/** The club's average flight length on this aircraft's maintenance meter, from its last flights. */
+export function aircraftAverageFlightHours(db: Handle, clubId: string, plane: Pick<Aircraft, "id" | "maintenanceMeter">): number {
+  const rows = db
+    .select({ hobbsOut: flights.hobbsOut, hobbsIn: flights.hobbsIn, tachOut: flights.tachOut, tachIn: flights.tachIn })
+    .from(flights)
+    .where(and(eq(flights.clubId, clubId), eq(flights.aircraftId, plane.id)))
+    .orderBy(desc(flights.hobbsOut))
+    .limit(RECENT_FLIGHTS)
+    .all();
+  const tach = plane.maintenanceMeter === "tach";
+  return averageFlightHours(rows.map((r) => (tach ? { out: r.tachOut, in: r.tachIn } : { out: r.hobbsOut, in: r.hobbsIn }))) ?? DEFAULT_FLIGHT_HOURS;
+}
+
+export function aircraftStatusNowAndAtEnd(db: Handle, club: Club, plane: Aircraft, window: { startsAt: Date; endsAt: Date }, now: Date, excludeBookingId?: string) {
+  const records = loadFleetRecords(db as Db, club.id, plane.id);
+  const record = records.aircraft[0];
+  const soon = { days: club.settings.dueSoonDays, hours: club.settings.dueSoonHours };
+  const average = aircraftAverageFlightHours(db, club.id, plane);
+  if (!record) return { statusNow: { status: "unknown" as const, reasons: [] }, statusAtEnd: null, average };
+  const today = isoDateInTimeZone(now, club.timeZone);
+  const entryNow = buildFlightLineEntry({ ...records, aircraft: record }, today, now.toISOString(), soon);
+
+  // Every active booking that ends after now and starts before this one ends flies about one
+  // average flight first (this booking included, counted once even while it is being changed).
+  const ahead = countActiveBookingsBetween(db, club.id, plane.id, now, window.endsAt) - (excludeBookingId ? 1 : 0) + 1;
+  const meter = record.maintenanceMeter === "hobbs" ? record.currentHobbs : record.currentTach;
+  const projected = projectedMeterHours(meter, average, Math.max(ahead, 1));
+  const endRecord = record.maintenanceMeter === "hobbs" ? { ...record, currentHobbs: projected } : { ...record, currentTach: projected };
+  const end = window.endsAt.getTime() > now.getTime() ? window.endsAt : now;
+  const entryEnd = buildFlightLineEntry({ ...records, aircraft: endRecord }, isoDateInTimeZone(end, club.timeZone), end.toISOString(), soon);
+  return {
+    statusNow: { status: entryNow.status, reasons: entryNow.reasons },
+    statusAtEnd: projected === null ? null : { status: entryEnd.status, reasons: entryEnd.reasons },
+    average,
+  };
+}
+
+export function loadGuardInput(
+  db: Handle,
+  club: Club,
+  args: { plane: Aircraft; memberId: string; memberName: string; startsAt: Date; endsAt: Date; withInstructor: boolean; carryingPassengers: boolean; excludeBookingId?: string },
+  now: Date = new Date(),
+): GuardInput {
+  const today = isoDateInTimeZone(now, club.timeZone);
+  const status = aircraftStatusNowAndAtEnd(db, club, args.plane, args, now, args.excludeBookingId);
+  const currency = getMemberCurrency(db, club, args.memberId, today);
+  const item = (key: string) => currency.items.find((i) => i.key === key);
+  const checkedOut = Boolean(findStandingCheckout(db, club.id, args.memberId, args.plane.typeGroup));
+  const arrears = memberArrears(db, club.id, args.memberId, today);
+  return {
+    window: { startDate: isoDateInTimeZone(args.startsAt, club.timeZone), endDate: isoDateInTimeZone(args.endsAt, club.timeZone) },
+    aircraft: { registration: args.plane.registration, typeGroup: args.plane.typeGroup, statusNow: status.statusNow, statusAtEnd: status.statusAtEnd, averageFlightHours: status.average },
+    member: {
+      name: args.memberName,
+      checkedOut,
+      recencyLastDay: item(`recency:${normalizeTypeGroup(args.plane.typeGroup)}`)?.lastDay ?? null,
+      flightReviewLastDay: item("flight_review")?.lastDay ?? null,
+      medicalLastDay: item("medical")?.lastDay ?? null,
+      passengerDayLastDay: item("passenger_day")?.lastDay ?? null,
+      arrears: { inArrears: arrears.inArrears, owedText: formatMoney(arrears.balanceMinor, club.currency), oldestDueDate: arrears.oldestDueDate },
+    },
+    withInstructor: args.withInstructor,
+    carryingPassengers: args.carryingPassengers,
+  };
+}

@@ -1,0 +1,46 @@
+"use server";
+import { claimBookingWriteLock, updateBookingRow } from "@/db/queries/bookings";
+import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
+import { getPreflightRecord } from "@/db/queries/tools-preflight";
+import { clubAction } from "@/lib/actions/create-action";
+import { ActionError } from "@/lib/actions/action-state";
+import { writeAudit } from "@/lib/server/audit";
+import { dispatchBookingSchema } from "@/lib/validation/bookings";
+import { loadBookingForParty } from "./booking-access";
+import { bookingPaths } from "./paths";
+
+// Dispatch: the member confirms the preflight record of this booking. A grounded aircraft is
+// never dispatched, whatever the booking guards allowed when it was booked; findings and a
+// status that cannot be computed ("Check status") need the member's explicit tick.
+export const dispatchBooking = clubAction({
+  schema: dispatchBookingSchema,
+  permission: ["create", "Flight"],
+  success: "Dispatched.",
+  run(tx, ctx, input) {
+    claimBookingWriteLock(tx);
+    const { club, user, db } = ctx;
+    const booking = loadBookingForParty(tx, ctx, input.bookingId);
+    if (booking.status === "dispatched") return { message: "This booking is already dispatched." };
+    if (booking.status !== "reserved") throw new ActionError(`This booking is ${booking.status.replace("_", " ")} and cannot be dispatched.`, {}, "conflict");
+    const record = getPreflightRecord(tx, club.id, input.preflightRecordId);
+    if (!record || record.bookingId !== booking.id) throw new ActionError("Record the preflight on this booking first.", { preflightRecordId: ["Choose this booking's preflight record."] }, "not_found");
+    // Read through the context's connection: the same transaction, the flight line's own rules.
+    const status = getAircraftStatusEntry(db, club, booking.aircraftId);
+    if (!status) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
+    if (status.status === "grounded") {
+      throw new ActionError(`Not dispatched: the aircraft is grounded — ${status.reasons.filter((r) => r.grounding).map((r) => r.text).join("; ")}.`, {}, "conflict");
+    }
+    const concerns = [
+      ...(record.outcome === "findings" ? record.items.filter((i) => i.result === "finding").map((i) => `Finding: ${i.label}${i.note ? ` — ${i.note}` : ""}`) : []),
+      ...(record.outcome === "findings" && record.findingCount > record.items.filter((i) => i.result === "finding").length ? ["The record has fuel, sump or oil findings."] : []),
+      ...(status.status === "unknown" ? [`Check status: ${status.reasons.filter((r) => !r.grounding).map((r) => r.text).join("; ")}`] : []),
+    ];
+    if (concerns.length && !input.acceptFindings) {
+      throw new ActionError("Read what the preflight and the records show. Tick that you, as pilot in command, have dealt with each before flight.", { acceptFindings: concerns });
+    }
+    const now = new Date();
+    updateBookingRow(tx, club.id, booking.id, { status: "dispatched", dispatchedAt: now, dispatchedById: user.id, preflightRecordId: record.id });
+    writeAudit(tx, { clubId: club.id, actorId: user.id, action: "booking.dispatch", subjectType: "Booking", subjectId: booking.id, before: { status: booking.status }, after: { status: "dispatched", preflightRecordId: record.id, accepted: concerns } });
+    return { message: "Dispatched: the aircraft is out on your booking. Check in when you are back.", revalidate: bookingPaths(club.slug, booking.id) };
+  },
+});

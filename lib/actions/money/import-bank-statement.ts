@@ -1,0 +1,56 @@
+"use server";
+import { z } from "zod";
+import { clubAction } from "@/lib/actions/create-action";
+import { ActionError } from "@/lib/actions/action-state";
+import { parseStatementFile, storeStatement } from "@/lib/ledger/bank-import";
+import { autoMatchStatement } from "@/lib/ledger/reconciliation";
+import type { CsvMapping } from "@/lib/reconcile";
+import { writeAudit } from "@/lib/server/audit";
+import { bankImportSchema, type BankImportInput } from "@/lib/validation/money";
+import { minorOf } from "./amounts";
+import { ledger } from "./ledger-errors";
+
+const MAX_BYTES = 5 * 1024 * 1024;
+
+const schema = bankImportSchema.and(z.object({ file: z.instanceof(File, { error: "Choose the statement file (CSV or OFX)." }) }));
+
+function mappingOf(input: BankImportInput): CsvMapping {
+  const m: CsvMapping = { date: input.dateColumn ?? "", sign: input.sign, dateFormat: input.dateFormat, delimiter: input.delimiter === "tab" ? "\t" : input.delimiter, decimalComma: input.decimalComma };
+  if (input.amountColumn) m.amount = input.amountColumn;
+  if (input.debitColumn) m.debit = input.debitColumn;
+  if (input.creditColumn) m.credit = input.creditColumn;
+  if (input.descriptionColumn) m.description = input.descriptionColumn.split("+").map((s) => s.trim()).filter(Boolean);
+  if (input.referenceColumn) m.reference = input.referenceColumn;
+  return m;
+}
+
+export const importBankStatement = clubAction({
+  schema,
+  permission: ["reconcile", "Reconciliation"],
+  success: "Statement imported.",
+  async prepare(_ctx, input): Promise<{ text: string; name: string }> {
+    const file = input.file;
+    if (file.size === 0) throw new ActionError("Some fields need attention; nothing was saved.", { file: ["The file is empty."] });
+    if (file.size > MAX_BYTES) throw new ActionError("Some fields need attention; nothing was saved.", { file: ["The file is larger than 5 MB; export one month at a time."] });
+    const text = new TextDecoder("utf-8", { fatal: false }).decode(await file.arrayBuffer());
+    if (text.includes("\u0000")) throw new ActionError("Some fields need attention; nothing was saved.", { file: ["That is not a text file; export the statement as CSV or OFX."] });
+    return { text, name: (file.name || "statement").slice(0, 200) };
+  },
+  run(tx, ctx, input, prepared) {
+    const mapping = input.format === "csv" ? mappingOf(input) : undefined;
+    const parsed = parseStatementFile({ format: input.format, text: prepared.text, mapping, currency: ctx.club.currency });
+    if (!parsed.ok) throw new ActionError("The file could not be read; nothing was imported.", { file: parsed.errors });
+    const typed = input.closingBalance ? minorOf(input.closingBalance, ctx.club.currency, "closingBalance") : null;
+    const closing = typed ?? parsed.closingBalanceMinor;
+    if (closing === null) throw new ActionError("Some fields need attention; nothing was saved.", { closingBalance: ["The file gives no closing balance; enter the one printed on the statement."] });
+    const stored = ledger(() =>
+      storeStatement(tx, { clubId: ctx.club.id, userId: ctx.user.id, currency: ctx.club.currency, format: input.format, fileName: prepared.name, text: prepared.text, mapping, parsed, closingBalanceMinor: closing, periodStart: input.periodStart, periodEnd: input.periodEnd }),
+    );
+    const auto = ledger(() => autoMatchStatement(tx, { clubId: ctx.club.id, userId: ctx.user.id }, stored.statementId));
+    writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.bank.import", subjectType: "BankStatement", subjectId: stored.statementId, after: { fileName: prepared.name, format: input.format, imported: stored.imported, skipped: stored.skipped, matched: auto.matched } });
+    return {
+      message: `${stored.imported} lines imported${stored.skipped ? `, ${stored.skipped} already known and skipped` : ""}; ${auto.matched} matched automatically.`,
+      redirectTo: `/clubs/${ctx.club.slug}/money/reconciliation/${stored.statementId}`,
+    };
+  },
+});

@@ -1,0 +1,46 @@
+"use server";
+import { payments } from "@/db/schema";
+import { clubAction } from "@/lib/actions/create-action";
+import { kickOutbox } from "@/lib/email/runner";
+import { accountId, memberAccountId } from "@/lib/ledger/accounts";
+import { postEntry } from "@/lib/ledger/post-entry";
+import { queueReceipt } from "@/lib/ledger/receipts";
+import { writeAudit } from "@/lib/server/audit";
+import { manualPaymentSchema } from "@/lib/validation/money";
+import { minorOf } from "./amounts";
+import { ledger } from "./ledger-errors";
+
+const WORDS = { cheque: "Cheque", cash: "Cash", transfer: "Bank transfer" } as const;
+
+export const recordManualPayment = clubAction({
+  schema: manualPaymentSchema,
+  permission: ["create", "Payment"],
+  success: "Payment recorded.",
+  run(tx, { club, user }, input) {
+    const amountMinor = minorOf(input.amount, club.currency, "amount");
+    const { entryId } = ledger(() =>
+      postEntry(tx, club.id, {
+        date: input.receivedOn,
+        kind: "manual-payment",
+        memo: `${WORDS[input.method]} payment${input.reference ? ` ${input.reference}` : ""}`,
+        lines: [
+          { accountId: accountId(tx, club.id, "bank"), debitMinor: amountMinor },
+          { accountId: memberAccountId(tx, club.id, input.memberUserId), creditMinor: amountMinor },
+        ],
+        memberUserId: input.memberUserId,
+        sourceType: "payment",
+        reference: input.reference ?? null,
+        createdById: user.id,
+      }),
+    );
+    const [row] = tx
+      .insert(payments)
+      .values({ clubId: club.id, memberUserId: input.memberUserId, method: input.method, status: "succeeded", amountMinor, currency: club.currency, receivedOn: input.receivedOn, reference: input.reference ?? null, journalEntryId: entryId, recordedById: user.id })
+      .returning({ id: payments.id })
+      .all();
+    queueReceipt(tx, club.id, { memberUserId: input.memberUserId, amountMinor, method: input.method, receivedOn: input.receivedOn, reference: input.reference });
+    writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.payment.manual", subjectType: "Payment", subjectId: row!.id, after: { ...input, amountMinor, entryId } });
+    return { revalidate: [`/clubs/${club.slug}/money`] };
+  },
+  after: () => kickOutbox(),
+});

@@ -1,0 +1,150 @@
+// Booking guards: what stands against a booking, each refused or only warned as the club's
+// settings decide (settings.bookingGuards), always with the reason in plain words. The pilot's
+// last days come from the currency board's own computation (lib/currency through
+// db/queries/currency), so a member is never current on one screen and not on another.
+//
+// With an instructor on the booking the instructor is pilot in command, so the member's own
+// checkout, currency and medical do not stop it (that is how a member gets checked out or
+// current again). The aircraft and the member's account are checked either way.
+
+import type { AircraftStatusResult, StatusReason } from "@/lib/airworthiness";
+import { compareIsoDates, type IsoDate } from "@/lib/dates";
+import type { ClubSettings } from "@/lib/validation/club-settings";
+
+export type GuardKey = keyof ClubSettings["bookingGuards"];
+/** "statusUnknown" is never a refusal: missing records are said out loud, never read as flyable. */
+export type GuardFinding = { guard: GuardKey | "statusUnknown"; reason: string };
+export type GuardOutcome = { refusals: GuardFinding[]; warnings: GuardFinding[] };
+
+export type GuardInput = {
+  /** The booking's first and last calendar day in the club's time zone. */
+  window: { startDate: IsoDate; endDate: IsoDate };
+  aircraft: {
+    registration: string;
+    typeGroup: string;
+    /** The status now, as the flight line computes it. */
+    statusNow: AircraftStatusResult;
+    /**
+     * The status at the end of the booking: the end date as "today", notices effective by then,
+     * and the meter projected at the club's average flight length. Null when it cannot be
+     * computed (then the booking is warned "Check status").
+     */
+    statusAtEnd: AircraftStatusResult | null;
+    /** Average flight length used for the projection, in hours, for the reason text. */
+    averageFlightHours: number;
+  };
+  /**
+   * The member's standing, as the currency board computes it (db/queries/currency →
+   * lib/currency): each is the last day on which it still holds, or null when not on record.
+   */
+  member: {
+    name: string;
+    checkedOut: boolean;
+    recencyLastDay: IsoDate | null;
+    flightReviewLastDay: IsoDate | null;
+    medicalLastDay: IsoDate | null;
+    passengerDayLastDay: IsoDate | null;
+    arrears: { inArrears: boolean; owedText: string; oldestDueDate: IsoDate | null } | null;
+  };
+  withInstructor: boolean;
+  carryingPassengers: boolean;
+};
+
+const GROUNDING_NOTICE_CODES = new Set(["notice-active"]);
+const ITEM_CODES = new Set(["inspection-overdue"]);
+
+function groundingTexts(reasons: StatusReason[]): string[] {
+  return reasons.filter((r) => r.grounding).map((r) => r.text);
+}
+
+function aircraftFindings(input: GuardInput): GuardFinding[] {
+  const { aircraft } = input;
+  const reg = aircraft.registration;
+  const out: GuardFinding[] = [];
+  if (aircraft.statusNow.status === "grounded") {
+    out.push({ guard: "grounded", reason: `${reg} is grounded: ${groundingTexts(aircraft.statusNow.reasons).join("; ")}.` });
+    return out;
+  }
+  if (aircraft.statusNow.status === "unknown") {
+    const texts = aircraft.statusNow.reasons.filter((r) => !r.grounding).map((r) => r.text);
+    out.push({ guard: "statusUnknown", reason: `Check status: ${reg}'s status cannot be computed from its records (${texts.join("; ") || "records missing"}).` });
+  }
+  const atEnd = aircraft.statusAtEnd;
+  if (!atEnd) {
+    out.push({ guard: "statusUnknown", reason: `Check status: whether anything on ${reg} comes due before this booking ends cannot be computed.` });
+    return out;
+  }
+  const nowTexts = new Set(aircraft.statusNow.reasons.map((r) => r.text));
+  const fresh = atEnd.reasons.filter((r) => r.grounding && !nowTexts.has(r.text));
+  const notices = fresh.filter((r) => GROUNDING_NOTICE_CODES.has(r.code));
+  const items = fresh.filter((r) => ITEM_CODES.has(r.code));
+  const other = fresh.filter((r) => !GROUNDING_NOTICE_CODES.has(r.code) && !ITEM_CODES.has(r.code));
+  if (notices.length || other.length) {
+    out.push({ guard: "grounded", reason: `${reg} will be grounded before this booking ends: ${[...notices, ...other].map((r) => r.text).join("; ")}.` });
+  }
+  if (items.length) {
+    const hours = aircraft.averageFlightHours.toFixed(1);
+    out.push({
+      guard: "inspectionDue",
+      reason: `${reg} comes due inside this booking (counting ${hours} h per booked flight, the average flight length): ${items.map((r) => r.text).join("; ")}.`,
+    });
+  }
+  return out;
+}
+
+/** Lapsed when there is no last day, or it falls before the booking's last day. */
+function lapses(lastDay: IsoDate | null, endDate: IsoDate): boolean {
+  return lastDay === null || compareIsoDates(lastDay, endDate) < 0;
+}
+
+function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recencyDaysInType">): GuardFinding[] {
+  const { member, aircraft, window } = input;
+  const out: GuardFinding[] = [];
+  if (!input.withInstructor) {
+    if (!member.checkedOut) {
+      out.push({ guard: "notCheckedOut", reason: `${member.name} is not checked out in the ${aircraft.typeGroup}: book with an instructor, or ask one for a checkout.` });
+    }
+    const current: string[] = [];
+    if (member.flightReviewLastDay === null) current.push("no flight review on record (14 CFR 61.56)");
+    else if (lapses(member.flightReviewLastDay, window.endDate)) current.push(`the flight review runs out on ${member.flightReviewLastDay} (14 CFR 61.56)`);
+    if (member.checkedOut && lapses(member.recencyLastDay, window.endDate)) {
+      current.push(
+        member.recencyLastDay
+          ? `the club's rule of a flight in the ${aircraft.typeGroup} within ${settings.recencyDaysInType} days runs out on ${member.recencyLastDay}`
+          : `no flight in the ${aircraft.typeGroup} on record within the club's ${settings.recencyDaysInType} days`,
+      );
+    }
+    if (input.carryingPassengers && lapses(member.passengerDayLastDay, window.endDate)) {
+      current.push("not 3 takeoffs and landings within the preceding 90 days to carry passengers through the booking (14 CFR 61.57(a))");
+    }
+    if (current.length) out.push({ guard: "notCurrent", reason: `${member.name} is not current: ${current.join("; ")}.` });
+    if (member.medicalLastDay === null) {
+      out.push({ guard: "medicalExpired", reason: `${member.name} has no medical certificate on record (14 CFR 61.23).` });
+    } else if (lapses(member.medicalLastDay, window.endDate)) {
+      out.push({ guard: "medicalExpired", reason: `${member.name}'s medical certificate runs out on ${member.medicalLastDay}, before the booking ends (14 CFR 61.23).` });
+    }
+  }
+  if (member.arrears?.inArrears) {
+    const since = member.arrears.oldestDueDate ? `, unpaid since ${member.arrears.oldestDueDate}` : "";
+    out.push({ guard: "inArrears", reason: `${member.name}'s account is in arrears: ${member.arrears.owedText} owed${since}.` });
+  }
+  return out;
+}
+
+/** Every finding, sorted into refusals and warnings by the club's setting for its guard. */
+export function evaluateBookingGuards(input: GuardInput, settings: Pick<ClubSettings, "bookingGuards" | "recencyDaysInType">): GuardOutcome {
+  const findings = [...aircraftFindings(input), ...memberFindings(input, settings)];
+  const refusals: GuardFinding[] = [];
+  const warnings: GuardFinding[] = [];
+  for (const f of findings) {
+    if (f.guard !== "statusUnknown" && settings.bookingGuards[f.guard] === "refuse") refusals.push(f);
+    else warnings.push(f);
+  }
+  return { refusals, warnings };
+}
+
+/** Whether the warnings a member accepted are still the ones that apply (same reasons). */
+export function warningsAccepted(warnings: readonly GuardFinding[], accepted: readonly string[]): boolean {
+  const set = new Set(accepted);
+  return warnings.every((w) => set.has(w.guard));
+}

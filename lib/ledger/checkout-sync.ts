@@ -1,0 +1,23 @@
+import type { Db } from "@/db/client";
+import { recordCardPayment } from "./card-payments";
+import { snapshotOfIntent } from "./card-events";
+import { isLedgerError } from "./errors";
+import { getPaymentsClient } from "./payments-client";
+
+/**
+ * Asks the provider about one checkout session and posts it if it was paid: for the return
+ * page, when the webhook has not arrived yet. Keyed like the webhook, so it never posts twice.
+ */
+export async function syncCheckoutSession(db: Db, clubId: string, sessionId: string): Promise<void> {
+  try {
+    const stripe = getPaymentsClient();
+    const session = await stripe.checkout.sessions.retrieve(sessionId);
+    if (session.metadata?.clubId !== clubId || session.payment_status !== "paid" || !session.payment_intent) return;
+    const snapshot = await snapshotOfIntent(stripe, typeof session.payment_intent === "string" ? session.payment_intent : session.payment_intent.id, session.id);
+    if (!snapshot || snapshot.clubId !== clubId) return;
+    db.transaction((tx) => recordCardPayment(tx, snapshot));
+  } catch (error) {
+    // The webhook remains the way in; this page only tries to be early.
+    if (!isLedgerError(error)) console.error("[payments] return-page check failed", error);
+  }
+}

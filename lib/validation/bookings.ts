@@ -1,0 +1,139 @@
+import { z } from "zod";
+import { isIsoDate } from "@/lib/dates";
+import { checkbox, hoursField } from "./fleet";
+
+// Bookings, dispatch and check-in. Times are typed in the club's time zone as "YYYY-MM-DDTHH:MM"
+// (a datetime-local field) and turned into UTC instants by the action.
+
+const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "medicalExpired", "inArrears", "statusUnknown"] as const;
+
+const id = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, { error: `Choose ${what}.` }).max(64, { error: `Choose ${what}.` });
+
+const blankToUndefined = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
+
+function optionalText(label: string, max: number) {
+  return z.preprocess(blankToUndefined, z.string().trim().max(max, { error: `Keep ${label} to ${max} characters.` }).optional()).transform((v) => v ?? null);
+}
+
+const optionalId = z.preprocess(blankToUndefined, z.string().trim().max(64).optional()).transform((v) => v ?? null);
+
+export function localDateTime(label: string) {
+  return z
+    .string({ error: `Enter ${label}.` })
+    .trim()
+    .min(1, { error: `Enter ${label}.` })
+    .refine((v) => /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/.test(v) && isIsoDate(v.slice(0, 10)) && Number(v.slice(11, 13)) < 24 && Number(v.slice(14, 16)) < 60, {
+      error: `Enter ${label} as a date and time.`,
+    });
+}
+
+const acceptedGuards = z
+  .preprocess((v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]), z.array(z.enum(GUARD_KEYS, { error: "Unknown warning." })))
+  .transform((v) => [...new Set(v)]);
+
+const windowFields = {
+  startsAt: localDateTime("the start"),
+  endsAt: localDateTime("the end"),
+  instructorId: optionalId,
+  acceptedGuards,
+};
+
+function endAfterStart(v: { startsAt: string; endsAt: string }, ctx: z.RefinementCtx) {
+  // Same-zone local times compare as text; the action checks the instants again.
+  if (v.endsAt <= v.startsAt) ctx.addIssue({ code: "custom", path: ["endsAt"], message: "The end must be after the start." });
+}
+
+export const createBookingSchema = z
+  .object({
+    aircraftId: id("an aircraft"),
+    /** An instructor booking for a student; empty = the person signed in. */
+    memberId: optionalId,
+    purpose: optionalText("the purpose", 200),
+    carryingPassengers: checkbox,
+    ...windowFields,
+  })
+  .superRefine(endAfterStart);
+
+export const changeBookingSchema = z
+  .object({
+    bookingId: id("a booking"),
+    ...windowFields,
+  })
+  .superRefine(endAfterStart);
+
+export const cancelBookingSchema = z.object({
+  bookingId: id("a booking"),
+  reason: optionalText("the reason", 300),
+});
+
+export const dispatchBookingSchema = z
+  .object({
+    bookingId: id("a booking"),
+    preflightRecordId: id("the preflight record"),
+    confirmPreflight: checkbox,
+    acceptFindings: checkbox,
+  })
+  .superRefine((v, ctx) => {
+    if (!v.confirmPreflight) ctx.addIssue({ code: "custom", path: ["confirmPreflight"], message: "Confirm that you did this preflight and that the record is yours." });
+  });
+
+const count = (label: string) =>
+  z.preprocess(
+    (v) => (v === undefined || v === "" ? "0" : v),
+    z
+      .string()
+      .trim()
+      .refine((v) => /^\d+$/.test(v), { error: `Enter ${label} as a whole number.` })
+      .transform(Number)
+      .refine((v) => v <= 99, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 99.` }),
+  );
+
+const quantity = (label: string) =>
+  z.preprocess(
+    (v) => (v === undefined || v === "" ? "0" : v),
+    z
+      .string()
+      .trim()
+      .refine((v) => /^\d+(\.\d{1,2})?$/.test(v), { error: `Enter ${label} as a number, like 12.5 (0 when none).` })
+      .transform(Number)
+      .refine((v) => v <= 2000, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 2000.` }),
+  );
+
+export const checkInSchema = z
+  .object({
+    bookingId: id("a booking"),
+    hobbsOut: hoursField("Hobbs out"),
+    hobbsIn: hoursField("Hobbs in"),
+    tachOut: hoursField("tach out"),
+    tachIn: hoursField("tach in"),
+    dayLandings: count("the day landings"),
+    nightFullStopLandings: count("the night full-stop landings"),
+    fuelAdded: quantity("the fuel added"),
+    oilAdded: quantity("the oil added"),
+    squawk: optionalText("the squawk", 2000),
+    notes: optionalText("the notes", 1000),
+  })
+  .superRefine((v, ctx) => {
+    if (v.hobbsIn < v.hobbsOut) ctx.addIssue({ code: "custom", path: ["hobbsIn"], message: "Hobbs in cannot be less than Hobbs out." });
+    if (v.tachIn < v.tachOut) ctx.addIssue({ code: "custom", path: ["tachIn"], message: "Tach in cannot be less than tach out." });
+    if (v.hobbsIn - v.hobbsOut > 24) ctx.addIssue({ code: "custom", path: ["hobbsIn"], message: "More than 24 h on one flight: check the Hobbs readings." });
+    if (v.tachIn - v.tachOut > 24) ctx.addIssue({ code: "custom", path: ["tachIn"], message: "More than 24 h on one flight: check the tach readings." });
+    if (v.dayLandings + v.nightFullStopLandings === 0) ctx.addIssue({ code: "custom", path: ["dayLandings"], message: "Enter the landings: at least one, day or night." });
+    if (v.squawk !== null && v.squawk.length < 5) ctx.addIssue({ code: "custom", path: ["squawk"], message: "Describe the squawk in a few words (at least 5 characters), or leave it empty." });
+  });
+
+export const feedTokenSchema = z.object({ intent: z.enum(["create", "revoke"], { error: "Choose what to do with the calendar link." }) });
+
+/** Query of the fleet views and the JSON list: a day or a week around a date. */
+export const bookingRangeSchema = z.object({
+  view: z.enum(["day", "week"]).default("week"),
+  date: z
+    .string()
+    .trim()
+    .refine((v) => isIsoDate(v), { error: "Give the date as YYYY-MM-DD." })
+    .optional(),
+});
+
+export type CreateBookingInput = z.output<typeof createBookingSchema>;
+export type ChangeBookingInput = z.output<typeof changeBookingSchema>;
+export type CheckInInput = z.output<typeof checkInSchema>;

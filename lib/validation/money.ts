@@ -1,0 +1,205 @@
+import { z } from "zod";
+import { isIsoDate } from "@/lib/dates";
+import { DUES_PERIODS, MEMBER_CATEGORIES } from "@/db/schema/money";
+
+// Amounts are typed in major units ("95", "95.50") and turned into minor units of the club's
+// currency by the action (lib/actions/money/amounts.ts), which knows the currency.
+
+const text = (label: string, max: number) =>
+  z.string({ error: `Enter ${label}.` }).trim().min(1, { error: `Enter ${label}.` }).max(max, { error: `Keep ${label} under ${max} characters.` });
+
+const optionalText = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, { error: `Keep it under ${max} characters.` })
+    .optional()
+    .transform((v) => (v ? v : undefined));
+
+export const isoDateField = (label: string) =>
+  z
+    .string({ error: `Enter ${label}.` })
+    .trim()
+    .refine((v) => isIsoDate(v), { error: `Enter ${label} as a calendar date, like 2026-05-01.` });
+
+export const monthField = z
+  .string({ error: "Choose the month, like 2026-05." })
+  .trim()
+  .regex(/^\d{4}-(0[1-9]|1[0-2])$/, { error: "Choose the month, like 2026-05." });
+
+/** A positive amount in major units, at most two decimals. */
+export const amountField = (label: string) =>
+  z
+    .string({ error: `Enter ${label}.` })
+    .trim()
+    .transform((v) => v.replace(/,/g, ""))
+    .pipe(z.string().regex(/^\d{1,9}(\.\d{1,2})?$/, { error: `Enter ${label} as a number, like 95 or 95.50.` }))
+    .refine((v) => Number(v) > 0, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be more than zero.` });
+
+/** Zero or more, for settings. */
+export const amountOrZeroField = (label: string) =>
+  z
+    .string({ error: `Enter ${label}.` })
+    .trim()
+    .transform((v) => (v === "" ? "0" : v.replace(/,/g, "")))
+    .pipe(z.string().regex(/^\d{1,9}(\.\d{1,2})?$/, { error: `Enter ${label} as a number, like 0, 15 or 15.50.` }));
+
+/** A balance as printed on a statement: may be negative (an overdrawn account). */
+export const signedAmountField = (label: string) =>
+  z
+    .string({ error: `Enter ${label}.` })
+    .trim()
+    .transform((v) => v.replace(/[,\s]/g, "").replace(/^\((.*)\)$/, "-$1"))
+    .pipe(z.string().regex(/^-?\d{1,10}(\.\d{1,2})?$/, { error: `Enter ${label} as printed on the statement, like 4210.55 or -12.00.` }));
+
+const id = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, { error: `Choose ${what}.` }).max(100);
+
+const checkbox = z
+  .union([z.literal("on"), z.literal("true"), z.literal("false"), z.literal("")])
+  .optional()
+  .transform((v) => v === "on" || v === "true");
+
+export const billingRunSchema = z.object({ month: monthField });
+
+export const duesPlanSchema = z.object({
+  planId: z.string().trim().max(100).optional().transform((v) => v || undefined),
+  name: text("a name for the plan", 80),
+  period: z.enum(DUES_PERIODS, { error: "Choose monthly, quarterly or annual." }),
+  category: z.enum(MEMBER_CATEGORIES, { error: "Choose the member category the plan is for." }),
+  amount: amountOrZeroField("the amount per period"),
+  active: checkbox,
+});
+
+export const assignDuesSchema = z.object({
+  memberUserId: id("a member"),
+  planId: z.string().trim().max(100).optional().transform((v) => v || undefined),
+  startsOn: isoDateField("the date the plan starts"),
+});
+
+export const manualPaymentSchema = z.object({
+  memberUserId: id("the member who paid"),
+  method: z.enum(["cheque", "cash", "transfer"], { error: "Choose cheque, cash or bank transfer." }),
+  amount: amountField("the amount received"),
+  receivedOn: isoDateField("the date it was received"),
+  reference: optionalText(60),
+});
+
+export const refundSchema = z.object({
+  paymentId: id("the payment to refund"),
+  amount: amountField("the amount to refund"),
+  treatment: z.enum(["reopen", "absorb"], { error: "Choose whether the member owes it again or the club bears it." }),
+});
+
+export const ADJUSTMENT_ACCOUNTS = ["dues-income", "flight-income", "late-fee-income", "fuel-credits", "refunds"] as const;
+
+export const adjustmentSchema = z.object({
+  memberUserId: id("a member"),
+  direction: z.enum(["charge", "credit"], { error: "Choose charge or credit." }),
+  account: z.enum(ADJUSTMENT_ACCOUNTS, { error: "Choose the account the adjustment belongs to." }),
+  amount: amountField("the amount"),
+  date: isoDateField("the date"),
+  memo: text("what it is for (shown on the statement)", 140),
+});
+
+export const reverseEntrySchema = z.object({
+  entryId: id("the entry"),
+  date: z
+    .string()
+    .trim()
+    .optional()
+    .transform((v) => v || undefined)
+    .refine((v) => v === undefined || isIsoDate(v), { error: "Enter the date as a calendar date, like 2026-05-01." }),
+});
+
+export const DATE_FORMATS = ["ISO", "MM/DD/YYYY", "DD/MM/YYYY", "DD.MM.YYYY"] as const;
+
+const column = optionalText(80);
+
+export const bankImportSchema = z
+  .object({
+    format: z.enum(["csv", "ofx"], { error: "Choose CSV or OFX." }),
+    closingBalance: z
+      .string()
+      .trim()
+      .optional()
+      .transform((v) => v || undefined)
+      .pipe(signedAmountField("the closing balance").optional()),
+    periodStart: z.string().trim().optional().transform((v) => v || undefined).refine((v) => v === undefined || isIsoDate(v), { error: "Enter the first day as a date, like 2026-04-01." }),
+    periodEnd: z.string().trim().optional().transform((v) => v || undefined).refine((v) => v === undefined || isIsoDate(v), { error: "Enter the last day as a date, like 2026-04-30." }),
+    dateColumn: column,
+    amountColumn: column,
+    debitColumn: column,
+    creditColumn: column,
+    descriptionColumn: column,
+    referenceColumn: column,
+    sign: z.enum(["deposits-positive", "deposits-negative"], { error: "Choose how the amount column is signed." }).default("deposits-positive"),
+    dateFormat: z.enum(DATE_FORMATS, { error: "Choose the date format of the file." }).default("ISO"),
+    delimiter: z.enum([",", ";", "tab"], { error: "Choose the separator." }).default(","),
+    decimalComma: checkbox,
+  })
+  .superRefine((v, ctx) => {
+    if (v.format !== "csv") return;
+    if (!v.dateColumn) ctx.addIssue({ code: "custom", path: ["dateColumn"], message: "Name the column that holds the date." });
+    if (!v.amountColumn && !v.debitColumn && !v.creditColumn) ctx.addIssue({ code: "custom", path: ["amountColumn"], message: "Name the amount column, or the debit and credit columns." });
+    if (v.amountColumn && (v.debitColumn || v.creditColumn)) ctx.addIssue({ code: "custom", path: ["amountColumn"], message: "Use either one amount column or debit and credit columns, not both." });
+    if (!v.closingBalance) ctx.addIssue({ code: "custom", path: ["closingBalance"], message: "Enter the closing balance printed on the statement (a CSV file does not carry it)." });
+  });
+
+export const statementIdSchema = z.object({ statementId: id("a statement") });
+export const bankLineSchema = z.object({ bankLineId: id("a bank line") });
+export const ignoreLineSchema = z.object({ bankLineId: id("a bank line"), ignored: z.enum(["true", "false"]).transform((v) => v === "true") });
+
+export const manualMatchSchema = z.object({
+  bankLineId: id("a bank line"),
+  bookIds: z
+    .union([z.string(), z.array(z.string())], { error: "Choose at least one item from the books." })
+    .transform((v) => (Array.isArray(v) ? v : [v]).filter(Boolean))
+    .refine((v) => v.length > 0, { error: "Choose at least one item from the books." }),
+});
+
+export const BOOK_ACCOUNTS = ["bank-fees", "processor-fees", "late-fee-income", "dues-income", "flight-income", "member-credits", "retained-funds"] as const;
+
+export const bookLineSchema = z.object({
+  bankLineId: id("a bank line"),
+  account: z.enum(BOOK_ACCOUNTS, { error: "Choose the account for this bank item." }),
+  memo: optionalText(140),
+});
+
+const wholeNumber = (label: string, min: number, max: number) =>
+  z.coerce
+    .number({ error: `Enter ${label} as a whole number.` })
+    .int({ error: `Enter ${label} as a whole number.` })
+    .min(min, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be at least ${min}.` })
+    .max(max, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be at most ${max}.` });
+
+export const rateProfileSchema = z.object({
+  name: text("a name (an aircraft or a scenario)", 60),
+  fixedAnnualCosts: amountOrZeroField("the fixed costs per year"),
+  expectedHours: wholeNumber("the hours flown per year", 1, 5000),
+  fuelBurn: z
+    .string({ error: "Enter the fuel burn per hour." })
+    .trim()
+    .regex(/^\d{1,3}(\.\d)?$/, { error: "Enter the fuel burn per hour with at most one decimal, like 8.5." }),
+  fuelPrice: amountOrZeroField("the fuel price per unit"),
+  oilPerHour: amountOrZeroField("the oil cost per hour"),
+  maintenanceReserve: amountOrZeroField("the maintenance reserve per hour"),
+  overhaulCost: amountOrZeroField("the engine overhaul cost"),
+  tboHours: wholeNumber("the engine's TBO in hours", 1, 10000),
+});
+
+export const moneySettingsSchema = z.object({
+  paymentTermsDays: wholeNumber("the payment terms in days", 0, 120),
+  lateFeeFlat: amountOrZeroField("the late fee"),
+  lateFeePercent: z
+    .string()
+    .trim()
+    .transform((v) => v || "0")
+    .pipe(z.string().regex(/^\d{1,2}(\.\d{1,2})?$/, { error: "Enter the late fee percentage, like 1.5 (or 0)." })),
+  fuelCreditCap: amountOrZeroField("the most the club credits per unit of fuel"),
+});
+
+export const emailStatementSchema = z.object({ memberUserId: id("a member"), month: monthField });
+
+export const emptySchema = z.object({});
+
+export type BankImportInput = z.output<typeof bankImportSchema>;

@@ -1,0 +1,94 @@
+import { describe, expect, it } from "vitest";
+import { deflateSync } from "node:zlib";
+import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harness";
+
+// Uses Cottonwood Flyers' N0488C (no other browser test relies on it) so grounding it here
+// cannot change what the other tests see.
+const CLUB = "/clubs/cottonwood-flyers";
+const REG = "N0488C";
+
+/** A small real PNG made here: 8×8 grey pixels, chunks with their CRC-32 (PNG specification). */
+function pngBytes(): Buffer {
+  const crcTable = Array.from({ length: 256 }, (_, n) => {
+    let c = n;
+    for (let k = 0; k < 8; k++) c = c & 1 ? 0xedb88320 ^ (c >>> 1) : c >>> 1;
+    return c >>> 0;
+  });
+  const crc = (buf: Buffer) => {
+    let c = 0xffffffff;
+    for (const b of buf) c = crcTable[(c ^ b) & 0xff]! ^ (c >>> 8);
+    return (c ^ 0xffffffff) >>> 0;
+  };
+  const chunk = (type: string, data: Buffer) => {
+    const body = Buffer.concat([Buffer.from(type, "ascii"), data]);
+    const out = Buffer.alloc(8 + data.length + 4);
+    out.writeUInt32BE(data.length, 0);
+    body.copy(out, 4);
+    out.writeUInt32BE(crc(body), 8 + data.length);
+    return out;
+  };
+  const ihdr = Buffer.alloc(13);
+  ihdr.writeUInt32BE(8, 0);
+  ihdr.writeUInt32BE(8, 4);
+  ihdr.set([8, 0, 0, 0, 0], 8); // 8-bit greyscale
+  const rows = Buffer.concat(Array.from({ length: 8 }, () => Buffer.from([0, ...Array(8).fill(0x80)])));
+  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk("IHDR", ihdr), chunk("IDAT", deflateSync(rows)), chunk("IEND", Buffer.alloc(0))]);
+}
+
+describe("flight line and squawks in the browser", () => {
+  it("the flight line shows every aircraft with a status word and the airworthiness caution", async () => {
+    const page = await newPage("desktop");
+    await signIn(page, "cottonwood.pilot@hangarline.test");
+    await page.goto(`${CLUB}/flight-line`);
+    await expect(page.getByRole("note", { name: "Airworthiness caution" }).textContent()).resolves.toMatch(/pilot in command decides airworthiness/i);
+    const cards = page.locator("article[data-registration]");
+    expect(await cards.count()).toBe(2);
+    for (const card of await cards.all()) {
+      expect(await card.locator("[data-status] svg[data-shape]").count()).toBe(1); // a shape beside the word
+      expect(await card.locator("[data-status]").first().textContent()).toMatch(/Flyable|Flyable with limits|Grounded|Check status/);
+    }
+    await screenshot(page, "fleet-flight-line-desktop");
+  });
+
+  it("a member on a phone reports a squawk with a photo; the flight line then shows the aircraft grounded with the reason", async () => {
+    const page = await newPage("phone");
+    await signIn(page, "cottonwood.pilot@hangarline.test");
+    await page.goto(`${CLUB}/flight-line`);
+    const card = page.locator(`article[data-registration="${REG}"]`);
+    expect(await card.getAttribute("data-status")).not.toBe("grounded");
+    await expectNoHorizontalOverflow(page);
+
+    await card.getByRole("link", { name: REG }).click();
+    await page.waitForURL(/\/aircraft\/[^/]+$/);
+    await expect(page.getByRole("note", { name: "Airworthiness caution" }).isVisible()).resolves.toBe(true);
+    const description = `Aileron hinge pin walking out, right wing ${Date.now()}`;
+    const form = page.getByRole("form", { name: `Report a squawk on ${REG}` });
+    await form.getByLabel("What did you find?").fill(description);
+    await form.getByLabel("Found during").selectOption("preflight");
+    await form.getByLabel("I think this may make the aircraft unsafe to fly").check();
+    await form.getByLabel("Photos (optional)").setInputFiles({ name: "hinge.png", mimeType: "image/png", buffer: pngBytes() });
+    await form.getByRole("button", { name: "Report squawk" }).click();
+    await page.getByText("Squawk reported.").waitFor();
+    await page.getByRole("img", { name: "Photo: hinge.png" }).waitFor();
+    await expectNoHorizontalOverflow(page);
+
+    await page.goto(`${CLUB}/flight-line`);
+    const after = page.locator(`article[data-registration="${REG}"]`);
+    expect(await after.getAttribute("data-status")).toBe("grounded");
+    await after.getByText("Grounded", { exact: true }).waitFor();
+    await after.getByText(`Squawk reported as affecting airworthiness, awaiting triage: ${description}`).waitFor();
+    await expectNoHorizontalOverflow(page);
+    await screenshot(page, "fleet-flight-line-phone-grounded");
+  });
+
+  it("maintenance sees the squawk with its photo in the work queue", async () => {
+    const page = await newPage("desktop");
+    await signIn(page, "cottonwood.maint@hangarline.test");
+    await page.goto(`${CLUB}/maintenance`);
+    const queue = page.getByRole("region", { name: "Squawks awaiting triage" });
+    await queue.getByText(/Aileron hinge pin walking out/).first().waitFor();
+    await queue.getByRole("img", { name: "Photo: hinge.png" }).first().waitFor();
+    await expectNoHorizontalOverflow(page);
+    await screenshot(page, "fleet-maintenance-desktop");
+  });
+});
