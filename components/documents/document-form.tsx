@@ -4,6 +4,7 @@ import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
+import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordDocument } from "@/lib/actions/documents/record-document";
 import { DOCUMENT_KINDS, type DocumentKind } from "@/db/schema/safety";
 import { DOCUMENT_KIND_LABELS } from "@/lib/safety/labels";
@@ -16,12 +17,13 @@ const COPY: Record<DocumentKind, { issued: string; reference: string; details: s
 };
 
 export function DocumentForm({ slug, today }: { slug: string; today: string }) {
-  const [state, action] = useActionState(recordDocument, initialActionState);
+  const [state, action, pending] = useActionState(recordDocument, initialActionState);
+  const formRef = useResetOnSuccess(state);
   const [kind, setKind] = useState<DocumentKind>("pilot_certificate");
   const copy = COPY[kind];
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Record a document" key={state.ok ? `${state.message}-${Date.now()}` : "doc"}>
+    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Record a document">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <SelectField label="Document" name="kind" value={kind} onChange={(ev) => setKind(ev.target.value as DocumentKind)} errors={e.kind}>
@@ -37,7 +39,7 @@ export function DocumentForm({ slug, today }: { slug: string; today: string }) {
       </div>
       {kind === "flight_review" ? <p className="mb-4 text-sm text-ink-700">Valid through the end of the 24th calendar month after the review month (14 CFR 61.56(c)); Hangarline works the date out.</p> : null}
       <Field label="Scan or photo (optional)" name="file" type="file" accept="application/pdf,image/jpeg,image/png,image/webp,image/heic" errors={e.file} hint="PDF or photo, up to 10 MB. Instructors, the safety officer and club admins can open it." />
-      <SubmitButton>Record document</SubmitButton>
+      <SubmitButton disabled={pending}>Record document</SubmitButton>
     </form>
   );
 }

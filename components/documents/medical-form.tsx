@@ -4,14 +4,16 @@ import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
+import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordMedical } from "@/lib/actions/documents/record-medical";
 
 export function MedicalForm({ slug, today, hasBirthDate }: { slug: string; today: string; hasBirthDate: boolean }) {
-  const [state, action] = useActionState(recordMedical, initialActionState);
+  const [state, action, pending] = useActionState(recordMedical, initialActionState);
+  const formRef = useResetOnSuccess(state);
   const [kind, setKind] = useState<"faa_class" | "basicmed">("faa_class");
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Record a medical" key={state.ok ? `${state.message}-${Date.now()}` : "medical"}>
+    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Record a medical">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-2">
@@ -40,7 +42,7 @@ export function MedicalForm({ slug, today, hasBirthDate }: { slug: string; today
         />
       </div>
       <Field label="Limitations (optional)" name="limitations" maxLength={500} errors={e.limitations} hint="Seen only by you and club admins." />
-      <SubmitButton>Record medical</SubmitButton>
+      <SubmitButton disabled={pending}>Record medical</SubmitButton>
     </form>
   );
 }

@@ -4,13 +4,15 @@ import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
+import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordOutsideFlight } from "@/lib/actions/documents/record-outside-flight";
 
 export function OutsideFlightForm({ slug, today, typeGroups }: { slug: string; today: string; typeGroups: string[] }) {
-  const [state, action] = useActionState(recordOutsideFlight, initialActionState);
+  const [state, action, pending] = useActionState(recordOutsideFlight, initialActionState);
+  const formRef = useResetOnSuccess(state);
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Add a flight from elsewhere" key={state.ok ? `${state.message}-${Date.now()}` : "outside"}>
+    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Add a flight from elsewhere">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-2">
@@ -26,7 +28,7 @@ export function OutsideFlightForm({ slug, today, typeGroups }: { slug: string; t
         </SelectField>
         <Field label="Note (optional)" name="note" maxLength={500} errors={e.note} />
       </div>
-      <SubmitButton>Add flight</SubmitButton>
+      <SubmitButton disabled={pending}>Add flight</SubmitButton>
     </form>
   );
 }

@@ -21,7 +21,7 @@ const METHOD_WORDS: Record<string, string> = { card: "Card", cheque: "Cheque", c
 /** A member's account, for the member themself and for the treasurer looking at it. */
 export function AccountView({ data, currency, slug, userId, statementHref, payButton }: { data: AccountViewData; currency: string; slug: string; userId: string; statementHref: (month: string) => string; payButton?: React.ReactNode }) {
   return (
-    <div className="grid gap-6">
+    <div className="grid grid-cols-1 gap-6">
       <section className="card" aria-labelledby="balance-h">
         <h2 id="balance-h" className="text-lg font-bold">Balance</h2>
         <p className="mt-1 text-3xl font-bold" data-testid="account-balance"><Money minor={data.balanceMinor} currency={currency} credit /></p>
@@ -46,7 +46,7 @@ export function AccountView({ data, currency, slug, userId, statementHref, payBu
           </ul>
         )}
       </section>
-      <section aria-labelledby="activity-h">
+      <section aria-labelledby="activity-h" className="min-w-0">
         <h2 id="activity-h" className="mb-2 text-lg font-bold">Activity</h2>
         <DataTable
           label="Account activity"

@@ -60,7 +60,7 @@ export function RateCalculator({ slug, currency, unit, profiles, canSave }: { sl
   const money = (m: number) => formatMoney(m, currency);
   const major = (m: number) => Number(minorToDecimalString(m, currencyExponent(currency)));
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
       <form action={action} className="card" aria-label="Hourly-rate calculator" noValidate>
         <FormMessage state={state} />
         <input type="hidden" name="club" value={slug} />
@@ -83,7 +83,7 @@ export function RateCalculator({ slug, currency, unit, profiles, canSave }: { sl
         ))}
         {canSave ? <SubmitButton pendingText="Saving…">Save this calculation</SubmitButton> : null}
       </form>
-      <div className="grid min-w-0 gap-6">
+      <div className="grid min-w-0 grid-cols-1 gap-6">
         <section className="card" aria-label="Break-even rate" aria-live="polite">
           {result ? (
             <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3">

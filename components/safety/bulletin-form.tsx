@@ -1,10 +1,10 @@
 "use client";
 import { useActionState, useState } from "react";
-import { useFormStatus } from "react-dom";
 import { buttonClass } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { initialActionState } from "@/lib/actions/action-state";
+import { keepFormOnSubmit } from "@/components/safety/kept-form";
 import { createBulletin } from "@/lib/actions/safety/create-bulletin";
 import { updateDraft } from "@/lib/actions/safety/update-draft";
 import { BULLETIN_URGENCIES, type BulletinAudience, type BulletinUrgency } from "@/db/schema/safety";
@@ -31,8 +31,7 @@ type Props = {
   today: string;
 };
 
-function IntentButtons({ canPublish, revision }: { canPublish: boolean; revision: boolean }) {
-  const { pending } = useFormStatus();
+function IntentButtons({ canPublish, revision, pending }: { canPublish: boolean; revision: boolean; pending: boolean }) {
   return (
     <div className="flex flex-wrap gap-3">
       {canPublish ? (
@@ -48,11 +47,11 @@ function IntentButtons({ canPublish, revision }: { canPublish: boolean; revision
 }
 
 export function BulletinForm({ slug, typeGroups, canPublish, initial = {}, bulletinId, supersedesId, sourceReportId, today }: Props) {
-  const [state, action] = useActionState(bulletinId ? updateDraft : createBulletin, initialActionState);
+  const [state, action, pending] = useActionState(bulletinId ? updateDraft : createBulletin, initialActionState);
   const [audience, setAudience] = useState<BulletinAudience>(initial.audience ?? "everyone");
   const errors = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label={bulletinId ? "Edit draft bulletin" : supersedesId ? "Revise bulletin" : "New bulletin"} className="max-w-3xl">
+    <form action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label={bulletinId ? "Edit draft bulletin" : supersedesId ? "Revise bulletin" : "New bulletin"} className="max-w-3xl">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       {bulletinId ? <input type="hidden" name="bulletinId" value={bulletinId} /> : null}
@@ -105,7 +104,7 @@ export function BulletinForm({ slug, typeGroups, canPublish, initial = {}, bulle
         <Field label="Attachment (optional)" name="attachment" type="file" accept="application/pdf,image/jpeg,image/png,image/webp,image/heic" errors={errors.attachment} hint="PDF or photo, up to 10 MB." />
       </div>
       {supersedesId ? <p className="mb-4 rounded border border-sand-300 bg-sand-50 p-3 text-sm">Publishing makes this the current version. The earlier version stays on record, marked as replaced, and members are asked to acknowledge the new one.</p> : null}
-      <IntentButtons canPublish={canPublish} revision={!!supersedesId} />
+      <IntentButtons canPublish={canPublish} revision={!!supersedesId} pending={pending} />
     </form>
   );
 }

@@ -4,14 +4,16 @@ import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
+import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { fileReport } from "@/lib/actions/safety/file-report";
 import { CONTRIBUTING_FACTORS, FACTOR_LABELS } from "@/lib/safety/labels";
 
 export function ReportForm({ slug, aircraft, today }: { slug: string; aircraft: { id: string; label: string }[]; today: string }) {
-  const [state, action] = useActionState(fileReport, initialActionState);
+  const [state, action, pending] = useActionState(fileReport, initialActionState);
+  const formRef = useResetOnSuccess(state);
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="File a safety report" className="max-w-3xl">
+    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="File a safety report" className="max-w-3xl">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-3">
@@ -51,7 +53,7 @@ export function ReportForm({ slug, aircraft, today }: { slug: string; aircraft: 
           <span className="block text-sm text-ink-700">Your name is not stored with the report at all — not hidden, absent. The safety officer cannot ask you questions, and you will not be able to look the report up later.</span>
         </span>
       </label>
-      <SubmitButton pendingText="Filing…">File the report</SubmitButton>
+      <SubmitButton disabled={pending} pendingText="Filing…">File the report</SubmitButton>
     </form>
   );
 }

@@ -4,15 +4,17 @@ import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
+import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { groundFromReport } from "@/lib/actions/safety/ground-from-report";
 import { triageReport } from "@/lib/actions/safety/triage-report";
 import type { ReportStatus } from "@/db/schema/safety";
 import { REPORT_STATUS_LABELS } from "@/lib/safety/labels";
 
 export function TriageForm({ slug, reportId, next }: { slug: string; reportId: string; next: readonly ReportStatus[] }) {
-  const [state, action] = useActionState(triageReport, initialActionState);
+  const [state, action, pending] = useActionState(triageReport, initialActionState);
+  const formRef = useResetOnSuccess(state);
   return (
-    <form action={action} noValidate aria-label="Change report state" key={state.ok ? state.message : "triage"}>
+    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Change report state">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="reportId" value={reportId} />
@@ -22,15 +24,16 @@ export function TriageForm({ slug, reportId, next }: { slug: string; reportId: s
         ))}
       </SelectField>
       <Field label="Note" name="note" maxLength={4000} errors={state.fieldErrors.note} hint="Required for “Action taken” and “Closed”: what was done, or why it is closed." />
-      <SubmitButton>Save</SubmitButton>
+      <SubmitButton disabled={pending}>Save</SubmitButton>
     </form>
   );
 }
 
 export function GroundFromReportForm({ slug, reportId, aircraft, preselected }: { slug: string; reportId: string; aircraft: { id: string; label: string }[]; preselected: string | null }) {
-  const [state, action] = useActionState(groundFromReport, initialActionState);
+  const [state, action, pending] = useActionState(groundFromReport, initialActionState);
+  const formRef = useResetOnSuccess(state);
   return (
-    <form action={action} noValidate aria-label="Ground an aircraft">
+    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Ground an aircraft">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="reportId" value={reportId} />
@@ -41,7 +44,7 @@ export function GroundFromReportForm({ slug, reportId, aircraft, preselected }: 
         ))}
       </SelectField>
       <Field label="Reason (sent to every member)" name="reason" maxLength={1000} errors={state.fieldErrors.reason} />
-      <SubmitButton variant="danger" pendingText="Grounding…">Ground the aircraft</SubmitButton>
+      <SubmitButton disabled={pending} variant="danger" pendingText="Grounding…">Ground the aircraft</SubmitButton>
     </form>
   );
 }

@@ -5,7 +5,10 @@ import { flights, type Aircraft, type Club } from "@/db/schema";
 import { averageFlightHours, DEFAULT_FLIGHT_HOURS, projectedMeterHours } from "@/lib/bookings/average-flight";
 import type { GuardInput } from "@/lib/bookings/guards";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { buildFlightLineEntry } from "@/lib/fleet/flight-line";
+import { aircraftStatus, type AircraftStatusResult } from "@/lib/airworthiness";
+import type { FleetRecords } from "@/lib/fleet/flight-line";
+import { buildStatusInput, maintenanceHours } from "@/lib/fleet/status-input";
+import type { FleetAircraftRecord } from "@/lib/fleet/types";
 import { memberArrears } from "@/lib/ledger/arrears";
 import { formatMoney } from "@/lib/money";
 import { normalizeTypeGroup } from "@/lib/safety/audience";
@@ -35,14 +38,22 @@ export function aircraftAverageFlightHours(db: Handle, clubId: string, plane: Pi
   return averageFlightHours(rows.map((r) => (tach ? { out: r.tachOut, in: r.tachIn } : { out: r.hobbsOut, in: r.hobbsIn }))) ?? DEFAULT_FLIGHT_HOURS;
 }
 
+/** The flight line's own status rules on one aircraft's records; never "flyable" by default. */
+function statusOf(records: FleetRecords, record: FleetAircraftRecord, today: string, now: string, soon: { days: number; hours: number }): AircraftStatusResult {
+  try {
+    return aircraftStatus(buildStatusInput({ ...records, aircraft: record, dueSoon: soon, now }), today, maintenanceHours(record));
+  } catch (error) {
+    return { status: "unknown", reasons: [{ code: "status-error", text: `Status could not be computed from the records: ${error instanceof Error ? error.message : String(error)}`, grounding: false }] };
+  }
+}
+
 export function aircraftStatusNowAndAtEnd(db: Handle, club: Club, plane: Aircraft, window: { startsAt: Date; endsAt: Date }, now: Date, excludeBookingId?: string) {
   const records = loadFleetRecords(db as Db, club.id, plane.id);
   const record = records.aircraft[0];
   const soon = { days: club.settings.dueSoonDays, hours: club.settings.dueSoonHours };
   const average = aircraftAverageFlightHours(db, club.id, plane);
   if (!record) return { statusNow: { status: "unknown" as const, reasons: [] }, statusAtEnd: null, average };
-  const today = isoDateInTimeZone(now, club.timeZone);
-  const entryNow = buildFlightLineEntry({ ...records, aircraft: record }, today, now.toISOString(), soon);
+  const statusNow = statusOf(records, record, isoDateInTimeZone(now, club.timeZone), now.toISOString(), soon);
 
   // Every active booking that ends after now and starts before this one ends flies about one
   // average flight first (this booking included, counted once even while it is being changed).
@@ -51,12 +62,8 @@ export function aircraftStatusNowAndAtEnd(db: Handle, club: Club, plane: Aircraf
   const projected = projectedMeterHours(meter, average, Math.max(ahead, 1));
   const endRecord = record.maintenanceMeter === "hobbs" ? { ...record, currentHobbs: projected } : { ...record, currentTach: projected };
   const end = window.endsAt.getTime() > now.getTime() ? window.endsAt : now;
-  const entryEnd = buildFlightLineEntry({ ...records, aircraft: endRecord }, isoDateInTimeZone(end, club.timeZone), end.toISOString(), soon);
-  return {
-    statusNow: { status: entryNow.status, reasons: entryNow.reasons },
-    statusAtEnd: projected === null ? null : { status: entryEnd.status, reasons: entryEnd.reasons },
-    average,
-  };
+  const statusAtEnd = projected === null ? null : statusOf(records, endRecord, isoDateInTimeZone(end, club.timeZone), end.toISOString(), soon);
+  return { statusNow, statusAtEnd, average };
 }
 
 export function loadGuardInput(

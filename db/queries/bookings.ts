@@ -137,3 +137,21 @@ export function countActiveBookingsBetween(db: Handle, clubId: string, aircraftI
     .get();
   return Number(row?.n ?? 0);
 }
+
+export type SheetRow = { id: string; aircraftId: string; userId: string; instructorId: string | null; startsAt: Date; endsAt: Date; status: BookingRow["status"]; registration: string; memberName: string | null; memberEmail: string; instructorName: string | null };
+
+/** The fleet sheet's narrow read: only what a block on the track shows. */
+export function listSheetBookings(db: Handle, clubId: string, from: Date, to: Date): SheetRow[] {
+  return db
+    .select({
+      id: bookings.id, aircraftId: bookings.aircraftId, userId: bookings.userId, instructorId: bookings.instructorId, startsAt: bookings.startsAt, endsAt: bookings.endsAt, status: bookings.status,
+      registration: aircraft.registration, memberName: member.name, memberEmail: member.email, instructorName: instructor.name,
+    })
+    .from(bookings)
+    .innerJoin(aircraft, and(eq(aircraft.id, bookings.aircraftId), eq(aircraft.clubId, bookings.clubId)))
+    .innerJoin(member, eq(member.id, bookings.userId))
+    .leftJoin(instructor, eq(instructor.id, bookings.instructorId))
+    .where(and(eq(bookings.clubId, clubId), lt(bookings.startsAt, to), gt(bookings.startsAt, new Date(from.getTime() - MAX_BOOKING_MS)), gt(bookings.endsAt, from), ne(bookings.status, "cancelled")))
+    .orderBy(asc(bookings.startsAt))
+    .all();
+}

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, desc, eq, gt, lt, ne } from "drizzle-orm";
+import { and, asc, desc, eq, gt, isNull, lt, ne } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { aircraft, flights, users, type FlightRow } from "@/db/schema";
 
@@ -7,7 +7,7 @@ type Handle = Db | Tx;
 
 export type FlightListRow = FlightRow & { registration: string; pilotName: string | null };
 
-export function listFlights(db: Handle, clubId: string, opts: { aircraftId?: string; flaggedOnly?: boolean; limit?: number } = {}): FlightListRow[] {
+export function listFlights(db: Handle, clubId: string, opts: { aircraftId?: string; flaggedOnly?: boolean; unreviewedOnly?: boolean; limit?: number } = {}): FlightListRow[] {
   const rows = db
     .select({ flight: flights, registration: aircraft.registration, pilotName: users.name })
     .from(flights)
@@ -18,6 +18,7 @@ export function listFlights(db: Handle, clubId: string, opts: { aircraftId?: str
         eq(flights.clubId, clubId),
         opts.aircraftId ? eq(flights.aircraftId, opts.aircraftId) : undefined,
         opts.flaggedOnly ? ne(flights.continuity, "ok") : undefined,
+        opts.unreviewedOnly ? isNull(flights.continuityReviewedAt) : undefined,
       ),
     )
     .orderBy(desc(flights.hobbsOut))
@@ -42,5 +43,5 @@ export function findNeighbourFlights(tx: Handle, clubId: string, aircraftId: str
 
 /** Flagged flights nobody has looked at yet, for the maintenance page. */
 export function listUnreviewedFlags(db: Handle, clubId: string): FlightListRow[] {
-  return listFlights(db, clubId, { flaggedOnly: true, limit: 200 }).filter((f) => !f.continuityReviewedAt);
+  return listFlights(db, clubId, { flaggedOnly: true, unreviewedOnly: true, limit: 200 });
 }

@@ -4,7 +4,7 @@
 // bank reconciled and locked through the month before last (its last month is left to do).
 import { and, eq } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
-import { aircraft, bankLines, clubs, duesPlans, flights, memberDues, memberships, moneySettings, payments, type Club } from "@/db/schema";
+import { aircraft, bankLines, clubs, duesPlans, flights, memberDues, memberships, moneySettings, payments, rateProfiles, type Club } from "@/db/schema";
 import { addDays, isoDateInTimeZone, type IsoDate } from "@/lib/dates";
 import { accountId, memberAccountId } from "@/lib/ledger/accounts";
 import { memberMovements } from "@/lib/ledger/balances";
@@ -42,6 +42,13 @@ const PLANS: Record<ClubKey, { name: string; period: "monthly" | "quarterly" | "
     { name: "Vollmitglied (full), monthly", period: "monthly", category: "full", amountMinor: 7_000 },
     { name: "Jugend (youth), monthly", period: "monthly", category: "student", amountMinor: 3_000 },
   ],
+};
+
+// Invented cost figures for the hourly-rate calculator (own round numbers, not any real aircraft's).
+const RATES: Record<ClubKey, { name: string; fixedAnnualCostsMinor: number; expectedHours: number; fuelBurnTenthsPerHour: number; fuelPriceMinor: number; oilPerHourMinor: number; maintenanceReservePerHourMinor: number; overhaulCostMinor: number; tboHours: number }> = {
+  cottonwood: { name: "N0471C Larkspur L-2", fixedAnnualCostsMinor: 1_440_000, expectedHours: 320, fuelBurnTenthsPerHour: 62, fuelPriceMinor: 640, oilPerHourMinor: 120, maintenanceReservePerHourMinor: 1_800, overhaulCostMinor: 2_600_000, tboHours: 2_000 },
+  lakeshore: { name: "N0512L Kestrel K160", fixedAnnualCostsMinor: 1_800_000, expectedHours: 300, fuelBurnTenthsPerHour: 85, fuelPriceMinor: 660, oilPerHourMinor: 150, maintenanceReservePerHourMinor: 1_200, overhaulCostMinor: 3_000_000, tboHours: 2_000 },
+  silberau: { name: "D-0SLA Larkspur L-2", fixedAnnualCostsMinor: 1_250_000, expectedHours: 260, fuelBurnTenthsPerHour: 240, fuelPriceMinor: 245, oilPerHourMinor: 110, maintenanceReservePerHourMinor: 1_500, overhaulCostMinor: 2_400_000, tboHours: 2_000 },
 };
 
 const STUDENTS = new Set(["student@hangarline.test"]);
@@ -156,6 +163,8 @@ export function seedMoney(db: Db, foundation: SeededFoundation, opts: { now?: Da
       const ctx: Ctx = { key, club, user: treasurer ? { id: treasurer[1] } : null, today, members: members.map((m) => ({ userId: m.userId, email: emails.get(m.userId) ?? "" })), seq: { n: 0 } };
       const s = SETTINGS[key];
       tx.insert(moneySettings).values({ clubId: club.id, paymentTermsDays: 14, lateFeeFlatMinor: s.lateFeeFlatMinor, fuelCreditCapPerUnitMinor: s.fuelCreditCapPerUnitMinor }).run();
+      const r = RATES[key];
+      tx.insert(rateProfiles).values({ clubId: club.id, ...r }).run();
       const plans = new Map<string, string>();
       for (const p of PLANS[key]) plans.set(p.category, tx.insert(duesPlans).values({ clubId: club.id, currency: club.currency, ...p }).returning({ id: duesPlans.id }).all()[0]!.id);
       const m0 = monthOf(today);
@@ -184,7 +193,8 @@ export function seedMoney(db: Db, foundation: SeededFoundation, opts: { now?: Da
         reconcileMonth(tx, ctx, shiftMonthKey(m0, -3), true);
         reconcileMonth(tx, ctx, shiftMonthKey(m0, -2), true);
       }
-      if (key === "lakeshore") reconcileMonth(tx, ctx, shiftMonthKey(m0, -1), false);
+      // Lakeshore's treasurer has imported three months and not finished: bank fees to post.
+      if (key === "lakeshore") for (const k of [-3, -2, -1]) reconcileMonth(tx, ctx, shiftMonthKey(m0, k), false);
     }
   });
 }

@@ -68,10 +68,11 @@ export function memberBalances(tx: DbLike, clubId: string): Map<string, number> 
 
 export type MemberPosition = OpenItems & { memberUserId: string; oldestDueDate: IsoDate | null };
 
-/** Open items per member from all receivable movements, in one read. */
-export function memberPositions(tx: DbLike, clubId: string, memberUserId?: string): Map<string, MemberPosition> {
+/** Open items per member from all receivable movements (or those `keep` keeps), in one read. */
+export function memberPositions(tx: DbLike, clubId: string, memberUserId?: string, keep: (m: MemberMovementRow) => boolean = () => true): Map<string, MemberPosition> {
   const byMember = new Map<string, MemberMovementRow[]>();
   for (const m of memberMovements(tx, clubId, memberUserId)) {
+    if (!keep(m)) continue;
     const list = byMember.get(m.memberUserId);
     if (list) list.push(m);
     else byMember.set(m.memberUserId, [m]);

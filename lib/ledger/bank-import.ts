@@ -94,9 +94,7 @@ export function storeStatement(tx: DbLike, input: ImportInput): { statementId: s
     .all();
   const rows = input.parsed.lines.map((l, i) => ({ clubId: input.clubId, statementId: statement!.id, lineNo: i + 1, postedOn: l.date, amountMinor: l.amountMinor, description: l.description, reference: l.reference ?? null, dedupeKey: keys[i]! }));
   let imported = 0;
-  for (let i = 0; i < rows.length; i += 200) {
-    imported += tx.insert(bankLines).values(rows.slice(i, i + 200)).onConflictDoNothing().returning({ id: bankLines.id }).all().length;
-  }
+  for (let i = 0; i < rows.length; i += 400) imported += tx.insert(bankLines).values(rows.slice(i, i + 400)).onConflictDoNothing().run().changes;
   const skipped = rows.length - imported;
   tx.update(bankStatements).set({ lineCount: imported, skippedCount: skipped }).where(and(eq(bankStatements.clubId, input.clubId), eq(bankStatements.id, statement!.id))).run();
   return { statementId: statement!.id, imported, skipped };

@@ -9,7 +9,7 @@ import { accountId, memberAccountIds, type DbLike } from "./accounts";
 import { memberPositions } from "./balances";
 import { LedgerError } from "./errors";
 import { monthRange, shiftMonthKey } from "./months";
-import { assertDateOpen, postEntry } from "./post-entry";
+import { assertDateOpen, postEntries, type PostEntryInput } from "./post-entry";
 import { dueDateFor, getMoneySettings, lateFeePolicyOf } from "./settings";
 import { issueStatements } from "./statements";
 
@@ -43,13 +43,16 @@ export function runBillingPeriod(tx: DbLike, ctx: { club: { id: string }; user?:
     .where(and(eq(memberships.clubId, clubId), eq(memberships.status, "active")))
     .all()
     .filter((p) => p.roles.includes("member"));
-  const positions = memberPositions(tx, clubId);
-  const accounts = memberAccountIds(tx, clubId, people.filter((p) => p.planId || (positions.get(p.userId)?.balanceMinor ?? 0) > 0).map((p) => p.userId));
+  // Late fees look at charges from before the month, as they stood on its first day (with every
+  // payment so far): the month's own dues never make the same run charge a fee the second time.
+  const overdue = memberPositions(tx, clubId, undefined, (m) => m.date < start || m.amountMinor < 0);
+  const accounts = memberAccountIds(tx, clubId, people.filter((p) => p.planId || (overdue.get(p.userId)?.balanceMinor ?? 0) > 0).map((p) => p.userId));
   const duesIncome = accountId(tx, clubId, "dues-income");
   const lateIncome = accountId(tx, clubId, "late-fee-income");
   const result = { duesPosted: 0, lateFeesPosted: 0, totalMinor: 0, alreadyPosted: 0 };
   const feeDate = clamp(input.runDate, start, end);
 
+  const batch: PostEntryInput[] = [];
   for (const p of people) {
     const account = accounts.get(p.userId);
     if (!account) continue;
@@ -59,7 +62,7 @@ export function runBillingPeriod(tx: DbLike, ctx: { club: { id: string }; user?:
       const amount = duesForMember({ plan: p.period, amountMinor: p.amountMinor, date: start, joinedOn });
       if (amount > 0) {
         const date = range.start > start ? range.start : start;
-        const posted = postEntry(tx, clubId, {
+        batch.push({
           date,
           kind: "dues",
           memo: `Dues ${p.planName}, ${range.start} to ${range.end}${joinedOn ? ` (from ${joinedOn})` : ""}`,
@@ -74,16 +77,12 @@ export function runBillingPeriod(tx: DbLike, ctx: { club: { id: string }; user?:
           sourceKey: `dues:${range.start}:${p.userId}`,
           createdById: ctx.user?.id ?? null,
         });
-        if (posted.created) {
-          result.duesPosted++;
-          result.totalMinor += amount;
-        } else result.alreadyPosted++;
       }
     }
-    const position = positions.get(p.userId);
-    const fee = position ? lateFee(position.balanceMinor, position.oldestDueDate, input.runDate, settings.lateFeeAfterDays, policy) : 0;
+    const position = overdue.get(p.userId);
+    const fee = position ? lateFee(position.balanceMinor, position.oldestDueDate, start, settings.lateFeeAfterDays, policy) : 0;
     if (fee > 0) {
-      const posted = postEntry(tx, clubId, {
+      batch.push({
         date: feeDate,
         kind: "late-fee",
         memo: `Late fee: balance overdue since ${position?.oldestDueDate}`,
@@ -98,12 +97,18 @@ export function runBillingPeriod(tx: DbLike, ctx: { club: { id: string }; user?:
         sourceKey: `late-fee:${start}:${p.userId}`,
         createdById: ctx.user?.id ?? null,
       });
-      if (posted.created) {
-        result.lateFeesPosted++;
-        result.totalMinor += fee;
-      } else result.alreadyPosted++;
     }
   }
+  postEntries(tx, clubId, batch).forEach((posted, i) => {
+    const entry = batch[i]!;
+    if (!posted.created) {
+      result.alreadyPosted++;
+      return;
+    }
+    if (entry.kind === "dues") result.duesPosted++;
+    else result.lateFeesPosted++;
+    result.totalMinor += entry.lines[0]!.debitMinor ?? 0;
+  });
 
   const existing = tx.select().from(billingRuns).where(and(eq(billingRuns.clubId, clubId), eq(billingRuns.periodStart, start))).get();
   const runId = existing

@@ -18,8 +18,15 @@ export function shiftMonthKey(month: string, n: number): string {
   return formatIsoDate(t.year, t.month, 1).slice(0, 7);
 }
 
+const labels = new Map<string, string>();
+const labelFormat = new Intl.DateTimeFormat("en-US", { month: "long", year: "numeric", timeZone: "UTC" });
+
 /** "2026-04" → "April 2026" (English month names, as the rest of the interface). */
 export function monthLabel(month: string): string {
-  const { start } = monthRange(month);
-  return new Intl.DateTimeFormat("en-US", { month: "long", year: "numeric", timeZone: "UTC" }).format(new Date(`${start}T00:00:00Z`));
+  let label = labels.get(month);
+  if (label === undefined) {
+    label = labelFormat.format(new Date(`${monthRange(month).start}T00:00:00Z`));
+    labels.set(month, label);
+  }
+  return label;
 }

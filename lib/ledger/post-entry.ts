@@ -1,5 +1,6 @@
 import { and, eq, inArray, max } from "drizzle-orm";
 import { clubs, journalEntries, journalLines, ledgerAccounts, reconciliationPeriods, type EntryKind } from "@/db/schema";
+import { newId } from "@/db/schema/columns";
 import { isIsoDate, type IsoDate } from "@/lib/dates";
 import { assertBalanced, reversalOf } from "@/lib/money";
 import type { DbLike } from "./accounts";
@@ -53,54 +54,70 @@ export function findEntryBySourceKey(tx: DbLike, clubId: string, sourceKey: stri
  * Call it inside the caller's transaction.
  */
 export function postEntry(tx: DbLike, clubId: string, entry: PostEntryInput): PostedEntry {
-  if (entry.sourceKey) {
-    const existing = findEntryBySourceKey(tx, clubId, entry.sourceKey);
-    if (existing) return { entryId: existing, created: false };
+  return postEntries(tx, clubId, [entry])[0]!;
+}
+
+const chunks = <T,>(list: readonly T[], size: number): T[][] => Array.from({ length: Math.ceil(list.length / size) }, (_, i) => list.slice(i * size, i * size + size));
+
+/**
+ * postEntry for many entries at once (a billing run): the same checks, made once for the
+ * batch, and multi-row inserts. All or nothing: one refused entry refuses the batch.
+ */
+export function postEntries(tx: DbLike, clubId: string, entries: readonly PostEntryInput[]): PostedEntry[] {
+  const existing = new Map<string, string>();
+  const keys = [...new Set(entries.map((e) => e.sourceKey).filter((k): k is string => !!k))];
+  for (const slice of chunks(keys, 500)) {
+    for (const row of tx.select({ id: journalEntries.id, key: journalEntries.sourceKey }).from(journalEntries).where(and(eq(journalEntries.clubId, clubId), inArray(journalEntries.sourceKey, slice))).all()) {
+      if (row.key) existing.set(row.key, row.id);
+    }
   }
-  assertBalanced(entry.lines);
-  if (!isIsoDate(entry.date)) throw new LedgerError(`"${entry.date}" is not a calendar date.`, "invalid", "date");
-  if (entry.dueOn && !isIsoDate(entry.dueOn)) throw new LedgerError(`"${entry.dueOn}" is not a calendar date.`, "invalid", "dueOn");
-  assertDateOpen(tx, clubId, entry.date);
+  const results: PostedEntry[] = [];
+  const fresh: { entry: PostEntryInput; id: string }[] = [];
+  for (const entry of entries) {
+    const known = entry.sourceKey ? existing.get(entry.sourceKey) : undefined;
+    if (known) {
+      results.push({ entryId: known, created: false });
+      continue;
+    }
+    assertBalanced(entry.lines);
+    if (!isIsoDate(entry.date)) throw new LedgerError(`"${entry.date}" is not a calendar date.`, "invalid", "date");
+    if (entry.dueOn && !isIsoDate(entry.dueOn)) throw new LedgerError(`"${entry.dueOn}" is not a calendar date.`, "invalid", "dueOn");
+    const id = newId();
+    if (entry.sourceKey) existing.set(entry.sourceKey, id);
+    fresh.push({ entry, id });
+    results.push({ entryId: id, created: true });
+  }
+  if (fresh.length === 0) return results;
+  const through = lockedThrough(tx, clubId);
+  for (const { entry } of fresh) if (through && entry.date <= through) throw new PeriodLockedError(entry.date, through);
   const club = tx.select({ currency: clubs.currency }).from(clubs).where(eq(clubs.id, clubId)).get();
   if (!club) throw new LedgerError("That club was not found.", "not-found");
-  const accountIds = [...new Set(entry.lines.map((l) => l.accountId))];
-  const known = tx.select({ id: ledgerAccounts.id }).from(ledgerAccounts).where(and(eq(ledgerAccounts.clubId, clubId), inArray(ledgerAccounts.id, accountIds))).all();
-  if (known.length !== accountIds.length) throw new LedgerError("An account of the entry does not belong to this club.", "not-found");
-  const [row] = tx
-    .insert(journalEntries)
-    .values({
-      clubId,
-      entryDate: entry.date,
-      kind: entry.kind,
-      memo: entry.memo,
-      currency: club.currency,
-      memberUserId: entry.memberUserId ?? null,
-      dueOn: entry.dueOn ?? null,
-      sourceType: entry.sourceType ?? null,
-      sourceId: entry.sourceId ?? null,
-      sourceKey: entry.sourceKey ?? null,
-      reference: entry.reference ?? null,
-      reversesEntryId: entry.reversesEntryId ?? null,
-      createdById: entry.createdById ?? null,
-    })
-    .returning({ id: journalEntries.id })
-    .all();
-  const entryId = row!.id;
-  tx.insert(journalLines)
-    .values(
-      entry.lines.map((l, i) => ({
-        clubId,
-        entryId,
-        lineNo: i + 1,
-        accountId: l.accountId,
-        debitMinor: l.debitMinor ?? 0,
-        creditMinor: l.creditMinor ?? 0,
-        currency: club.currency,
-        memo: l.memo ?? null,
-      })),
-    )
-    .run();
-  return { entryId, created: true };
+  const accountIds = [...new Set(fresh.flatMap(({ entry }) => entry.lines.map((l) => l.accountId)))];
+  let known = 0;
+  for (const slice of chunks(accountIds, 500)) known += tx.select({ id: ledgerAccounts.id }).from(ledgerAccounts).where(and(eq(ledgerAccounts.clubId, clubId), inArray(ledgerAccounts.id, slice))).all().length;
+  if (known !== accountIds.length) throw new LedgerError("An account of the entry does not belong to this club.", "not-found");
+  const rows = fresh.map(({ entry, id }) => ({
+    id,
+    clubId,
+    entryDate: entry.date,
+    kind: entry.kind,
+    memo: entry.memo,
+    currency: club.currency,
+    memberUserId: entry.memberUserId ?? null,
+    dueOn: entry.dueOn ?? null,
+    sourceType: entry.sourceType ?? null,
+    sourceId: entry.sourceId ?? null,
+    sourceKey: entry.sourceKey ?? null,
+    reference: entry.reference ?? null,
+    reversesEntryId: entry.reversesEntryId ?? null,
+    createdById: entry.createdById ?? null,
+  }));
+  for (const slice of chunks(rows, 50)) tx.insert(journalEntries).values(slice).run();
+  const lines = fresh.flatMap(({ entry, id }) =>
+    entry.lines.map((l, i) => ({ clubId, entryId: id, lineNo: i + 1, accountId: l.accountId, debitMinor: l.debitMinor ?? 0, creditMinor: l.creditMinor ?? 0, currency: club.currency, memo: l.memo ?? null })),
+  );
+  for (const slice of chunks(lines, 100)) tx.insert(journalLines).values(slice).run();
+  return results;
 }
 
 export type ReverseOptions = { date?: IsoDate; memo?: string; createdById?: string | null; kind?: EntryKind };

@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { clubs, memberships, users } from "@/db/schema";
 import { enqueueEmail } from "@/lib/email/outbox";
-import { formatMoney } from "@/lib/money";
+import { moneyFormatter } from "./money-format";
 import { appUrl } from "@/lib/server/urls";
 import type { DbLike } from "./accounts";
 import { memberBalance } from "./balances";
@@ -18,7 +18,7 @@ export function queueReceipt(tx: DbLike, clubId: string, p: { memberUserId: stri
     .where(and(eq(memberships.clubId, clubId), eq(memberships.userId, p.memberUserId)))
     .get();
   if (!club || !person) return;
-  const money = (m: number) => formatMoney(m, club.currency);
+  const money = moneyFormatter(club.currency);
   enqueueEmail(tx, {
     clubId,
     to: person.email,

@@ -86,6 +86,12 @@ export function lockPeriod(tx: DbLike, a: Actor, statementId: string): PeriodRep
   if (!report.agrees) {
     throw new LedgerError(`The adjusted balances differ by ${formatMoney(report.differenceMinor, a.currency)}; match, book or set aside the remaining items first.`, "invalid");
   }
+  // Bank charges and credits explain the difference, but once the period is locked they could
+  // never be posted into it: they must be in the books first.
+  const unbooked = report.bankItemsNotInBooks.length;
+  if (unbooked > 0) {
+    throw new LedgerError(`${unbooked} line${unbooked === 1 ? " is" : "s are"} on the statement but not in the books; post ${unbooked === 1 ? "it" : "them"} (or set aside) before locking.`, "invalid");
+  }
   tx.insert(reconciliationPeriods)
     .values({
       clubId: a.clubId,

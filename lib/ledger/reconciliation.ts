@@ -7,7 +7,7 @@ import { addDays, type IsoDate } from "@/lib/dates";
 import { autoMatch, reconciliationSummary, type BookItem, type ReconciliationSummary } from "@/lib/reconcile";
 import { accountId, type DbLike } from "./accounts";
 import { LedgerError } from "./errors";
-import { lockedThrough, postEntry } from "./post-entry";
+import { lockedThrough, postEntries, postEntry } from "./post-entry";
 
 export type BookLineItem = { id: string; journalLineId: string; entryId: string; date: IsoDate; amountMinor: number; memo: string; reference: string | null; kind: string };
 export type PayoutItem = { id: string; cardPayoutId: string; payoutId: string; date: IsoDate; amountMinor: number; feeMinor: number; carried: number };
@@ -106,6 +106,37 @@ export function matchPayout(tx: DbLike, a: Actor, line: BankLineRow, cardPayoutI
   tx.insert(reconciliationMatches).values({ clubId: a.clubId, bankLineId: line.id, journalLineId: bankJournalLineOf(tx, a.clubId, entryId), kind, createdEntryId: entryId, matchedById: a.userId }).run();
 }
 
+/** Posts each payout's transfer into the bank in one batch; returns the match rows for them. */
+function receivePayouts(tx: DbLike, a: Actor, received: { line: BankLineRow; payout: PayoutItem }[]): (typeof reconciliationMatches.$inferInsert)[] {
+  if (received.length === 0) return [];
+  const bank = accountId(tx, a.clubId, "bank");
+  const clearing = accountId(tx, a.clubId, "card-clearing");
+  const posted = postEntries(
+    tx,
+    a.clubId,
+    received.map(({ line, payout }) => ({
+      date: line.postedOn,
+      kind: "payout-received" as const,
+      memo: `Card payout ${payout.payoutId} reached the bank`,
+      lines: [{ accountId: bank, debitMinor: payout.amountMinor }, { accountId: clearing, creditMinor: payout.amountMinor }],
+      sourceType: "card-payout",
+      sourceId: payout.payoutId,
+      reference: payout.payoutId,
+      createdById: a.userId,
+    })),
+  );
+  const entryIds = posted.map((p) => p.entryId);
+  const bankLineOf = new Map<string, string>();
+  for (let i = 0; i < entryIds.length; i += 500) {
+    for (const l of tx.select({ id: journalLines.id, entryId: journalLines.entryId }).from(journalLines).where(and(eq(journalLines.clubId, a.clubId), eq(journalLines.accountId, bank), inArray(journalLines.entryId, entryIds.slice(i, i + 500)))).all()) bankLineOf.set(l.entryId, l.id);
+  }
+  return received.map(({ line, payout }, i) => {
+    const entryId = entryIds[i]!;
+    tx.update(cardPayouts).set({ receivedEntryId: entryId }).where(and(eq(cardPayouts.clubId, a.clubId), eq(cardPayouts.id, payout.cardPayoutId))).run();
+    return { clubId: a.clubId, bankLineId: line.id, journalLineId: bankLineOf.get(entryId)!, kind: "payout" as const, createdEntryId: entryId, matchedById: a.userId };
+  });
+}
+
 /** Matches the statement's open lines automatically (amount, date window, reference, payouts). */
 export function autoMatchStatement(tx: DbLike, a: Actor, statementId: string): { matched: number; unmatched: number } {
   const statement = tx.select().from(bankStatements).where(and(eq(bankStatements.clubId, a.clubId), eq(bankStatements.id, statementId))).get();
@@ -134,16 +165,18 @@ export function autoMatchStatement(tx: DbLike, a: Actor, statementId: string): {
   const itemById = new Map(items.map((i) => [String(i.id), i]));
   const through = lockedThrough(tx, a.clubId);
   const lineRows: (typeof reconciliationMatches.$inferInsert)[] = [];
+  const received: { line: BankLineRow; payout: PayoutItem }[] = [];
   for (const m of result.matches) {
     const line = open[m.bankIndex]!;
     if (m.kind === "payout") {
       const payoutId = itemById.get(String(m.bookIds[0]))?.payoutId;
       const payout = payoutId ? byPayoutId.get(payoutId) : undefined;
-      if (payout && (!through || line.postedOn > through)) matchPayout(tx, a, line, payout.cardPayoutId, "payout");
+      if (payout && (!through || line.postedOn > through)) received.push({ line, payout });
       continue;
     }
     for (const id of m.bookIds) lineRows.push({ clubId: a.clubId, bankLineId: line.id, journalLineId: String(id).slice("line:".length), kind: m.kind, matchedById: a.userId });
   }
+  lineRows.push(...receivePayouts(tx, a, received));
   for (let i = 0; i < lineRows.length; i += 200) tx.insert(reconciliationMatches).values(lineRows.slice(i, i + 200)).run();
   const matched = result.matches.length;
   return { matched, unmatched: open.length - matched };

@@ -2,7 +2,7 @@ import { and, eq } from "drizzle-orm";
 import { clubs, duesReminders, memberships } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
 import { enqueueEmails, type EnqueueInput } from "@/lib/email/outbox";
-import { formatMoney } from "@/lib/money";
+import { moneyFormatter } from "./money-format";
 import { appUrl } from "@/lib/server/urls";
 import type { DbLike } from "./accounts";
 import { memberContacts, memberPositions } from "./balances";
@@ -18,6 +18,7 @@ export function sendDuesReminders(tx: DbLike, clubId: string, asOf: IsoDate): nu
   const active = new Set(tx.select({ userId: memberships.userId }).from(memberships).where(and(eq(memberships.clubId, clubId), eq(memberships.status, "active"))).all().map((m) => m.userId));
   const contacts = memberContacts(tx, clubId);
   const emails: EnqueueInput<"dues-reminder">[] = [];
+  const money = moneyFormatter(club.currency);
   for (const [userId, p] of memberPositions(tx, clubId)) {
     const overdue = p.items.filter((i) => i.dueDate < asOf).reduce((s, i) => s + i.openMinor, 0);
     const contact = contacts.get(userId);
@@ -27,13 +28,13 @@ export function sendDuesReminders(tx: DbLike, clubId: string, asOf: IsoDate): nu
     emails.push({
       clubId,
       to: contact.email,
-      subject: `${club.name}: ${formatMoney(Math.min(overdue, p.balanceMinor), club.currency)} past due on your account`,
+      subject: `${club.name}: ${money(Math.min(overdue, p.balanceMinor))} past due on your account`,
       template: "dues-reminder",
       payload: {
         clubName: club.name,
         memberName: contact.name,
-        balance: formatMoney(p.balanceMinor, club.currency),
-        overdue: formatMoney(Math.min(overdue, p.balanceMinor), club.currency),
+        balance: money(p.balanceMinor),
+        overdue: money(Math.min(overdue, p.balanceMinor)),
         oldestDueDate: p.oldestDueDate ?? asOf,
         payUrl: appUrl(`/clubs/${club.slug}/account`),
       },

@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import { clubs, statements } from "@/db/schema";
 import { enqueueEmails, type EnqueueInput } from "@/lib/email/outbox";
-import { formatMoney } from "@/lib/money";
+import { moneyFormatter } from "./money-format";
 import { appUrl } from "@/lib/server/urls";
 import type { DbLike } from "./accounts";
 import { memberContacts, memberMovements, type MemberMovementRow } from "./balances";
@@ -50,31 +50,34 @@ export function issueStatements(tx: DbLike, clubId: string, input: { month: stri
   const byMember = groupByMember(memberMovements(tx, clubId));
   const contacts = memberContacts(tx, clubId);
   const emails: StatementEmail[] = [];
-  const money = (minor: number) => formatMoney(minor, club.currency);
+  const money = moneyFormatter(club.currency);
+  const due: { userId: string; f: StatementFigures; balanceNow: number; contact: { name: string; email: string } }[] = [];
   for (const userId of new Set(input.memberUserIds)) {
     const list = byMember.get(userId) ?? [];
     const f = statementFigures(list.map((m) => ({ entryId: m.entryId, date: m.date, memo: m.memo, amountMinor: m.amountMinor })), start, end);
     if (f.openingMinor === 0 && f.lines.length === 0 && !input.force) continue;
     const contact = contacts.get(userId);
     if (!contact) continue;
-    const inserted = tx
-      .insert(statements)
-      .values({ clubId, memberUserId: userId, periodStart: start, periodEnd: end, openingMinor: f.openingMinor, chargesMinor: f.chargesMinor, creditsMinor: f.creditsMinor, closingMinor: f.closingMinor, currency: club.currency, billingRunId: input.billingRunId ?? null, emailedAt: new Date() })
-      .onConflictDoNothing()
-      .returning({ id: statements.id })
-      .all();
-    if (inserted.length === 0 && !input.force) continue;
-    const balanceNow = list.reduce((acc, m) => acc + m.amountMinor, 0);
+    due.push({ userId, f, balanceNow: list.reduce((acc, m) => acc + m.amountMinor, 0), contact });
+  }
+  const issued = new Set<string>();
+  for (let i = 0; i < due.length; i += 100) {
+    const rows = due.slice(i, i + 100).map(({ userId, f }) => ({ clubId, memberUserId: userId, periodStart: start, periodEnd: end, openingMinor: f.openingMinor, chargesMinor: f.chargesMinor, creditsMinor: f.creditsMinor, closingMinor: f.closingMinor, currency: club.currency, billingRunId: input.billingRunId ?? null, emailedAt: new Date() }));
+    for (const r of tx.insert(statements).values(rows).onConflictDoNothing().returning({ userId: statements.memberUserId }).all()) issued.add(r.userId);
+  }
+  const label = monthLabel(input.month);
+  for (const { userId, f, balanceNow, contact } of due) {
+    if (!issued.has(userId) && !input.force) continue;
     const urls = statementUrls(club.slug, userId, input.month);
     emails.push({
       clubId,
       to: contact.email,
-      subject: `${club.name}: your statement for ${monthLabel(input.month)}`,
+      subject: `${club.name}: your statement for ${label}`,
       template: "statement",
       payload: {
         clubName: club.name,
         memberName: contact.name,
-        periodLabel: monthLabel(input.month),
+        periodLabel: label,
         opening: money(f.openingMinor),
         charges: money(f.chargesMinor),
         credits: money(f.creditsMinor),

@@ -20,9 +20,10 @@ const idField = z.string({ error: "Missing record id." }).trim().min(1, { error:
 
 const checkbox = z.preprocess((v) => v === "on" || v === "true" || v === "1" || v === true, z.boolean());
 
-/** A file input: nothing chosen (no name, no bytes) is "no file"; anything else is checked by its content later. */
+/** A file input: nothing chosen is "no file"; anything else is checked by its size and content later. */
 export const optionalFile = z.preprocess(
-  (v) => (v instanceof Blob && !(v.size === 0 && (!("name" in v) || !v.name)) ? v : undefined),
+  // A file input left empty arrives as a nameless (or "undefined"/"blob"-named) empty blob.
+  (v) => (v instanceof Blob && !(v.size === 0 && ["", "undefined", "blob"].includes(String((v as File).name ?? ""))) ? v : undefined),
   z.custom<File>((v) => v instanceof Blob, { error: "Choose a file." }).optional(),
 );
 

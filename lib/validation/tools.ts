@@ -114,20 +114,24 @@ const weightList = (label: string, max: number) =>
   z.preprocess((v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]), z.array(zeroIfBlank(label, max)));
 const keyList = z.preprocess((v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]), z.array(z.string().trim().min(1).max(80)));
 
-export const loadingSchema = z
-  .object({
-    bookingId: id("a booking"),
-    category: z.enum(["normal", "utility"], { error: "Choose the category." }).default("normal"),
-    stationKey: keyList,
-    stationWeight: weightList("the weight", 5_000),
-    tankKey: keyList,
-    tankVolume: weightList("the fuel", 5_000),
-    burnVolume: zeroIfBlank("the planned burn", 5_000),
-  })
-  .superRefine((v, ctx) => {
-    if (v.stationKey.length !== v.stationWeight.length) ctx.addIssue({ code: "custom", path: ["stationWeight"], message: "Enter a weight for every station (0 when empty)." });
-    if (v.tankKey.length !== v.tankVolume.length) ctx.addIssue({ code: "custom", path: ["tankVolume"], message: "Enter the fuel in every tank (0 when empty)." });
-  });
+const loadingFields = {
+  category: z.enum(["normal", "utility"], { error: "Choose the category." }).default("normal"),
+  stationKey: keyList,
+  stationWeight: weightList("the weight", 5_000),
+  tankKey: keyList,
+  tankVolume: weightList("the fuel", 5_000),
+  burnVolume: zeroIfBlank("the planned burn", 5_000),
+};
+
+function sameLengths(v: { stationKey: string[]; stationWeight: number[]; tankKey: string[]; tankVolume: number[] }, ctx: z.RefinementCtx) {
+  if (v.stationKey.length !== v.stationWeight.length) ctx.addIssue({ code: "custom", path: ["stationWeight"], message: "Enter a weight for every station (0 when empty)." });
+  if (v.tankKey.length !== v.tankVolume.length) ctx.addIssue({ code: "custom", path: ["tankVolume"], message: "Enter the fuel in every tank (0 when empty)." });
+}
+
+export const loadingSchema = z.object({ bookingId: id("a booking"), ...loadingFields }).superRefine(sameLengths);
+
+/** The quick calculator on the tools page: the same inputs for an aircraft, nothing saved. */
+export const quickLoadingSchema = z.object({ aircraft: id("an aircraft"), ...loadingFields }).superRefine(sameLengths);
 
 /** The stateless calculators read their inputs from the page's query string. */
 export const fuelToolSchema = z.object({
@@ -149,8 +153,6 @@ export const densityToolMetricSchema = z.object({
   oat: decimal("the outside air temperature", { min: -60, max: 60 }),
 });
 
-export const adHocLoadingSchema = z.object({ aircraft: id("an aircraft") });
-
 /** Checklist lines: "Section: item". Documents are one per line. */
 const checklistField = z.string({ error: "Enter the checklist." }).transform((v, ctx) => {
   const out: { section: string; label: string }[] = [];
@@ -165,12 +167,13 @@ const checklistField = z.string({ error: "Enter the checklist." }).transform((v,
   return out;
 });
 
-const listField = (what: string, max: number) =>
+const listField = (what: string, max: number, required?: string) =>
   z.preprocess(
     (v) => (v === undefined ? "" : v),
     z.string().transform((v, ctx) => {
       const all = lines(v);
       all.forEach((l, i) => l.length > max && ctx.addIssue({ code: "custom", message: `Line ${i + 1}: keep each ${what} to ${max} characters.` }));
+      if (required && all.length === 0) ctx.addIssue({ code: "custom", message: required });
       return all;
     }),
   );
@@ -180,12 +183,11 @@ export const preflightTemplateSchema = z
     aircraftId: id("an aircraft"),
     documents: listField("document", 120),
     checklist: checklistField,
-    sumpPoints: listField("drain point", 80),
+    sumpPoints: listField("drain point", 80, "Enter at least one fuel drain point."),
     oilMinimum: decimal("the oil minimum", { max: 50, allowZero: false }),
     oilMaximum: optionalDecimal("the oil maximum", 50),
   })
   .superRefine((v, ctx) => {
-    if (v.sumpPoints.length === 0) ctx.addIssue({ code: "custom", path: ["sumpPoints"], message: "Enter at least one fuel drain point." });
     if (v.oilMaximum !== null && v.oilMaximum < v.oilMinimum) ctx.addIssue({ code: "custom", path: ["oilMaximum"], message: "The maximum cannot be below the minimum." });
   });
 
@@ -234,3 +236,14 @@ export const preflightRecordSchema = z.preprocess(
 export type WeightBalanceProfileInput = z.output<typeof weightBalanceProfileSchema>;
 export type LoadingFormInput = z.output<typeof loadingSchema>;
 export type PreflightRecordInput = z.output<typeof preflightRecordSchema>;
+
+/** A page's query (Next's searchParams) as the schemas read forms: "name[]" keys become arrays. */
+export function queryToObject(query: Record<string, string | string[] | undefined>): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(query)) {
+    if (value === undefined) continue;
+    if (key.endsWith("[]")) out[key.slice(0, -2)] = Array.isArray(value) ? value : [value];
+    else out[key] = Array.isArray(value) ? value[0] : value;
+  }
+  return out;
+}

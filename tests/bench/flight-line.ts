@@ -17,7 +17,8 @@ const SQUAWKS = 200;
 
 type Db = import("@/db/client").Db;
 
-function seedBench(db: Db, clubId: string, userId: string) {
+/** Fills one club with the benchmark fleet; exported so a running server's database can be filled too. */
+export function seedBench(db: Db, clubId: string, userId: string) {
   const sqlite = db.$client;
   const now = Date.now();
   let n = 0;

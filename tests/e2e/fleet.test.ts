@@ -60,7 +60,8 @@ describe("flight line and squawks in the browser", () => {
 
     await card.getByRole("link", { name: REG }).click();
     await page.waitForURL(/\/aircraft\/[^/]+$/);
-    await expect(page.getByRole("note", { name: "Airworthiness caution" }).isVisible()).resolves.toBe(true);
+    await page.getByRole("heading", { name: REG, level: 1 }).waitFor();
+    await page.getByRole("note", { name: "Airworthiness caution" }).waitFor();
     const description = `Aileron hinge pin walking out, right wing ${Date.now()}`;
     const form = page.getByRole("form", { name: `Report a squawk on ${REG}` });
     await form.getByLabel("What did you find?").fill(description);

@@ -48,7 +48,7 @@ describe("booking an aircraft: no double booking", () => {
     const latest = db().select().from(bookings).where(and(eq(bookings.aircraftId, id), eq(bookings.status, "reserved"))).all().sort((a, b) => b.endsAt.getTime() - a.endsAt.getTime())[0]!;
     const end = latest.endsAt.getTime();
     const local = (ms: number) => new Intl.DateTimeFormat("sv-SE", { timeZone: club.timeZone, dateStyle: "short", timeStyle: "short" }).format(new Date(ms)).replace(" ", "T");
-    signInAs("safety@hangarline.test");
+    signInAs("member@hangarline.test");
     const next = await createBooking(EMPTY, bookForm({ aircraftId: id, startsAt: local(end), endsAt: local(end + 3_600_000), acceptedGuards: ALL_GUARDS }));
     expect(next, next.message).toMatchObject({ ok: true });
   });

@@ -2,6 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Fragment, type ReactNode } from "react";
 import { HomeCurrency } from "@/components/currency/home-currency";
+import { HomeFleet } from "@/components/fleet/home-fleet";
+import { HomeAccount } from "@/components/money/home-account";
 import { HomeBulletins } from "@/components/safety/home-bulletins";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
@@ -17,10 +19,10 @@ export default async function ClubHome({ params }: { params: Promise<{ club: str
   const base = `/clubs/${club.slug}`;
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const tiles: { title: string; body?: string; href?: string; node?: ReactNode; show: boolean }[] = [
-    { title: "Flight line", body: "Each aircraft's status with its reasons, and what comes due next.", href: `${base}/flight-line`, show: ability.can("read", "Aircraft") },
+    { title: "Flight line", node: <HomeFleet db={db} club={club} />, show: ability.can("read", "Aircraft") },
     { title: "Safety bulletins", node: <HomeBulletins db={db} clubId={club.id} slug={club.slug} userId={user.id} roles={membership.roles} today={today} />, show: ability.can("read", "Bulletin") },
     { title: "Your currency", node: <HomeCurrency db={db} club={club} userId={user.id} today={today} />, show: ability.can("read", own("Currency", user.id)) },
-    { title: "Your account", body: "Your balance, statements and the pay button will appear here.", show: ability.can("pay", "Account") },
+    { title: "Your account", node: <HomeAccount db={db} club={club} userId={user.id} today={today} />, show: ability.can("read", own("Account", user.id)) },
     { title: "Members", body: "The roster, roles and invitations.", href: `${base}/members`, show: ability.can("read", "Member") },
   ].filter((t) => t.show);
   return (

@@ -19,6 +19,12 @@ describe("safety form schemas", () => {
     expect(r.success).toBe(true);
     expect(r.data?.attachment).toBeUndefined();
     expect(r.data?.acknowledgeBy).toBeUndefined();
+    // How an untouched file input arrives through a server action: an empty blob named "undefined".
+    const viaAction = createBulletinSchema.safeParse({ title: "Brakes", bodyMarkdown: "Hold each pedal five seconds.", urgency: "routine", audience: "everyone", intent: "draft", attachment: new File([], "undefined") });
+    expect(viaAction.data?.attachment).toBeUndefined();
+    // A file the person chose that happens to be empty is kept, to be refused by name later.
+    const chosenEmpty = createBulletinSchema.safeParse({ title: "Brakes", bodyMarkdown: "Hold each pedal five seconds.", urgency: "routine", audience: "everyone", intent: "draft", attachment: new File([], "notes.pdf") });
+    expect(chosenEmpty.data?.attachment?.name).toBe("notes.pdf");
     const missingGroup = createBulletinSchema.safeParse({ title: "Brakes", bodyMarkdown: "Hold each pedal five seconds.", urgency: "priority", audience: "type_group", intent: "draft" });
     expect(errorsOf(missingGroup).audienceTypeGroup).toMatch(/type group/);
   });

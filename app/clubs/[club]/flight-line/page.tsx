@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { FlightLineBoard } from "@/components/fleet/flight-line-board";
+import { buttonClass } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { getFlightLine } from "@/db/queries/fleet-status";
@@ -16,7 +18,11 @@ export default async function FlightLinePage({ params }: { params: Promise<{ clu
   const initial = getFlightLine(db, club);
   return (
     <div className="max-w-6xl">
-      <PageHeader title="Flight line" lead={`Every aircraft of ${club.name} with its status and the reasons for it, on ${initial.today}.`} />
+      <PageHeader
+        title="Flight line"
+        lead={`Every aircraft of ${club.name} with its status and the reasons for it, on ${initial.today}.`}
+        actions={<Link href={`/clubs/${club.slug}/aircraft`} className={buttonClass("secondary")}>Aircraft records</Link>}
+      />
       <div className="mb-4"><SafetyCaution compact /></div>
       <FlightLineBoard slug={club.slug} initial={initial} />
     </div>

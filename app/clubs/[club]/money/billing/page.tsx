@@ -42,7 +42,7 @@ export default async function BillingPage({ params }: { params: Promise<{ club: 
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/billing`} />
       <section aria-labelledby="plans-h">
         <h2 id="plans-h" className="mb-2 text-lg font-bold">Dues plans</h2>
-        <div className="grid gap-4 lg:grid-cols-2">
+        <div className="grid items-start gap-4 lg:grid-cols-2">
           {plans.map((p) => (
             <details key={p.id} className="card">
               <summary className="cursor-pointer font-bold">

@@ -1,0 +1,40 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CheckInForm } from "@/components/bookings/check-in-form";
+import { buttonClass } from "@/components/ui/button";
+import { PageHeader } from "@/components/ui/page-header";
+import { getBooking } from "@/db/queries/bookings";
+import { getAircraft } from "@/db/queries/fleet";
+import { mayActOnBooking } from "@/lib/actions/bookings/booking-access";
+import { formatMoney } from "@/lib/money";
+import { requireClubContext } from "@/lib/server/club-context";
+
+export const metadata: Metadata = { title: "Check in" };
+export const dynamic = "force-dynamic";
+
+export default async function CheckInPage({ params }: { params: Promise<{ club: string; bookingId: string }> }) {
+  const { club: slug, bookingId } = await params;
+  const ctx = await requireClubContext(slug);
+  const { db, club, ability } = ctx;
+  if (!ability.can("create", "Flight")) notFound();
+  const booking = getBooking(db, club.id, bookingId);
+  if (!booking || !mayActOnBooking(ctx, booking)) notFound();
+  const plane = getAircraft(db, club.id, booking.aircraftId);
+  if (!plane) notFound();
+  const back = <Link className={buttonClass("quiet")} href={`/clubs/${club.slug}/bookings/${booking.id}`}>← The booking</Link>;
+  return (
+    <div className="max-w-2xl">
+      <PageHeader title={`Check in · ${booking.registration}`} lead="The flight-log entry and the charge for the flight, in one step." actions={back} />
+      <section className="card">
+        {booking.status === "dispatched" ? (
+          <CheckInForm slug={club.slug} bookingId={booking.id} hobbs={plane.currentHobbs} tach={plane.currentTach} metric={club.unitSystem === "metric"} rateText={`${formatMoney(plane.hourlyRateMinor, club.currency)} per ${plane.rateMeter === "tach" ? "tach" : "Hobbs"} hour`} />
+        ) : booking.status === "checked_in" ? (
+          <p role="status">✓ This booking is checked in; the flight is in the log.</p>
+        ) : (
+          <p>Dispatch the booking first: record and confirm the preflight.</p>
+        )}
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,29 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { CalendarLinkPanel } from "@/components/bookings/calendar-link-panel";
+import { PageHeader } from "@/components/ui/page-header";
+import { getLiveFeedToken } from "@/db/queries/bookings-feed";
+import { formatLocalTime } from "@/lib/fleet/time";
+import { requireClubContext } from "@/lib/server/club-context";
+
+export const metadata: Metadata = { title: "Calendar link" };
+export const dynamic = "force-dynamic";
+
+export default async function CalendarPage({ params }: { params: Promise<{ club: string }> }) {
+  const { club: slug } = await params;
+  const { db, club, user, ability } = await requireClubContext(slug);
+  if (!ability.can("create", "Booking")) notFound();
+  const live = getLiveFeedToken(db, club.id, user.id);
+  return (
+    <div className="max-w-2xl">
+      <PageHeader title="Calendar link" lead="Your bookings in your own calendar program, as an iCalendar (RFC 5545) subscription." />
+      <section className="card">
+        <p className="mb-3 text-sm text-ink-700">
+          The link holds a secret: anyone with it sees your bookings in {club.name} (times, aircraft and who flies with you). Keep it to yourself; turn it off or make a new one at any time.
+          {live?.lastFetchedAt ? ` Last read by a calendar ${formatLocalTime(live.lastFetchedAt, club.timeZone)}.` : ""}
+        </p>
+        <CalendarLinkPanel slug={club.slug} hasLink={Boolean(live)} />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,47 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { BookingForm } from "@/components/bookings/booking-form";
+import { PageHeader } from "@/components/ui/page-header";
+import { SafetyCaution } from "@/components/ui/safety-caution";
+import { getFlightLine } from "@/db/queries/fleet-status";
+import { listMembers } from "@/db/queries/members";
+import { addDays, isIsoDate, isoDateInTimeZone } from "@/lib/dates";
+import { STATUS_WORDS } from "@/lib/fleet/status-words";
+import { requireClubContext } from "@/lib/server/club-context";
+import { explainDenied, own } from "@/permissions";
+
+export const metadata: Metadata = { title: "New booking" };
+export const dynamic = "force-dynamic";
+
+export default async function NewBookingPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<Record<string, string | undefined>> }) {
+  const { club: slug } = await params;
+  const { db, club, user, ability } = await requireClubContext(slug);
+  if (!ability.can("read", "Booking")) notFound();
+  const query = await searchParams;
+  const line = getFlightLine(db, club);
+  const today = isoDateInTimeZone(new Date(), club.timeZone);
+  const date = query.date && isIsoDate(query.date) && query.date >= today ? query.date : addDays(today, 1);
+  const aircraftId = line.entries.some((e) => e.aircraft.id === query.aircraft) ? query.aircraft! : "";
+  const people = listMembers(db, club.id).filter((m) => m.status === "active" && !(m.roles.length === 1 && m.roles[0] === "mechanic"));
+  const instructors = people.filter((m) => m.roles.includes("instructor") && m.userId !== user.id).map((m) => ({ id: m.userId, label: m.name ?? m.email }));
+  const forOthers = ability.can("update", own("Booking", "__someone-else__"));
+  return (
+    <div className="max-w-2xl">
+      <PageHeader title="New booking" lead={`Times are ${club.name}'s own (${club.timeZone}). The booking is checked against the aircraft's records and yours.`} />
+      <div className="mb-4"><SafetyCaution compact /></div>
+      {ability.can("create", "Booking") ? (
+        <section className="card">
+          <BookingForm
+            slug={club.slug}
+            aircraft={line.entries.map((e) => ({ id: e.aircraft.id, label: `${e.aircraft.registration} — ${e.aircraft.make} ${e.aircraft.model} (${STATUS_WORDS[e.status]})` }))}
+            instructors={instructors}
+            members={forOthers ? people.filter((m) => m.userId !== user.id).map((m) => ({ id: m.userId, label: m.name ?? m.email })) : null}
+            defaults={{ aircraftId, startsAt: `${date}T09:00`, endsAt: `${date}T11:00` }}
+          />
+        </section>
+      ) : (
+        <p className="text-ink-500">{explainDenied("create", "Booking")}</p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,83 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { ActionForm } from "@/components/money/action-form";
+import { MoneyNav } from "@/components/money/money-nav";
+import { Money } from "@/components/money/money-text";
+import { PageHeader } from "@/components/ui/page-header";
+import { listBankStatements } from "@/db/queries/money-reconcile";
+import { importBankStatement } from "@/lib/actions/money/import-bank-statement";
+import { lockedThrough } from "@/lib/ledger/post-entry";
+import { requireClubContext } from "@/lib/server/club-context";
+import { explainDenied } from "@/permissions";
+
+export const metadata: Metadata = { title: "Bank reconciliation" };
+
+export default async function ReconciliationPage({ params }: { params: Promise<{ club: string }> }) {
+  const { club: slug } = await params;
+  const { db, club, ability } = await requireClubContext(slug);
+  if (!ability.can("read", "Reconciliation")) notFound();
+  const statements = listBankStatements(db, club.id);
+  const locked = lockedThrough(db, club.id);
+  const base = `/clubs/${club.slug}/money/reconciliation`;
+  return (
+    <>
+      <PageHeader title="Bank reconciliation" lead={locked ? `The books are locked through ${locked}: nothing can be posted on or before that day.` : "No period is reconciled yet."} />
+      <MoneyNav slug={club.slug} ability={ability} current={base} />
+      <section aria-labelledby="st-h">
+        <h2 id="st-h" className="mb-2 text-lg font-bold">Statements</h2>
+        {statements.length === 0 ? <p className="text-ink-500">No bank statement imported yet.</p> : (
+          <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+            <table className="w-full min-w-[40rem] text-left text-sm" aria-label="Bank statements">
+              <thead className="bg-sand-200"><tr><th className="px-3 py-2">Period</th><th className="px-3 py-2">File</th><th className="px-3 py-2 text-right">Closing balance</th><th className="px-3 py-2">Lines matched</th><th className="px-3 py-2">State</th></tr></thead>
+              <tbody>
+                {statements.map((s) => (
+                  <tr key={s.id} className="border-t border-sand-200">
+                    <td className="px-3 py-2"><Link href={`${base}/${s.id}`}>{s.periodStart} to {s.periodEnd}</Link></td>
+                    <td className="break-all px-3 py-2">{s.fileName} ({s.format.toUpperCase()})</td>
+                    <td className="px-3 py-2 text-right"><Money minor={s.closingBalanceMinor} currency={club.currency} /></td>
+                    <td className="px-3 py-2 tabular">{s.matchedCount} of {s.lineCount}</td>
+                    <td className="px-3 py-2">{s.lockedAt ? <span><span aria-hidden="true">■ </span>Reconciled and locked</span> : <span><span aria-hidden="true">□ </span>Open</span>}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+      <section className="card mt-8 max-w-3xl" aria-labelledby="imp-h">
+        <h2 id="imp-h" className="mb-1 text-lg font-bold">Import a bank statement</h2>
+        <p className="mb-3 text-sm text-ink-700">OFX files carry their own balance and period. For CSV, say which columns hold what (by header name), and enter the closing balance printed on the statement. Lines already imported are skipped, and matching runs straight away.</p>
+        {ability.can("reconcile", "Reconciliation") ? (
+          <ActionForm
+            action={importBankStatement}
+            slug={club.slug}
+            label="Import a bank statement"
+            submitLabel="Import and match"
+            pendingText="Importing…"
+            grid
+            fields={[
+              { name: "file", label: "Statement file", type: "file", accept: ".csv,.ofx,.qfx,text/csv,application/x-ofx" },
+              { name: "format", label: "Format", type: "select", options: [{ value: "csv", label: "CSV (spreadsheet export)" }, { value: "ofx", label: "OFX" }] },
+              { name: "closingBalance", label: `Closing balance (${club.currency})`, inputMode: "decimal", hint: "As printed on the statement. Optional for OFX." },
+              { name: "dateColumn", label: "Date column", defaultValue: "Date" },
+              { name: "amountColumn", label: "Amount column", defaultValue: "Amount", hint: "Or leave empty and give debit and credit columns." },
+              { name: "descriptionColumn", label: "Description column(s)", defaultValue: "Description", hint: "Join several with +, e.g. Payee + Memo." },
+              { name: "referenceColumn", label: "Reference column", defaultValue: "Reference" },
+              { name: "debitColumn", label: "Debit column (money out)" },
+              { name: "creditColumn", label: "Credit column (money in)" },
+              { name: "sign", label: "The amount column shows deposits as", type: "select", options: [{ value: "deposits-positive", label: "Positive numbers" }, { value: "deposits-negative", label: "Negative numbers" }] },
+              { name: "dateFormat", label: "Dates look like", type: "select", options: [{ value: "ISO", label: "2026-04-30" }, { value: "MM/DD/YYYY", label: "04/30/2026" }, { value: "DD/MM/YYYY", label: "30/04/2026" }, { value: "DD.MM.YYYY", label: "30.04.2026" }] },
+              { name: "delimiter", label: "Separator", type: "select", options: [{ value: ",", label: "Comma" }, { value: ";", label: "Semicolon" }, { value: "tab", label: "Tab" }] },
+              { name: "periodStart", label: "First day (optional)", type: "date" },
+              { name: "periodEnd", label: "Last day (optional)", type: "date" },
+              { name: "decimalComma", label: "Amounts use a decimal comma (12,50)", type: "checkbox" },
+            ]}
+          />
+        ) : (
+          <p className="text-sm text-ink-500">{explainDenied("reconcile", "Reconciliation")}</p>
+        )}
+      </section>
+    </>
+  );
+}

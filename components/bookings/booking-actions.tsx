@@ -1,0 +1,75 @@
+"use client";
+import { useActionState, useState } from "react";
+import { CheckboxField } from "@/components/fleet/form-bits";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { initialActionState } from "@/lib/actions/action-state";
+import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
+import { changeBooking } from "@/lib/actions/bookings/change-booking";
+import { dispatchBooking } from "@/lib/actions/bookings/dispatch-booking";
+import { GuardNotes } from "./guard-notes";
+
+type Choice = { id: string; label: string };
+
+export function ChangeBookingForm({ slug, bookingId, defaults, instructors, lateNote }: { slug: string; bookingId: string; defaults: { startsAt: string; endsAt: string; instructorId: string }; instructors: Choice[]; lateNote: string | null }) {
+  const [state, action] = useActionState(changeBooking, initialActionState);
+  const [values, setValues] = useState(defaults);
+  const set = (k: keyof typeof values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [k]: e.target.value }));
+  const e = state.fieldErrors;
+  return (
+    <form action={action} noValidate aria-label="Change the booking">
+      <FormMessage state={state} />
+      <GuardNotes state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="bookingId" value={bookingId} />
+      <div className="grid gap-x-3 sm:grid-cols-2">
+        <Field label="New start (club time)" name="startsAt" type="datetime-local" step={900} value={values.startsAt} onChange={set("startsAt")} errors={e.startsAt} />
+        <Field label="New end (club time)" name="endsAt" type="datetime-local" step={900} value={values.endsAt} onChange={set("endsAt")} errors={e.endsAt} />
+      </div>
+      <SelectField label="Instructor" name="instructorId" value={values.instructorId} onChange={set("instructorId")} errors={e.instructorId}>
+        <option value="">No instructor</option>
+        {instructors.map((i) => <option key={i.id} value={i.id}>{i.label}</option>)}
+      </SelectField>
+      {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
+      <SubmitButton variant="secondary">Save the change</SubmitButton>
+    </form>
+  );
+}
+
+export function CancelBookingForm({ slug, bookingId, lateNote }: { slug: string; bookingId: string; lateNote: string | null }) {
+  const [state, action] = useActionState(cancelBooking, initialActionState);
+  return (
+    <form action={action} noValidate aria-label="Cancel the booking">
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="bookingId" value={bookingId} />
+      <Field label="Reason (optional)" name="reason" maxLength={300} errors={state.fieldErrors.reason} />
+      {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
+      <SubmitButton variant="danger" pendingText="Cancelling…">Cancel the booking</SubmitButton>
+    </form>
+  );
+}
+
+export function DispatchForm({ slug, bookingId, records }: { slug: string; bookingId: string; records: { id: string; label: string }[] }) {
+  const [state, action] = useActionState(dispatchBooking, initialActionState);
+  const e = state.fieldErrors;
+  return (
+    <form action={action} noValidate aria-label="Dispatch">
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="bookingId" value={bookingId} />
+      <SelectField label="Preflight record" name="preflightRecordId" defaultValue={records[0]?.id ?? ""} errors={e.preflightRecordId}>
+        {records.map((r) => <option key={r.id} value={r.id}>{r.label}</option>)}
+      </SelectField>
+      <CheckboxField label="I did this preflight myself, and as pilot in command I find the aircraft fit for this flight." name="confirmPreflight" errors={e.confirmPreflight} />
+      {e.acceptFindings ? (
+        <div className="mb-3 rounded border-l-4 border-sock-500 bg-sock-100 px-3 py-2 text-sm" role="alert">
+          <ul className="list-disc pl-5">{e.acceptFindings.map((c) => <li key={c}>{c}</li>)}</ul>
+        </div>
+      ) : null}
+      <CheckboxField label="I have dealt with every finding listed for this aircraft." name="acceptFindings" hint="Needed only when the record or the aircraft's status shows something." />
+      <SubmitButton pendingText="Dispatching…">Dispatch</SubmitButton>
+    </form>
+  );
+}

@@ -1,0 +1,52 @@
+"use client";
+import { useRouter } from "next/navigation";
+import { useActionState, useEffect, useState } from "react";
+import { CheckboxField } from "@/components/fleet/form-bits";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { initialActionState } from "@/lib/actions/action-state";
+import { createBooking } from "@/lib/actions/bookings/create-booking";
+import { GuardNotes } from "./guard-notes";
+
+type Choice = { id: string; label: string };
+
+export function BookingForm({ slug, aircraft, instructors, members, defaults }: { slug: string; aircraft: Choice[]; instructors: Choice[]; members: Choice[] | null; defaults: { aircraftId: string; startsAt: string; endsAt: string } }) {
+  const [state, action] = useActionState(createBooking, initialActionState);
+  const router = useRouter();
+  const [values, setValues] = useState({ ...defaults, instructorId: "", memberId: "", purpose: "", carryingPassengers: false });
+  const set = (k: keyof typeof values) => (e: { target: { value: string; checked?: boolean; type?: string } }) => setValues((v) => ({ ...v, [k]: e.target.type === "checkbox" ? Boolean(e.target.checked) : e.target.value }));
+  const bookingId = (state.data as { bookingId?: string } | undefined)?.bookingId;
+  useEffect(() => {
+    if (state.ok && bookingId) router.push(`/clubs/${slug}/bookings/${bookingId}`);
+  }, [state.ok, bookingId, router, slug]);
+  const e = state.fieldErrors;
+  return (
+    <form action={action} noValidate aria-label="Book an aircraft">
+      <FormMessage state={state} />
+      <GuardNotes state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <SelectField label="Aircraft" name="aircraftId" value={values.aircraftId} onChange={set("aircraftId")} errors={e.aircraftId}>
+        <option value="" disabled>Choose an aircraft</option>
+        {aircraft.map((a) => <option key={a.id} value={a.id}>{a.label}</option>)}
+      </SelectField>
+      <div className="grid gap-x-3 sm:grid-cols-2">
+        <Field label="Start (club time)" name="startsAt" type="datetime-local" step={900} value={values.startsAt} onChange={set("startsAt")} errors={e.startsAt} />
+        <Field label="End (club time)" name="endsAt" type="datetime-local" step={900} value={values.endsAt} onChange={set("endsAt")} errors={e.endsAt} />
+      </div>
+      {members ? (
+        <SelectField label="Member flying" name="memberId" value={values.memberId} onChange={set("memberId")} errors={e.memberId} hint="Leave as yourself, or book for a student.">
+          <option value="">Myself</option>
+          {members.map((m) => <option key={m.id} value={m.id}>{m.label}</option>)}
+        </SelectField>
+      ) : null}
+      <SelectField label="Instructor" name="instructorId" value={values.instructorId} onChange={set("instructorId")} errors={e.instructorId} hint="With an instructor aboard, the instructor is pilot in command.">
+        <option value="">No instructor (solo or with passengers)</option>
+        {instructors.map((i) => <option key={i.id} value={i.id}>{i.label}</option>)}
+      </SelectField>
+      <Field label="Purpose (optional)" name="purpose" value={values.purpose} onChange={set("purpose")} errors={e.purpose} maxLength={200} />
+      <CheckboxField label="I plan to carry passengers" name="carryingPassengers" checked={values.carryingPassengers} onChange={set("carryingPassengers")} errors={e.carryingPassengers} hint="Then passenger currency (14 CFR 61.57(a)) is checked too." />
+      <SubmitButton pendingText="Booking…">Book</SubmitButton>
+    </form>
+  );
+}

@@ -1,0 +1,37 @@
+"use client";
+import { useActionState } from "react";
+import { TextAreaField } from "@/components/fleet/form-bits";
+import { Field } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { initialActionState } from "@/lib/actions/action-state";
+import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
+
+export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText }: { slug: string; bookingId: string; hobbs: number | null; tach: number | null; metric: boolean; rateText: string }) {
+  const [state, action] = useActionState(checkInBooking, initialActionState);
+  const e = state.fieldErrors;
+  if (state.ok) {
+    return <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">✓ {state.message}</p>;
+  }
+  return (
+    <form action={action} noValidate aria-label="Check in">
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="bookingId" value={bookingId} />
+      <div className="grid grid-cols-2 gap-x-3">
+        <Field label="Hobbs out" name="hobbsOut" inputMode="decimal" defaultValue={hobbs?.toFixed(1) ?? ""} errors={e.hobbsOut} />
+        <Field label="Hobbs in" name="hobbsIn" inputMode="decimal" errors={e.hobbsIn} />
+        <Field label="Tach out" name="tachOut" inputMode="decimal" defaultValue={tach?.toFixed(1) ?? ""} errors={e.tachOut} />
+        <Field label="Tach in" name="tachIn" inputMode="decimal" errors={e.tachIn} />
+        <Field label="Day landings" name="dayLandings" inputMode="numeric" defaultValue="1" errors={e.dayLandings} />
+        <Field label="Night full-stop landings" name="nightFullStopLandings" inputMode="numeric" defaultValue="0" errors={e.nightFullStopLandings} />
+        <Field label={`Fuel added (${metric ? "litres" : "US gal"})`} name="fuelAdded" inputMode="decimal" defaultValue="0" errors={e.fuelAdded} />
+        <Field label={`Oil added (${metric ? "litres" : "quarts"})`} name="oilAdded" inputMode="decimal" defaultValue="0" errors={e.oilAdded} />
+      </div>
+      <TextAreaField label="Squawk (optional)" name="squawk" errors={e.squawk} hint="Anything wrong with the aircraft: it goes to maintenance with this flight." />
+      <TextAreaField label="Notes (optional)" name="notes" errors={e.notes} rows={2} />
+      <p className="mb-3 text-sm text-ink-700">The flight is charged at {rateText} and posted to your account once.</p>
+      <SubmitButton pendingText="Checking in…">Check in</SubmitButton>
+    </form>
+  );
+}

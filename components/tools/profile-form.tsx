@@ -1,0 +1,42 @@
+"use client";
+import { useActionState } from "react";
+import { TextAreaField } from "@/components/fleet/form-bits";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { initialActionState } from "@/lib/actions/action-state";
+import { saveWeightBalanceProfileAction } from "@/lib/actions/tools/save-weight-balance-profile";
+
+export type ProfileDefaults = {
+  emptyWeight: string; emptyArm: string; maxTakeoffWeight: string; maxLandingWeight: string; fuelKind: string; burnPerHour: string;
+  stations: string; tanks: string; envelopeNormal: string; envelopeUtility: string; source: string;
+};
+
+export function ProfileForm({ slug, aircraftId, defaults, units }: { slug: string; aircraftId: string; defaults: ProfileDefaults; units: { weight: string; arm: string; fuel: string } }) {
+  const [state, action] = useActionState(saveWeightBalanceProfileAction, initialActionState);
+  const e = state.fieldErrors;
+  return (
+    <form action={action} noValidate aria-label="Weight and balance figures">
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="aircraftId" value={aircraftId} />
+      <div className="grid gap-x-3 sm:grid-cols-2">
+        <Field label={`Empty weight (${units.weight})`} name="emptyWeight" inputMode="decimal" defaultValue={defaults.emptyWeight} errors={e.emptyWeight} />
+        <Field label={`Empty arm (${units.arm})`} name="emptyArm" inputMode="decimal" defaultValue={defaults.emptyArm} errors={e.emptyArm} />
+        <Field label={`Maximum takeoff weight (${units.weight})`} name="maxTakeoffWeight" inputMode="decimal" defaultValue={defaults.maxTakeoffWeight} errors={e.maxTakeoffWeight} />
+        <Field label={`Maximum landing weight (${units.weight}, if any)`} name="maxLandingWeight" inputMode="decimal" defaultValue={defaults.maxLandingWeight} errors={e.maxLandingWeight} />
+        <SelectField label="Fuel" name="fuelKind" defaultValue={defaults.fuelKind} errors={e.fuelKind}>
+          <option value="avgas">Avgas (6 lb per US gal)</option>
+          <option value="jet">Jet fuel (6.7 lb per US gal)</option>
+        </SelectField>
+        <Field label={`Cruise burn (${units.fuel} per hour)`} name="burnPerHour" inputMode="decimal" defaultValue={defaults.burnPerHour} errors={e.burnPerHour} />
+      </div>
+      <TextAreaField label="Stations: name | arm | limit, one per line" name="stations" rows={4} defaultValue={defaults.stations} errors={e.stations} hint={`Arms in ${units.arm}, limits in ${units.weight}; leave the limit off when there is none.`} />
+      <TextAreaField label="Fuel tanks: name | arm | usable capacity, one per line" name="tanks" rows={3} defaultValue={defaults.tanks} errors={e.tanks} hint={`Capacity in ${units.fuel}.`} />
+      <TextAreaField label="Normal-category envelope: arm, weight per corner" name="envelopeNormal" rows={6} defaultValue={defaults.envelopeNormal} errors={e.envelopeNormal} hint="Corners in order around the polygon, as the flight manual draws it." />
+      <TextAreaField label="Utility-category envelope (if the aircraft has one)" name="envelopeUtility" rows={5} defaultValue={defaults.envelopeUtility} errors={e.envelopeUtility} />
+      <Field label="Source of the figures" name="source" defaultValue={defaults.source} errors={e.source} hint="e.g. the weighing report and its date." />
+      <SubmitButton>Save figures</SubmitButton>
+    </form>
+  );
+}

@@ -1,0 +1,132 @@
+import { and, eq } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import { aircraft, bookings, flights, journalEntries, preflightRecordItems, squawks, uploads } from "@/db/schema";
+import { getPreflightTemplate } from "@/db/queries/tools-preflight";
+import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
+import { createBooking } from "@/lib/actions/bookings/create-booking";
+import { dispatchBooking } from "@/lib/actions/bookings/dispatch-booking";
+import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
+import { saveLoading } from "@/lib/actions/tools/save-loading";
+import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
+import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
+import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
+
+const SLUG = "lakeshore-aero";
+const PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
+
+describe("weight and balance, preflight, dispatch and check-in on one booking", () => {
+  let bookingId = "";
+  let aircraftId = "";
+
+  beforeAll(async () => {
+    await seedScenario();
+    setGuards(SLUG, { notCurrent: "warn", inArrears: "warn" });
+    const club = clubBySlug(SLUG);
+    aircraftId = planeId(SLUG, "N0527L");
+    signInAs("member@hangarline.test");
+    const made = await createBooking(EMPTY, form({ club: SLUG, aircraftId, startsAt: localAt(club, 0, "00:00").slice(0, 10) + "T23:00", endsAt: localAt(club, 1, "02:00"), acceptedGuards: ALL_GUARDS }));
+    expect(made, made.message).toMatchObject({ ok: true });
+    bookingId = (made.data as { bookingId: string }).bookingId;
+  });
+
+  it("saves the loading with the booking, with both points checked", async () => {
+    signInAs("member@hangarline.test");
+    const club = clubBySlug(SLUG);
+    const profile = getWeightBalanceProfile(db(), club.id, aircraftId)!;
+    const state = await saveLoading(EMPTY, form({
+      club: SLUG, bookingId, category: "normal",
+      stationKey: profile.stations.map((s) => s.key), stationWeight: ["340", "0", "20"],
+      tankKey: profile.tanks.map((t) => t.key), tankVolume: ["40"], burnVolume: "12",
+    }));
+    expect(state, state.message).toMatchObject({ ok: true });
+    expect(state.message).toMatch(/within the envelope/);
+    const bad = await saveLoading(EMPTY, form({ club: SLUG, bookingId, stationKey: profile.stations.map((s) => s.key), stationWeight: ["heavy", "0", "0"], tankKey: profile.tanks.map((t) => t.key), tankVolume: ["40"], burnVolume: "12" }));
+    expect(bad.fieldErrors["stationWeight.0"]?.[0]).toMatch(/as a number/);
+  });
+
+  it("a preflight finding becomes a squawk with its photo, in one step", async () => {
+    signInAs("member@hangarline.test");
+    const club = clubBySlug(SLUG);
+    const template = getPreflightTemplate(db(), club.id, aircraftId)!;
+    const fields: Record<string, string | string[] | Blob> = { club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Wing tanks"], fuelQuantity: ["40"] };
+    template.sumpPoints.forEach((_, i) => (fields[`sump.${i}`] = "clear"));
+    for (const item of template.items) fields[`result.${item.id}`] = "ok";
+    const tire = template.items.find((i) => i.label.includes("tire"))!;
+    fields[`result.${tire.id}`] = "finding";
+    fields[`note.${tire.id}`] = "Left main tire worn to the cord on one side";
+    const fd = form(fields as Record<string, string | string[]>);
+    fd.append(`photos.${tire.id}`, new File([PNG], "tire.png", { type: "image/png" }));
+
+    // Missing answers are named per item and nothing is written.
+    const partial = form({ club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Wing tanks"], fuelQuantity: ["40"] });
+    template.sumpPoints.forEach((_, i) => partial.append(`sump.${i}`, "clear"));
+    const refused = await recordPreflight(EMPTY, partial);
+    expect(refused.ok).toBe(false);
+    expect(refused.fieldErrors[`items.${template.items[0]!.id}.result`]?.[0]).toMatch(/OK or a finding/);
+
+    const state = await recordPreflight(EMPTY, fd);
+    expect(state, JSON.stringify(state)).toMatchObject({ ok: true });
+    const { squawkIds, recordId } = state.data as { squawkIds: string[]; recordId: string };
+    expect(squawkIds).toHaveLength(1);
+    const squawk = db().select().from(squawks).where(eq(squawks.id, squawkIds[0]!)).get()!;
+    expect(squawk).toMatchObject({ aircraftId, foundDuring: "preflight", triage: "untriaged", status: "open" });
+    expect(squawk.description).toMatch(/tire, brake and strut: Left main tire worn/);
+    expect(db().select().from(uploads).where(and(eq(uploads.subjectType, "Squawk"), eq(uploads.subjectId, squawk.id))).all()).toHaveLength(1);
+    const item = db().select().from(preflightRecordItems).where(and(eq(preflightRecordItems.recordId, recordId), eq(preflightRecordItems.result, "finding"))).get()!;
+    expect(item.squawkId).toBe(squawk.id);
+  });
+
+  it("dispatch confirms the record; its findings need the member's tick", async () => {
+    signInAs("member@hangarline.test");
+    const recordId = db().select().from(preflightRecordItems).all().at(-1)!.recordId;
+    const unconfirmed = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId }));
+    expect(unconfirmed.fieldErrors.confirmPreflight?.[0]).toMatch(/Confirm/);
+    const findings = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on" }));
+    expect(findings.fieldErrors.acceptFindings?.join(" ")).toMatch(/tire/);
+    const ok = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptFindings: "on" }));
+    expect(ok, ok.message).toMatchObject({ ok: true });
+    expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!).toMatchObject({ status: "dispatched", preflightRecordId: recordId });
+  });
+
+  it("check-in logs the flight, moves the meters and posts the charge once, even when sent twice", async () => {
+    signInAs("member@hangarline.test");
+    const before = db().select().from(aircraft).where(eq(aircraft.id, aircraftId)).get()!;
+    const hobbsOut = before.currentHobbs!;
+    const tachOut = before.currentTach!;
+    const fields = { club: SLUG, bookingId, hobbsOut: hobbsOut.toFixed(1), hobbsIn: (hobbsOut + 1.3).toFixed(1), tachOut: tachOut.toFixed(1), tachIn: (tachOut + 1.1).toFixed(1), dayLandings: "3", fuelAdded: "10", oilAdded: "0" };
+    const first = await checkInBooking(EMPTY, form(fields));
+    expect(first, first.message).toMatchObject({ ok: true });
+    const { flightId, chargeMinor } = first.data as { flightId: string; chargeMinor: number };
+    // 1.3 Hobbs hours × $152.00 per hour (the seeded rate) = $197.60.
+    expect(chargeMinor).toBe(19_760);
+    const again = await checkInBooking(EMPTY, form(fields));
+    expect(again.ok).toBe(true);
+    expect(again.message).toMatch(/already checked in/);
+
+    const logged = db().select().from(flights).where(eq(flights.id, flightId)).all();
+    expect(logged).toHaveLength(1);
+    expect(logged[0]).toMatchObject({ aircraftId, hobbsOut, hobbsIn: Number((hobbsOut + 1.3).toFixed(1)), dayLandings: 3, fuelAdded: 10, continuity: "ok" });
+    const after = db().select().from(aircraft).where(eq(aircraft.id, aircraftId)).get()!;
+    expect(after.currentHobbs).toBe(Number((hobbsOut + 1.3).toFixed(1)));
+    expect(after.currentTach).toBe(Number((tachOut + 1.1).toFixed(1)));
+    const entries = db().select().from(journalEntries).where(and(eq(journalEntries.sourceType, "flight"), eq(journalEntries.sourceId, flightId))).all();
+    expect(entries).toHaveLength(1);
+    expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!).toMatchObject({ status: "checked_in", flightId });
+  });
+
+  it("cannot check in a booking that was never dispatched", async () => {
+    const club = clubBySlug(SLUG);
+    signInAs("member@hangarline.test");
+    const made = await createBooking(EMPTY, form({ club: SLUG, aircraftId, startsAt: localAt(club, 12, "10:00"), endsAt: localAt(club, 12, "11:00"), acceptedGuards: ALL_GUARDS }));
+    const state = await checkInBooking(EMPTY, form({ club: SLUG, bookingId: (made.data as { bookingId: string }).bookingId, hobbsOut: "1.0", hobbsIn: "2.0", tachOut: "1.0", tachIn: "2.0", dayLandings: "1" }));
+    expect(state.ok).toBe(false);
+    expect(state.message).toMatch(/Dispatch the booking first/);
+  });
+
+  it("another member cannot act on the booking", async () => {
+    signInAs("pilot2@hangarline.test");
+    const state = await saveLoading(EMPTY, form({ club: SLUG, bookingId, stationKey: [], stationWeight: [], tankKey: [], tankVolume: [], burnVolume: "0" }));
+    expect(state.ok).toBe(false);
+    expect(state.message).toMatch(/Only the member on this booking/);
+  });
+});

@@ -1,0 +1,98 @@
+import ICAL from "ical.js";
+import { and, eq, or } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import { GET } from "@/app/api/calendar/[token]/route";
+import { bookings, calendarFeedTokens } from "@/db/schema";
+import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
+import { createBooking } from "@/lib/actions/bookings/create-booking";
+import { manageCalendarLink } from "@/lib/actions/bookings/calendar-link";
+import { hashToken } from "@/lib/server/tokens";
+import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
+import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
+
+const SLUG = "lakeshore-aero";
+
+async function makeLink(email: string): Promise<string> {
+  signInAs(email);
+  const state = await manageCalendarLink(EMPTY, form({ club: SLUG, intent: "create" }));
+  expect(state.ok).toBe(true);
+  const url = (state.data as { url: string }).url;
+  return url.split("/api/calendar/")[1]!;
+}
+
+async function fetchFeed(secret: string) {
+  return GET(new Request(`http://app.test/api/calendar/${secret}`), { params: Promise.resolve({ token: secret }) });
+}
+
+/** UIDs of the VEVENTs, parsed by ical.js (an iCalendar parser independent of the generator). */
+function eventUids(body: string): string[] {
+  const calendar = new ICAL.Component(ICAL.parse(body));
+  expect(calendar.name).toBe("vcalendar");
+  return calendar.getAllSubcomponents("vevent").map((v) => String(v.getFirstPropertyValue("uid")));
+}
+
+describe("the member's calendar feed (iCalendar, RFC 5545)", () => {
+  beforeAll(async () => {
+    await seedScenario();
+    // These tests are about the feed, not the guards: every guard only warns, and is accepted.
+    setGuards(SLUG, { grounded: "warn", inspectionDue: "warn", notCheckedOut: "warn", notCurrent: "warn", medicalExpired: "warn", inArrears: "warn" });
+  });
+
+  it("holds exactly the person's bookings, as member and as instructor, and none of anyone else's", async () => {
+    const club = clubBySlug(SLUG);
+    const instructor = signInAs("instructor@hangarline.test")!;
+    // One booking as the member flying, one cancelled: the feed shows the first only.
+    const own = await createBooking(EMPTY, form({ club: SLUG, aircraftId: planeId(SLUG, "N0534L"), startsAt: localAt(club, 5, "16:00"), endsAt: localAt(club, 5, "17:00"), acceptedGuards: ALL_GUARDS }));
+    expect(own, own.message).toMatchObject({ ok: true });
+    const gone = await createBooking(EMPTY, form({ club: SLUG, aircraftId: planeId(SLUG, "N0534L"), startsAt: localAt(club, 6, "16:00"), endsAt: localAt(club, 6, "17:00"), acceptedGuards: ALL_GUARDS }));
+    await cancelBooking(EMPTY, form({ club: SLUG, bookingId: (gone.data as { bookingId: string }).bookingId }));
+
+    const secret = await makeLink("instructor@hangarline.test");
+    const res = await fetchFeed(secret);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toMatch(/^text\/calendar/);
+    const body = await res.text();
+    const expected = db()
+      .select({ id: bookings.id })
+      .from(bookings)
+      .where(and(eq(bookings.clubId, club.id), or(eq(bookings.userId, instructor.id), eq(bookings.instructorId, instructor.id))))
+      .all()
+      .filter((b) => b.id !== (gone.data as { bookingId: string }).bookingId)
+      .map((b) => `${b.id}@app.test`)
+      .sort();
+    expect(expected.length).toBeGreaterThanOrEqual(2); // the seeded dual flight and the new one
+    expect(eventUids(body).sort()).toEqual(expected);
+
+    const event = new ICAL.Event(new ICAL.Component(ICAL.parse(body)).getAllSubcomponents("vevent").find((v) => v.getFirstPropertyValue("uid") === `${(own.data as { bookingId: string }).bookingId}@app.test`)!);
+    const row = db().select().from(bookings).where(eq(bookings.id, (own.data as { bookingId: string }).bookingId)).get()!;
+    expect(event.startDate.toJSDate().getTime()).toBe(row.startsAt.getTime());
+    expect(event.endDate.toJSDate().getTime()).toBe(row.endsAt.getTime());
+    expect(event.summary).toMatch(/^N0534L /);
+  });
+
+  it("another member's feed does not show the instructor's bookings", async () => {
+    const secret = await makeLink("pilot2@hangarline.test");
+    const pilot = signInAs("pilot2@hangarline.test")!;
+    const uids = eventUids(await (await fetchFeed(secret)).text());
+    const theirs = db().select({ id: bookings.id }).from(bookings).where(or(eq(bookings.userId, pilot.id), eq(bookings.instructorId, pilot.id))).all().map((b) => `${b.id}@app.test`);
+    expect(uids.sort()).toEqual(theirs.sort());
+  });
+
+  it("a wrong secret is a 404, and so is one that was revoked or replaced", async () => {
+    expect((await fetchFeed("not-a-real-secret-at-all-0000000000")).status).toBe(404);
+    expect((await fetchFeed("x")).status).toBe(404);
+    const first = await makeLink("member@hangarline.test");
+    expect((await fetchFeed(first)).status).toBe(200);
+    const second = await makeLink("member@hangarline.test");
+    expect((await fetchFeed(first)).status).toBe(404);
+    expect((await fetchFeed(second)).status).toBe(200);
+    signInAs("member@hangarline.test");
+    const off = await manageCalendarLink(EMPTY, form({ club: SLUG, intent: "revoke" }));
+    expect(off.ok).toBe(true);
+    expect((await fetchFeed(second)).status).toBe(404);
+    // Only the hash is stored, never the secret.
+    const row = db().select().from(calendarFeedTokens).where(eq(calendarFeedTokens.tokenHash, hashToken(second))).get()!;
+    expect(JSON.stringify(row)).not.toContain(second);
+    expect(row.revokedAt).not.toBeNull();
+  });
+});
