@@ -94,5 +94,5 @@ export function explainDenied(action: Action, subject: SubjectName): string {
   if (roles.length === 0) return "No role in this club can do this.";
   const names = roles.map((r) => ROLE_LABELS[r].toLowerCase());
   const list = names.length === 1 ? names[0] : `${names.slice(0, -1).join(", ")} or ${names.at(-1)}`;
-  return `Only a ${list} can do this.`;
+  return `Only ${/^[aeiou]/.test(list ?? "") ? "an" : "a"} ${list} can do this.`;
 }

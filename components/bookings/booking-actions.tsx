@@ -9,16 +9,18 @@ import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
 import { changeBooking } from "@/lib/actions/bookings/change-booking";
 import { dispatchBooking } from "@/lib/actions/bookings/dispatch-booking";
 import { GuardNotes } from "./guard-notes";
+import { PendingButton } from "./pending-button";
+import { useKeptForm } from "./use-kept-form";
 
 type Choice = { id: string; label: string };
 
 export function ChangeBookingForm({ slug, bookingId, defaults, instructors, lateNote }: { slug: string; bookingId: string; defaults: { startsAt: string; endsAt: string; instructorId: string }; instructors: Choice[]; lateNote: string | null }) {
-  const [state, action] = useActionState(changeBooking, initialActionState);
+  const { state, onSubmit, pending } = useKeptForm(changeBooking, initialActionState);
   const [values, setValues] = useState(defaults);
   const set = (k: keyof typeof values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [k]: e.target.value }));
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Change the booking">
+    <form onSubmit={onSubmit} noValidate aria-label="Change the booking">
       <FormMessage state={state} />
       <GuardNotes state={state} />
       <input type="hidden" name="club" value={slug} />
@@ -32,7 +34,7 @@ export function ChangeBookingForm({ slug, bookingId, defaults, instructors, late
         {instructors.map((i) => <option key={i.id} value={i.id}>{i.label}</option>)}
       </SelectField>
       {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
-      <SubmitButton variant="secondary">Save the change</SubmitButton>
+      <PendingButton pending={pending} variant="secondary">Save the change</PendingButton>
     </form>
   );
 }
@@ -52,10 +54,10 @@ export function CancelBookingForm({ slug, bookingId, lateNote }: { slug: string;
 }
 
 export function DispatchForm({ slug, bookingId, records }: { slug: string; bookingId: string; records: { id: string; label: string }[] }) {
-  const [state, action] = useActionState(dispatchBooking, initialActionState);
+  const { state, onSubmit, pending } = useKeptForm(dispatchBooking, initialActionState);
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Dispatch">
+    <form onSubmit={onSubmit} noValidate aria-label="Dispatch">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
@@ -69,7 +71,7 @@ export function DispatchForm({ slug, bookingId, records }: { slug: string; booki
         </div>
       ) : null}
       <CheckboxField label="I have dealt with every finding listed for this aircraft." name="acceptFindings" hint="Needed only when the record or the aircraft's status shows something." />
-      <SubmitButton pendingText="Dispatching…">Dispatch</SubmitButton>
+      <PendingButton pending={pending} pendingText="Dispatching…">Dispatch</PendingButton>
     </form>
   );
 }

@@ -1,18 +1,19 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { useActionState, useEffect, useState } from "react";
+import { useEffect, useState } from "react";
 import { CheckboxField } from "@/components/fleet/form-bits";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { GuardNotes } from "./guard-notes";
+import { PendingButton } from "./pending-button";
+import { useKeptForm } from "./use-kept-form";
 
 type Choice = { id: string; label: string };
 
 export function BookingForm({ slug, aircraft, instructors, members, defaults }: { slug: string; aircraft: Choice[]; instructors: Choice[]; members: Choice[] | null; defaults: { aircraftId: string; startsAt: string; endsAt: string } }) {
-  const [state, action] = useActionState(createBooking, initialActionState);
+  const { state, onSubmit, pending } = useKeptForm(createBooking, initialActionState);
   const router = useRouter();
   const [values, setValues] = useState({ ...defaults, instructorId: "", memberId: "", purpose: "", carryingPassengers: false });
   const set = (k: keyof typeof values) => (e: { target: { value: string; checked?: boolean; type?: string } }) => setValues((v) => ({ ...v, [k]: e.target.type === "checkbox" ? Boolean(e.target.checked) : e.target.value }));
@@ -22,7 +23,7 @@ export function BookingForm({ slug, aircraft, instructors, members, defaults }: 
   }, [state.ok, bookingId, router, slug]);
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Book an aircraft">
+    <form onSubmit={onSubmit} noValidate aria-label="Book an aircraft">
       <FormMessage state={state} />
       <GuardNotes state={state} />
       <input type="hidden" name="club" value={slug} />
@@ -46,7 +47,7 @@ export function BookingForm({ slug, aircraft, instructors, members, defaults }: 
       </SelectField>
       <Field label="Purpose (optional)" name="purpose" value={values.purpose} onChange={set("purpose")} errors={e.purpose} maxLength={200} />
       <CheckboxField label="I plan to carry passengers" name="carryingPassengers" checked={values.carryingPassengers} onChange={set("carryingPassengers")} errors={e.carryingPassengers} hint="Then passenger currency (14 CFR 61.57(a)) is checked too." />
-      <SubmitButton pendingText="Booking…">Book</SubmitButton>
+      <PendingButton pending={pending} pendingText="Booking…">Book</PendingButton>
     </form>
   );
 }

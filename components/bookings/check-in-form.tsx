@@ -1,20 +1,20 @@
 "use client";
-import { useActionState } from "react";
 import { TextAreaField } from "@/components/fleet/form-bits";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
+import { PendingButton } from "./pending-button";
+import { useKeptForm } from "./use-kept-form";
 
 export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText }: { slug: string; bookingId: string; hobbs: number | null; tach: number | null; metric: boolean; rateText: string }) {
-  const [state, action] = useActionState(checkInBooking, initialActionState);
+  const { state, onSubmit, pending } = useKeptForm(checkInBooking, initialActionState);
   const e = state.fieldErrors;
   if (state.ok) {
     return <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">✓ {state.message}</p>;
   }
   return (
-    <form action={action} noValidate aria-label="Check in">
+    <form onSubmit={onSubmit} noValidate aria-label="Check in">
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
@@ -31,7 +31,7 @@ export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText }: 
       <TextAreaField label="Squawk (optional)" name="squawk" errors={e.squawk} hint="Anything wrong with the aircraft: it goes to maintenance with this flight." />
       <TextAreaField label="Notes (optional)" name="notes" errors={e.notes} rows={2} />
       <p className="mb-3 text-sm text-ink-700">The flight is charged at {rateText} and posted to your account once.</p>
-      <SubmitButton pendingText="Checking in…">Check in</SubmitButton>
+      <PendingButton pending={pending} pendingText="Checking in…">Check in</PendingButton>
     </form>
   );
 }

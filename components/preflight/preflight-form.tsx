@@ -1,9 +1,10 @@
 "use client";
-import { useActionState, useState } from "react";
+import { useState } from "react";
+import { PendingButton } from "@/components/bookings/pending-button";
+import { useKeptForm } from "@/components/bookings/use-kept-form";
 import { CheckboxField, FileField, TextAreaField } from "@/components/fleet/form-bits";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
 
@@ -19,13 +20,13 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
   oilMaximum: number | null;
   units: { fuel: string; oil: string };
 }) {
-  const [state, action] = useActionState(recordPreflight, initialActionState);
+  const { state, onSubmit, pending } = useKeptForm(recordPreflight, initialActionState);
   const [results, setResults] = useState<Record<string, "ok" | "finding">>({});
   const e = state.fieldErrors;
   const sections = [...new Set(items.map((i) => i.section))];
   if (state.ok) return <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">✓ {state.message}</p>;
   return (
-    <form action={action} noValidate aria-label="Preflight record">
+    <form onSubmit={onSubmit} noValidate aria-label="Preflight record">
       <FormMessage state={state} />
       {e._form ? <p role="alert" className="field-error mb-3">{e._form.join(" ")}</p> : null}
       <input type="hidden" name="club" value={slug} />
@@ -87,7 +88,7 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
       </fieldset>
       <Field label={`Oil quantity (${units.oil})`} name="oilQuantity" inputMode="decimal" errors={e.oilQuantity} hint={`Club minimum for this aircraft: ${oilMinimum} ${units.oil}${oilMaximum !== null ? `; maximum ${oilMaximum} ${units.oil}` : ""}.`} />
       <TextAreaField label="Notes (optional)" name="notes" rows={2} errors={e.notes} />
-      <SubmitButton pendingText="Recording…">Record the preflight</SubmitButton>
+      <PendingButton pending={pending} pendingText="Recording…">Record the preflight</PendingButton>
     </form>
   );
 }

@@ -38,6 +38,7 @@ export function listJournal(db: Db, clubId: string, opts: { from?: string; to?: 
         .from(journalLines)
         .innerJoin(ledgerAccounts, eq(ledgerAccounts.id, journalLines.accountId))
         .where(and(eq(journalLines.clubId, clubId), inArray(journalLines.entryId, ids.slice(i, i + 500))))
+        .orderBy(journalLines.lineNo)
         .all(),
     );
   }

@@ -14,6 +14,7 @@ type Actor = { clubId: string; userId: string | null; currency: string };
 /** One bank line ↔ the chosen book items ("line:<id>" postings, "payout:<id>" payouts); they must add up. */
 export function matchManually(tx: DbLike, a: Actor, bankLineId: string, bookIds: readonly string[]): void {
   const line = getOpenBankLine(tx, a.clubId, bankLineId);
+  assertDateOpen(tx, a.clubId, line.postedOn);
   const wanted = new Set(bookIds);
   if (wanted.size === 0) throw new LedgerError("Choose at least one item from the books.", "invalid", "bookIds");
   const lines = unmatchedBookLines(tx, a.clubId, "9999-12-31").filter((b) => wanted.has(b.id));

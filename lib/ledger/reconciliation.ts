@@ -154,6 +154,9 @@ export function autoMatchStatement(tx: DbLike, a: Actor, statementId: string): {
     )
     .orderBy(bankLines.lineNo)
     .all();
+  // A reconciled, locked period keeps its matches as they were.
+  const lockedEnd = lockedThrough(tx, a.clubId);
+  if (lockedEnd) open.splice(0, open.length, ...open.filter((l) => l.postedOn > lockedEnd));
   const book = unmatchedBookLines(tx, a.clubId, addDays(statement.periodEnd, LATE_BOOKING_DAYS));
   const payouts = openPayouts(tx, a.clubId);
   const items: BookItem[] = [
@@ -163,7 +166,7 @@ export function autoMatchStatement(tx: DbLike, a: Actor, statementId: string): {
   const result = autoMatch(open.map((l) => ({ id: l.id, date: l.postedOn, amountMinor: l.amountMinor, description: l.description, reference: l.reference ?? undefined })), items);
   const byPayoutId = new Map(payouts.map((p) => [p.payoutId, p]));
   const itemById = new Map(items.map((i) => [String(i.id), i]));
-  const through = lockedThrough(tx, a.clubId);
+  const through = lockedEnd;
   const lineRows: (typeof reconciliationMatches.$inferInsert)[] = [];
   const received: { line: BankLineRow; payout: PayoutItem }[] = [];
   for (const m of result.matches) {

@@ -13,6 +13,9 @@ export function canReadUpload(ability: AppAbility, upload: Pick<Upload, "subject
       return ability.can("read", "Bulletin");
     case "MemberDocument":
       return ability.can("read", own("MemberDocument", upload.ownerUserId ?? ""));
+    case "Medical":
+      // Medical scans: the member and club admins only, never the safety officer or instructors.
+      return ability.can("readDetails", own("Medical", upload.ownerUserId ?? ""));
     case "SafetyReport":
       return ability.can("read", "SafetyReport") && ability.can("triage", "SafetyReport");
     case "FuelReceipt":

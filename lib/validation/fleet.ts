@@ -75,9 +75,10 @@ const quantityField = (label: string) =>
       .refine((v) => v <= 2000, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 2000.` }),
   );
 
-/** Browsers send an empty, nameless File for a file input left blank: that is "no file". */
+/** A file input left blank arrives as an empty File (nameless, or named "undefined" once the
+ *  framework has re-encoded the form): no bytes means no file was chosen. */
 function isChosenFile(v: unknown): v is File {
-  return typeof File !== "undefined" && v instanceof File && (v.size > 0 || v.name !== "");
+  return typeof File !== "undefined" && v instanceof File && v.size > 0;
 }
 
 export function filesField(label: string, max: number) {

@@ -69,7 +69,8 @@ describe("flight line and squawks in the browser", () => {
     await form.getByLabel("I think this may make the aircraft unsafe to fly").check();
     await form.getByLabel("Photos (optional)").setInputFiles({ name: "hinge.png", mimeType: "image/png", buffer: pngBytes() });
     await form.getByRole("button", { name: "Report squawk" }).click();
-    await page.getByText("Squawk reported.").waitFor();
+    await page.waitForURL(/\?reported=/);
+    await page.getByRole("status").filter({ hasText: `Squawk reported: “${description}”` }).waitFor();
     await page.getByRole("img", { name: "Photo: hinge.png" }).waitFor();
     await expectNoHorizontalOverflow(page);
 

@@ -49,7 +49,7 @@ describe("safety bulletins in the browser", () => {
     await member.getByText("fuel cap seal", { exact: false }).first().waitFor();
     await expectNoHorizontalOverflow(member);
     await member.getByRole("form", { name: "Acknowledge bulletin" }).getByRole("button", { name: "Acknowledge" }).click();
-    await member.getByText("Acknowledged. Thank you.").waitFor();
+    await member.getByText(/You acknowledged this on \d{4}-\d{2}-\d{2}\./).waitFor();
     await member.goto(CLUB);
     expect(await member.getByRole("link", { name: title }).count()).toBe(0);
     await screenshot(member, "safety-member-home-after-ack");

@@ -41,7 +41,7 @@ describe("sign-in with e-mail and password", () => {
     // An address with no account is limited the same way, so the limit reveals nothing.
     for (let i = 0; i < MAX_FAILURES_PER_EMAIL; i++) await authorizeCredentials(db(), { email: "ghost@hangarline.test", password: "x-wrong-pass" }, "10.2.0.1");
     expect(await authorizeCredentials(db(), { email: "ghost@hangarline.test", password: "x-wrong-pass" }, "10.2.0.1")).toEqual({ ok: false, reason: "rate_limited" });
-  });
+  }, 90_000); // a dozen deliberate bcrypt comparisons; slow on a loaded 2-core machine
 
   it("rejects malformed input without touching the database", async () => {
     expect(await authorizeCredentials(db(), { email: "not-an-email", password: "" }, null)).toEqual({ ok: false, reason: "invalid" });

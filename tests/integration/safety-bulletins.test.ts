@@ -153,6 +153,10 @@ describe("safety bulletins", () => {
     signInAs("safety@hangarline.test");
     const third = await createBulletin(EMPTY, bulletinForm({ audience: "instructors", supersedesId: v1 }));
     expect(third.message).toMatch(/already been replaced/);
+    // The database refuses it too, whatever code would try.
+    expect(() => db().$client.prepare("update bulletins set body_markdown = 'changed' where id = ?").run(v1)).toThrow(/never edited/);
+    expect(() => db().$client.prepare("delete from bulletins where id = ?").run(v2)).toThrow(/never deleted/);
+    expect(db().select().from(bulletins).where(eq(bulletins.id, v1)).get()!.bodyMarkdown).toBe(body);
   });
 
   it("refuses bad input, a past deadline, a plain member and a fake attachment, writing nothing", async () => {

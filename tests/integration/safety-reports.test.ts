@@ -47,6 +47,9 @@ describe("confidential safety reports", () => {
     expect(notices.map((n) => n.toAddress)).toEqual(["safety@hangarline.test"]);
     expect(JSON.stringify(notices)).not.toMatch(/member@hangarline|Rowan|Pike/);
     expect(JSON.stringify(db().select().from(safetyReportEvents).all())).not.toContain(me);
+    // The database refuses to attach a reporter to an anonymous report later.
+    expect(() => db().$client.prepare("update safety_reports set reporter_id = ? where id = ?").run(me, row.id)).toThrow(/stores no reporter/);
+    expect(() => db().$client.prepare("update safety_reports set anonymous = 0 where id = ?").run(row.id)).toThrow(/stores no reporter/);
   });
 
   it("an anonymous report is unreadable by its filer and by club admins; the safety officer reads it", async () => {

@@ -30,7 +30,8 @@ export const reportSquawk = clubAction({
         .all();
       recordSquawkEvent(tx, { clubId: club.id, squawkId: row!.id, kind: "reported", actorId: user.id, toTriage: "untriaged", note: input.suspectedGrounding ? "Reported as possibly affecting airworthiness." : null });
       insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: row!.id, uploadedById: user.id }, stored);
-      return { data: { squawkId: row!.id }, revalidate: fleetPaths(club.slug, plane.id) };
+      // The confirmation comes from the URL, so it survives the page being rendered afresh.
+      return { data: { squawkId: row!.id }, revalidate: fleetPaths(club.slug, plane.id), redirectTo: `/clubs/${club.slug}/aircraft/${plane.id}?reported=${row!.id}` };
     });
   },
 });

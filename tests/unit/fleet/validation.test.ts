@@ -23,7 +23,7 @@ describe("fleet form schemas", () => {
   });
 
   it("turns a checkbox into a boolean and a blank file input into no files", () => {
-    const blank = new File([], "", { type: "application/octet-stream" });
+    const blank = new File([], "undefined", { type: "application/octet-stream" });
     const r = reportSquawkSchema.safeParse({ aircraftId: "a1", description: "Oil on the cowling", foundDuring: "preflight", suspectedGrounding: "on", photos: blank });
     expect(r.success && r.data).toMatchObject({ suspectedGrounding: true, photos: [] });
     expect(reportSquawkSchema.safeParse({ aircraftId: "a1", description: "Oil on the cowling", foundDuring: "preflight" }).data).toMatchObject({ suspectedGrounding: false });

@@ -97,5 +97,6 @@ describe("ability matrix: every role × action × subject", () => {
     expect(explainDenied("invite", "Member")).toBe("Only a club admin can do this.");
     expect(explainDenied("reconcile", "Reconciliation")).toBe("Only a treasurer can do this.");
     expect(explainDenied("triage", "Squawk")).toBe("Only a maintenance officer can do this.");
+    expect(explainDenied("create", "Checkout")).toBe("Only an instructor can do this.");
   });
 });

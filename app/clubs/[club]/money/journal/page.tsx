@@ -54,7 +54,7 @@ export default async function JournalPage({ params }: { params: Promise<{ club: 
             { key: "memo", header: "Memo" },
             { key: "member", header: "Member" },
             { key: "accounts", header: "Accounts" },
-            { key: "amountMinor", header: "Amount", kind: "money" },
+            { key: "amountMinor", header: "Entry total", kind: "money" },
             { key: "reference", header: "Reference" },
             { key: "state", header: "State" },
           ]}
