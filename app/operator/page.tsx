@@ -4,6 +4,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { getDb } from "@/db/client";
 import { listOperatorClubSummaries } from "@/db/queries/operator";
 import { getSessionUser } from "@/lib/server/session";
+import { formatMoney } from "@/lib/money";
+import { STATUS_WORDS } from "@/lib/fleet/status-words";
 
 export default async function OperatorHome() {
   const user = (await getSessionUser())!;
@@ -19,7 +21,15 @@ export default async function OperatorHome() {
             <dl className="mt-3 grid grid-cols-2 gap-2 text-sm">
               <div><dt className="text-ink-500">Active members</dt><dd className="text-xl font-bold tabular">{c.activeMembers}</dd></div>
               <div><dt className="text-ink-500">Admins</dt><dd className="text-xl font-bold tabular">{c.admins}</dd></div>
+              <div><dt className="text-ink-500">Receivables</dt><dd className="text-xl font-bold tabular">{formatMoney(c.receivables.totalMinor, c.currency)}</dd></div>
+              <div><dt className="text-ink-500">Over 30 days past due</dt><dd className="text-xl font-bold tabular">{formatMoney(c.receivables.over30Minor, c.currency)}</dd></div>
             </dl>
+            <p className="mt-3 text-sm font-bold text-ink-700">Fleet</p>
+            <ul className="mt-1 flex flex-wrap gap-2 text-sm" aria-label={`Fleet status of ${c.name}`}>
+              {(["flyable", "limited", "grounded", "unknown"] as const).map((s) => (
+                <li key={s} className="rounded border border-sand-300 bg-sand-50 px-2 py-1"><span className="tabular font-bold">{c.fleet[s]}</span> {STATUS_WORDS[s]}</li>
+              ))}
+            </ul>
             {c.admins === 0 ? <p className="mt-2 text-sm text-sock-700">No active admin yet: appoint one.</p> : null}
             <AssignAdminForm clubId={c.id} clubName={c.name} />
           </li>

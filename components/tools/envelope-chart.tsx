@@ -13,8 +13,11 @@ export function EnvelopeChart({ envelope, utility, takeoff, landing, units }: { 
   const arms = [...all.map((p) => p[0]), takeoff.arm, landing.arm];
   const weights = [...all.map((p) => p[1]), takeoff.weight, landing.weight];
   const pad = (lo: number, hi: number) => (hi - lo) * 0.08 || 1;
-  const xPad = pad(Math.min(...arms), Math.max(...arms));
-  const yPad = pad(Math.min(...weights), Math.max(...weights));
+  // Round the axes out to whole steps so that the ticks read like the flight manual's grid.
+  const step = (span: number) => { const raw = span / 5; const p = 10 ** Math.floor(Math.log10(raw || 1)); return [1, 2, 5, 10].map((m) => m * p).find((s) => s >= raw) ?? raw; };
+  const around = (lo: number, hi: number): [number, number] => { const s = step(hi - lo + pad(lo, hi)); return [Math.floor((lo - pad(lo, hi)) / s) * s, Math.ceil((hi + pad(lo, hi)) / s) * s]; };
+  const xDomain = around(Math.min(...arms), Math.max(...arms));
+  const yDomain = around(Math.min(...weights), Math.max(...weights));
   const fmt = (n: number) => (Math.round(n * 10) / 10).toLocaleString("en-US");
   return (
     <figure aria-label="CG envelope chart" className="min-w-0">
@@ -22,8 +25,8 @@ export function EnvelopeChart({ envelope, utility, takeoff, landing, units }: { 
         <ResponsiveContainer width="100%" height="100%">
           <ScatterChart margin={{ top: 10, right: 12, bottom: 24, left: 4 }}>
             <CartesianGrid stroke="#d9d4c5" />
-            <XAxis type="number" dataKey="arm" name="CG" unit={` ${units.arm}`} domain={[Math.min(...arms) - xPad, Math.max(...arms) + xPad]} tickFormatter={fmt} tick={{ fontSize: 12 }} />
-            <YAxis type="number" dataKey="weight" name="Weight" domain={[Math.min(...weights) - yPad, Math.max(...weights) + yPad]} tickFormatter={fmt} tick={{ fontSize: 12 }} width={52} />
+            <XAxis type="number" dataKey="arm" name="CG" unit={` ${units.arm}`} domain={xDomain} tickFormatter={fmt} tick={{ fontSize: 12 }} />
+            <YAxis type="number" dataKey="weight" name="Weight" domain={yDomain} tickFormatter={fmt} tick={{ fontSize: 12 }} width={52} />
             <Tooltip formatter={(v) => fmt(Number(v))} />
             <Legend verticalAlign="bottom" height={24} />
             <Scatter name="Normal envelope" data={closed(envelope)} line={{ stroke: "#1f4e5f", strokeWidth: 2 }} shape={() => <g />} fill="#1f4e5f" isAnimationActive={false} legendType="line" />

@@ -2,6 +2,7 @@ import "server-only";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import { alias } from "drizzle-orm/sqlite-core";
 import type { Db, Tx } from "@/db/client";
+import { listBookingHolders } from "./bookings-holders";
 import { aircraft, groundingNotices, memberships, users, type GroundingNoticeRow } from "@/db/schema";
 
 type Handle = Db | Tx;
@@ -32,11 +33,10 @@ export type NoticeRecipient = { userId: string; email: string; name: string | nu
 
 /**
  * Hook for the bookings feature: the people holding bookings on this aircraft from the notice's
- * effective time on, who must hear first. Bookings do not exist yet, so nobody is returned;
- * the bookings feature replaces this body and keeps the signature.
+ * effective time on, who must hear first (db/queries/bookings-holders.ts).
  */
-export function listBookingHoldersForGrounding(_tx: Handle, _clubId: string, _aircraftId: string, _effectiveAt: Date): NoticeRecipient[] {
-  return [];
+export function listBookingHoldersForGrounding(tx: Handle, clubId: string, aircraftId: string, effectiveAt: Date): NoticeRecipient[] {
+  return listBookingHolders(tx, clubId, aircraftId, effectiveAt);
 }
 
 /** Booking holders first, then every other active member of the club, each person once. */

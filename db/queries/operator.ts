@@ -2,9 +2,17 @@ import "server-only";
 import { and, count, eq, inArray } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { clubs, memberships } from "@/db/schema";
+import { isoDateInTimeZone } from "@/lib/dates";
+import type { AircraftStatus } from "@/lib/airworthiness";
 import { listClubsByIds, listOperatorClubIds } from "./clubs";
+import { getFlightLine } from "./fleet-status";
+import { ageingByMember } from "./money-accounts";
 
-export type ClubSummary = { id: string; slug: string; name: string; timeZone: string; currency: string; unitSystem: string; activeMembers: number; admins: number };
+export type ClubSummary = {
+  id: string; slug: string; name: string; timeZone: string; currency: string; unitSystem: string; activeMembers: number; admins: number;
+  fleet: Record<AircraftStatus, number>;
+  receivables: { totalMinor: number; over30Minor: number; over90Minor: number };
+};
 
 /** Counts only: an operator sees no member-level detail. */
 export function listOperatorClubSummaries(db: Db, operatorId: string): ClubSummary[] {
@@ -22,11 +30,18 @@ export function listOperatorClubSummaries(db: Db, operatorId: string): ClubSumma
     .from(memberships)
     .where(and(inArray(memberships.clubId, ids), eq(memberships.status, "active")))
     .all();
-  return list.map((c) => ({
-    id: c.id, slug: c.slug, name: c.name, timeZone: c.timeZone, currency: c.currency, unitSystem: c.unitSystem,
-    activeMembers: members.find((m) => m.clubId === c.id)?.n ?? 0,
-    admins: adminRows.filter((m) => m.clubId === c.id && m.roles.includes("admin")).length,
-  }));
+  return list.map((c) => {
+    const fleet: Record<AircraftStatus, number> = { flyable: 0, limited: 0, grounded: 0, unknown: 0 };
+    for (const entry of getFlightLine(db, c).entries) fleet[entry.status] += 1;
+    const { totals } = ageingByMember(db, c.id, isoDateInTimeZone(new Date(), c.timeZone));
+    return {
+      id: c.id, slug: c.slug, name: c.name, timeZone: c.timeZone, currency: c.currency, unitSystem: c.unitSystem,
+      activeMembers: members.find((m) => m.clubId === c.id)?.n ?? 0,
+      admins: adminRows.filter((m) => m.clubId === c.id && m.roles.includes("admin")).length,
+      fleet,
+      receivables: { totalMinor: totals.totalMinor, over30Minor: totals.days31To60 + totals.days61To90 + totals.over90, over90Minor: totals.over90 },
+    };
+  });
 }
 
 export function clubExists(db: Db, id: string): boolean {

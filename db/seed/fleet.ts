@@ -72,7 +72,8 @@ const TACH_PER_DAY = 0.55; // before the logged history: the fleet's average use
 /** Tach reading on a date, from the flight history (or extrapolated before it). */
 function tachOn(history: History, date: string): number {
   const first = history[0]!;
-  if (date < first.flownOn) return roundHours(first.tachOut - daysBetween(date, first.flownOn) * TACH_PER_DAY);
+  // Meters read to tenths.
+  if (date < first.flownOn) return Math.round((first.tachOut - daysBetween(date, first.flownOn) * TACH_PER_DAY) * 10) / 10;
   const flight = history.find((f) => f.flownOn >= date) ?? history.at(-1)!;
   return flight.tachOut;
 }

@@ -54,18 +54,6 @@ export function memberMovements(tx: DbLike, clubId: string, memberUserId?: strin
   }));
 }
 
-/** Balance per member (debit-positive: > 0 the member owes the club). */
-export function memberBalances(tx: DbLike, clubId: string): Map<string, number> {
-  const rows = tx
-    .select({ userId: ledgerAccounts.memberUserId, balance: sql<number>`coalesce(sum(${journalLines.debitMinor} - ${journalLines.creditMinor}), 0)` })
-    .from(ledgerAccounts)
-    .leftJoin(journalLines, and(eq(journalLines.accountId, ledgerAccounts.id), eq(journalLines.clubId, clubId)))
-    .where(and(eq(ledgerAccounts.clubId, clubId), eq(ledgerAccounts.parentCode, RECEIVABLES)))
-    .groupBy(ledgerAccounts.memberUserId)
-    .all();
-  return new Map(rows.filter((r) => r.userId).map((r) => [r.userId as string, Number(r.balance)]));
-}
-
 export type MemberPosition = OpenItems & { memberUserId: string; oldestDueDate: IsoDate | null };
 
 /** Open items per member from all receivable movements (or those `keep` keeps), in one read. */

@@ -42,11 +42,6 @@ export function assertDateOpen(tx: DbLike, clubId: string, date: IsoDate): void 
   if (through && date <= through) throw new PeriodLockedError(date, through);
 }
 
-export function findEntryBySourceKey(tx: DbLike, clubId: string, sourceKey: string): string | null {
-  const row = tx.select({ id: journalEntries.id }).from(journalEntries).where(and(eq(journalEntries.clubId, clubId), eq(journalEntries.sourceKey, sourceKey))).get();
-  return row?.id ?? null;
-}
-
 /**
  * Posts one balanced entry in the club's currency. Refuses an unbalanced entry
  * (assertBalanced), a date inside a locked period, and accounts of another club. With a

@@ -2,7 +2,7 @@
 // several book items — a split), book a bank item the books do not have yet, set a line aside,
 // undo a match, and lock the period once it agrees.
 import { and, eq, inArray } from "drizzle-orm";
-import { bankLines, bankStatements, cardPayouts, journalEntries, journalLines, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
+import { bankLines, bankStatements, cardPayouts, journalLines, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
 import { formatMoney } from "@/lib/money";
 import { accountId, type ChartCode, type DbLike } from "./accounts";
 import { LedgerError } from "./errors";
@@ -109,10 +109,4 @@ export function lockPeriod(tx: DbLike, a: Actor, statementId: string): PeriodRep
     })
     .run();
   return report;
-}
-
-/** The journal entry a bank-account posting belongs to, for links in the workspace. */
-export function entryOfLine(tx: DbLike, clubId: string, journalLineId: string): string | null {
-  const row = tx.select({ id: journalEntries.id }).from(journalLines).innerJoin(journalEntries, eq(journalEntries.id, journalLines.entryId)).where(and(eq(journalLines.clubId, clubId), eq(journalLines.id, journalLineId))).get();
-  return row?.id ?? null;
 }

@@ -25,6 +25,17 @@ async function tickWarningsAndRetry(page: Page, button: string) {
 describe("bookings on a phone", () => {
   it("book → weight and balance with the envelope → preflight with a finding → dispatch → check in", async () => {
     const page = await newPage("phone");
+    try {
+      await flow(page);
+    } catch (error) {
+      await screenshot(page, "bookings-failure-phone");
+      throw error;
+    }
+    await page.context().close();
+  });
+});
+
+async function flow(page: Page) {
     await signIn(page, "member@hangarline.test");
 
     // The fleet sheet, then a new booking with an instructor aboard.
@@ -37,14 +48,13 @@ describe("bookings on a phone", () => {
     const form = page.getByRole("form", { name: "Book an aircraft" });
     const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
     await form.getByLabel("Aircraft").selectOption(plane!);
-    const day = localDay(11, "America/Chicago");
+    const day = localDay(Number(process.env.BOOKINGS_E2E_DAYS ?? 11), "America/Chicago");
     await form.getByLabel("Start (club time)").fill(`${day}T06:00`);
     await form.getByLabel("End (club time)").fill(`${day}T08:00`);
     await form.getByLabel("Instructor").selectOption({ label: "Imani Ostrowski" });
     await form.getByLabel("Purpose (optional)").fill("Phone test: pattern work");
     await form.getByRole("button", { name: "Book", exact: true }).click();
     await Promise.race([page.waitForURL(/\/bookings\/[\w-]{36}$/, { timeout: 15_000 }), page.getByRole("group", { name: "Warnings to read" }).waitFor({ timeout: 15_000 })]).catch(() => undefined);
-    await screenshot(page, "bookings-after-book-phone");
     if (!/\/bookings\/[\w-]{36}$/.test(page.url())) {
       await tickWarningsAndRetry(page, "Book");
       await page.waitForURL(/\/bookings\/[\w-]{36}$/);
@@ -63,6 +73,8 @@ describe("bookings on a phone", () => {
     await wb.getByLabel("Planned fuel burn (US gal)").fill("12");
     await wb.getByRole("button", { name: "Work out and save" }).click();
     await page.getByText("Saved: within the envelope and every limit at takeoff and at landing.").first().waitFor();
+    await page.getByText("● Within limits at takeoff").waitFor();
+    await page.getByText("● Within limits at landing").waitFor();
     const chart = page.getByRole("figure", { name: "CG envelope chart" });
     await chart.waitFor();
     await chart.locator(".recharts-scatter-symbol").first().waitFor();
@@ -117,6 +129,4 @@ describe("bookings on a phone", () => {
     await expectNoHorizontalOverflow(page);
     await page.goto(bookingUrl, { waitUntil: "networkidle" });
     await page.getByText("Back, checked in").first().waitFor();
-    await page.context().close();
-  });
-});
+}

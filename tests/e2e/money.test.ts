@@ -94,8 +94,12 @@ describe("money in the browser", () => {
     const kinds = await table.locator("tbody tr td:nth-child(2)").allTextContents();
     expect(kinds.length).toBeGreaterThan(0);
     expect(new Set(kinds)).toEqual(new Set(["Dues"]));
+    // Amounts sort largest first on the first click.
     await table.getByRole("button", { name: /Entry total/ }).click();
-    await page.waitForURL(/sort=amountMinor/);
+    await page.waitForURL(/sort=-amountMinor/);
+    const totals = (await table.locator("tbody tr td:nth-child(6)").allTextContents()).map((t) => Number(t.replace(/[^0-9.]/g, "")));
+    expect(totals.length).toBeGreaterThan(1);
+    expect(totals).toEqual([...totals].sort((a, b) => b - a));
     await expectNoHorizontalOverflow(page);
     for (const p of ["", "/balances", "/ageing", "/billing", "/rates"]) {
       await page.goto(`/clubs/cottonwood-flyers/money${p}`);

@@ -3,6 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { auditLog, clubs, invitations, operatorAssignments } from "@/db/schema";
 import { createClub } from "@/lib/actions/operator/create-club";
 import { assignClubAdmin } from "@/lib/actions/operator/assign-admin";
+import { listOperatorClubSummaries } from "@/db/queries/operator";
 import { EMPTY, clubBySlug, db, form, membershipOf, outboxFor, seedOnce, signInAs } from "./helpers";
 
 const newClub = { name: "Juniper Ridge Flyers", slug: "juniper-ridge", timeZone: "America/Denver", currency: "USD", unitSystem: "imperial" };
@@ -10,6 +11,18 @@ const newClub = { name: "Juniper Ridge Flyers", slug: "juniper-ridge", timeZone:
 describe("operator console", () => {
   beforeAll(async () => {
     await seedOnce();
+  });
+
+  it("summarises each club with counts and totals only, no member-level detail", () => {
+    const operator = signInAs("operator@hangarline.test")!;
+    const summaries = listOperatorClubSummaries(db(), operator.id);
+    expect(summaries.map((s) => s.slug).sort()).toEqual(["aeroclub-silberau", "cottonwood-flyers", "lakeshore-aero"]);
+    for (const s of summaries) {
+      expect(Object.keys(s.fleet).sort()).toEqual(["flyable", "grounded", "limited", "unknown"]);
+      expect(Number.isInteger(s.receivables.totalMinor)).toBe(true);
+    }
+    const text = JSON.stringify(summaries);
+    expect(text).not.toMatch(/@hangarline\.test|Rowan|Pike/);
   });
 
   it("an operator creates a club and its first admin is invited through the outbox", async () => {

@@ -41,7 +41,7 @@ export default async function BookingWeightBalancePage({ params }: { params: Pro
       <div className="mb-4"><SafetyCaution compact /></div>
       <div className="grid gap-4 lg:grid-cols-2">
         <section className="card">
-          <LoadingForm key={saved?.updatedAt.getTime() ?? "new"} slug={club.slug} bookingId={booking.id} unitSystem={profile.unitSystem} stations={profile.stations} tanks={profile.tanks} hasUtility={Boolean(profile.envelopeUtility)} values={defaults} />
+          <LoadingForm slug={club.slug} bookingId={booking.id} unitSystem={profile.unitSystem} stations={profile.stations} tanks={profile.tanks} hasUtility={Boolean(profile.envelopeUtility)} values={defaults} />
         </section>
         <section className="card min-w-0">
           <h2 className="mb-3 text-lg font-bold">Saved with the booking</h2>
