@@ -22,9 +22,15 @@ export function dayHeading(date: string): string {
   return DAY_NAME.format(new Date(`${date}T12:00:00Z`));
 }
 
+// Building an Intl formatter costs far more than using one: the sheet formats thousands of
+// times per render, so one formatter per time zone is kept.
+const CLOCKS = new Map<string, Intl.DateTimeFormat>();
+
 /** "HH:MM" of an instant in the club's time zone. */
 export function clockTime(instant: Date | number, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-GB", { timeZone, hour: "2-digit", minute: "2-digit", hourCycle: "h23" }).format(new Date(instant));
+  let f = CLOCKS.get(timeZone);
+  if (!f) CLOCKS.set(timeZone, (f = new Intl.DateTimeFormat("en-GB", { timeZone, hour: "2-digit", minute: "2-digit", hourCycle: "h23" })));
+  return f.format(new Date(instant));
 }
 
 /** "YYYY-MM-DDTHH:MM" of an instant in the club's time zone, for a datetime-local field. */

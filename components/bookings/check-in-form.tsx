@@ -7,12 +7,14 @@ import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
 import { PendingButton } from "./pending-button";
 import { useKeptForm } from "./use-kept-form";
 
-export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText }: { slug: string; bookingId: string; hobbs: number | null; tach: number | null; metric: boolean; rateText: string }) {
+export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, checkedIn }: { slug: string; bookingId: string; hobbs: number | null; tach: number | null; metric: boolean; rateText: string; checkedIn: boolean }) {
   const { state, onSubmit, pending } = useKeptForm(checkInBooking, initialActionState);
   const e = state.fieldErrors;
   if (state.ok) {
     return <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">✓ {state.message}</p>;
   }
+  // Kept mounted when the page re-renders after check-in, so the message above survives.
+  if (checkedIn) return <p role="status">✓ This booking is checked in; the flight is in the log.</p>;
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Check in">
       <FormMessage state={state} />

@@ -29,7 +29,7 @@ export function ReportSquawkForm({ slug, aircraftId, registration }: { slug: str
   );
 }
 
-export function TriageSquawkForm({ slug, squawkId, current }: { slug: string; squawkId: string; current: string }) {
+export function TriageSquawkForm({ slug, squawkId, current, limitation, determinedBy, placarded }: { slug: string; squawkId: string; current: string; limitation?: string | null; determinedBy?: string | null; placarded?: boolean }) {
   const [state, action] = useActionState(triageSquawk, initialActionState);
   const [choice, setChoice] = useState(current === "untriaged" ? "grounding" : current);
   return (
@@ -44,9 +44,9 @@ export function TriageSquawkForm({ slug, squawkId, current }: { slug: string; sq
       </SelectField>
       {choice === "deferred" ? (
         <>
-          <Field label="Limitation (what the pilot may not do)" name="limitation" id={`limitation-${squawkId}`} errors={state.fieldErrors.limitation} placeholder="e.g. No night flight" />
-          <Field label="Determination by (pilot or mechanic, with certificate)" name="deferralDeterminedBy" id={`determined-${squawkId}`} errors={state.fieldErrors.deferralDeterminedBy} />
-          <CheckboxField name="placarded" id={`placarded-${squawkId}`} label="Deactivated or removed, and placarded inoperative (14 CFR 91.213(d))" errors={state.fieldErrors.placarded} />
+          <Field label="Limitation (what the pilot may not do)" name="limitation" id={`limitation-${squawkId}`} defaultValue={limitation ?? ""} errors={state.fieldErrors.limitation} placeholder="e.g. No night flight" />
+          <Field label="Determination by (pilot or mechanic, with certificate)" name="deferralDeterminedBy" id={`determined-${squawkId}`} defaultValue={determinedBy ?? ""} errors={state.fieldErrors.deferralDeterminedBy} />
+          <CheckboxField name="placarded" id={`placarded-${squawkId}`} label="Deactivated or removed, and placarded inoperative (14 CFR 91.213(d))" defaultChecked={placarded} errors={state.fieldErrors.placarded} />
         </>
       ) : null}
       <Field label="Note (optional)" name="note" id={`triage-note-${squawkId}`} errors={state.fieldErrors.note} />

@@ -72,7 +72,7 @@ export function SquawkList({ slug, rows, events, files, today, canTriage, canClo
                 {canTriage ? (
                   <details className="rounded border border-sand-200 p-2">
                     <summary className="cursor-pointer font-bold text-fin-600">Triage</summary>
-                    <div className="mt-2"><TriageSquawkForm slug={slug} squawkId={s.id} current={s.triage} /></div>
+                    <div className="mt-2"><TriageSquawkForm slug={slug} squawkId={s.id} current={s.triage} limitation={s.limitation} determinedBy={s.deferralDeterminedBy} placarded={s.placarded} /></div>
                   </details>
                 ) : null}
                 {canClose ? (

@@ -36,9 +36,6 @@ describe("bookings on a phone", () => {
 });
 
 async function flow(page: Page) {
-  page.on("console", (m) => console.log("console:", m.type(), m.text().slice(0, 300)));
-  page.on("pageerror", (e) => console.log("pageerror:", e.message.slice(0, 300)));
-  page.on("response", (r) => { if (r.request().method() === "POST") console.log("POST", r.status(), r.url(), new Date().toISOString()); });
     await signIn(page, "member@hangarline.test");
 
     // The fleet sheet, then a new booking with an instructor aboard.
@@ -81,8 +78,8 @@ async function flow(page: Page) {
     const chart = page.getByRole("figure", { name: "CG envelope chart" });
     await chart.waitFor();
     // One drawn symbol for takeoff (a circle) and one for landing (a triangle), on the outline.
-    await chart.locator("path.recharts-symbols").first().waitFor();
-    expect(await chart.locator("path.recharts-symbols").count()).toBe(2);
+    await chart.locator(".recharts-scatter-symbol path.recharts-symbols").first().waitFor();
+    expect(await chart.locator(".recharts-scatter-symbol path.recharts-symbols").count()).toBe(2);
     expect(await chart.locator(".recharts-scatter-line path, .recharts-scatter-line").count()).toBeGreaterThanOrEqual(1);
     // Our arithmetic on the seeded K160 figures: 1486 + 360 + 25 + 216 (36 gal × 6 lb, FAA-H-8083-25)
     // = 2087 lb, moment 83868.4 → CG 40.2 in; 72 lb burned at 48 in → 2015 lb, CG 39.9 in.

@@ -2,7 +2,7 @@ import ICAL from "ical.js";
 import { and, eq, or } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { GET } from "@/app/api/calendar/[token]/route";
-import { bookings, calendarFeedTokens } from "@/db/schema";
+import { bookings, calendarFeedTokens, memberships } from "@/db/schema";
 import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { manageCalendarLink } from "@/lib/actions/bookings/calendar-link";
@@ -94,5 +94,14 @@ describe("the member's calendar feed (iCalendar, RFC 5545)", () => {
     const row = db().select().from(calendarFeedTokens).where(eq(calendarFeedTokens.tokenHash, hashToken(second))).get()!;
     expect(JSON.stringify(row)).not.toContain(second);
     expect(row.revokedAt).not.toBeNull();
+  });
+
+  it("a member who has left the club gets a 404 from an old link", async () => {
+    const secret = await makeLink("twoclubs@hangarline.test");
+    expect((await fetchFeed(secret)).status).toBe(200);
+    const user = signInAs("twoclubs@hangarline.test")!;
+    const club = clubBySlug(SLUG);
+    db().update(memberships).set({ status: "inactive" }).where(and(eq(memberships.clubId, club.id), eq(memberships.userId, user.id))).run();
+    expect((await fetchFeed(secret)).status).toBe(404);
   });
 });

@@ -1,6 +1,7 @@
 import { listPersonBookings } from "@/db/queries/bookings";
 import { findFeedBySecret, markFeedFetched } from "@/db/queries/bookings-feed";
 import { getDb } from "@/db/client";
+import { getActiveMembership } from "@/db/queries/clubs";
 import { apiError } from "@/lib/server/api";
 import { appUrl } from "@/lib/server/urls";
 import { buildBookingFeed } from "@/lib/bookings/ical-feed";
@@ -19,6 +20,8 @@ export async function GET(_request: Request, { params }: { params: Promise<{ tok
   const db = getDb();
   const found = findFeedBySecret(db, secret);
   if (!found || found.club.archivedAt) return apiError("not_found", "Not found.");
+  // A person who has left the club gets nothing more through an old link.
+  if (!getActiveMembership(db, found.club.id, found.token.userId)) return apiError("not_found", "Not found.");
   const now = new Date();
   const { club, token: link } = found;
   const homeFields = new Map(listAircraft(db, club.id).map((a) => [a.id, a.homeField]));

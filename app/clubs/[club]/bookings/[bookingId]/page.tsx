@@ -70,7 +70,7 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
         ) : null}
         <SafetyCaution compact />
         {booking.purpose ? <p className="text-sm"><strong>Purpose:</strong> {booking.purpose}</p> : null}
-        {booking.acceptedWarnings.length ? (
+        {mayAct && booking.acceptedWarnings.length ? (
           <div className="text-sm"><strong>Warnings read when booked:</strong><ul className="list-disc pl-5">{booking.acceptedWarnings.map((w) => <li key={w.guard}>{w.reason}</li>)}</ul></div>
         ) : null}
         {booking.lateCancel ? <p className="text-sm font-bold text-sock-700">▲ Booked time was given back inside the club&apos;s {club.settings.lateCancellationHours}-hour late-cancellation window.</p> : null}

@@ -23,7 +23,8 @@ export default async function NewBookingPage({ params, searchParams }: { params:
   const date = query.date && isIsoDate(query.date) && query.date >= today ? query.date : addDays(today, 1);
   const aircraftId = line.entries.some((e) => e.aircraft.id === query.aircraft) ? query.aircraft! : "";
   const people = listMembers(db, club.id).filter((m) => m.status === "active" && !(m.roles.length === 1 && m.roles[0] === "mechanic"));
-  const instructors = people.filter((m) => m.roles.includes("instructor") && m.userId !== user.id).map((m) => ({ id: m.userId, label: m.name ?? m.email }));
+  // Instructors include the person booking: an instructor books a student with themselves aboard.
+  const instructors = people.filter((m) => m.roles.includes("instructor")).map((m) => ({ id: m.userId, label: m.userId === user.id ? `${m.name ?? m.email} (you)` : m.name ?? m.email }));
   const forOthers = ability.can("update", own("Booking", "__someone-else__"));
   return (
     <div className="max-w-2xl">

@@ -27,10 +27,8 @@ export default async function CheckInPage({ params }: { params: Promise<{ club: 
     <div className="max-w-2xl">
       <PageHeader title={`Check in · ${booking.registration}`} lead="The flight-log entry and the charge for the flight, in one step." actions={back} />
       <section className="card">
-        {booking.status === "dispatched" ? (
-          <CheckInForm slug={club.slug} bookingId={booking.id} hobbs={plane.currentHobbs} tach={plane.currentTach} metric={club.unitSystem === "metric"} rateText={`${formatMoney(plane.hourlyRateMinor, club.currency)} per ${plane.rateMeter === "tach" ? "tach" : "Hobbs"} hour`} />
-        ) : booking.status === "checked_in" ? (
-          <p role="status">✓ This booking is checked in; the flight is in the log.</p>
+        {booking.status === "dispatched" || booking.status === "checked_in" ? (
+          <CheckInForm slug={club.slug} bookingId={booking.id} checkedIn={booking.status === "checked_in"} hobbs={plane.currentHobbs} tach={plane.currentTach} metric={club.unitSystem === "metric"} rateText={`${formatMoney(plane.hourlyRateMinor, club.currency)} per ${plane.rateMeter === "tach" ? "tach" : "Hobbs"} hour`} />
         ) : (
           <p>Dispatch the booking first: record and confirm the preflight.</p>
         )}
