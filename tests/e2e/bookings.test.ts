@@ -36,98 +36,99 @@ describe("bookings on a phone", () => {
 });
 
 async function flow(page: Page) {
-    await signIn(page, "member@hangarline.test");
+  await signIn(page, "member@hangarline.test");
 
-    // The fleet sheet, then a new booking with an instructor aboard.
-    await page.goto("/clubs/lakeshore-aero/bookings?view=week", { waitUntil: "networkidle" });
-    await page.getByRole("heading", { name: "Bookings", exact: true }).waitFor();
-    await page.getByText("The pilot in command decides airworthiness.").first().waitFor();
-    await expectNoHorizontalOverflow(page);
-    await page.getByRole("link", { name: "New booking" }).click();
-    await page.waitForURL(/\/bookings\/new/);
-    const form = page.getByRole("form", { name: "Book an aircraft" });
-    const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
-    await form.getByLabel("Aircraft").selectOption(plane!);
-    const day = localDay(Number(process.env.BOOKINGS_E2E_DAYS ?? 11), "America/Chicago");
-    await form.getByLabel("Start (club time)").fill(`${day}T06:00`);
-    await form.getByLabel("End (club time)").fill(`${day}T08:00`);
-    await form.getByLabel("Instructor").selectOption({ label: "Imani Ostrowski" });
-    await form.getByLabel("Purpose (optional)").fill("Phone test: pattern work");
-    await form.getByRole("button", { name: "Book", exact: true }).click();
-    await Promise.race([page.waitForURL(/\/bookings\/[\w-]{36}$/, { timeout: 15_000 }), page.getByRole("group", { name: "Warnings to read" }).waitFor({ timeout: 15_000 })]).catch(() => undefined);
-    if (!/\/bookings\/[\w-]{36}$/.test(page.url())) {
-      await tickWarningsAndRetry(page, "Book");
-      await page.waitForURL(/\/bookings\/[\w-]{36}$/);
-    }
-    const bookingUrl = page.url();
-    await page.getByRole("heading", { name: /^N0527L · / }).waitFor();
-    await expectNoHorizontalOverflow(page);
+  // The fleet sheet, then a new booking with an instructor aboard.
+  await page.goto("/clubs/lakeshore-aero/bookings?view=week", { waitUntil: "networkidle" });
+  await page.getByRole("heading", { name: "Bookings", exact: true }).waitFor();
+  await page.getByText("The pilot in command decides airworthiness.").first().waitFor();
+  await expectNoHorizontalOverflow(page);
+  await page.getByRole("link", { name: "New booking" }).click();
+  await page.waitForURL(/\/bookings\/new/);
+  const form = page.getByRole("form", { name: "Book an aircraft" });
+  const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
+  await form.getByLabel("Aircraft").selectOption(plane!);
+  // BOOKINGS_E2E_DAYS moves the day when rerunning against a database kept from an earlier run.
+  const day = localDay(Number(process.env.BOOKINGS_E2E_DAYS ?? 11), "America/Chicago");
+  await form.getByLabel("Start (club time)").fill(`${day}T06:00`);
+  await form.getByLabel("End (club time)").fill(`${day}T08:00`);
+  await form.getByLabel("Instructor").selectOption({ label: "Imani Ostrowski" });
+  await form.getByLabel("Purpose (optional)").fill("Phone test: pattern work");
+  await form.getByRole("button", { name: "Book", exact: true }).click();
+  await Promise.race([page.waitForURL(/\/bookings\/[\w-]{36}$/, { timeout: 15_000 }), page.getByRole("group", { name: "Warnings to read" }).waitFor({ timeout: 15_000 })]).catch(() => undefined);
+  if (!/\/bookings\/[\w-]{36}$/.test(page.url())) {
+    await tickWarningsAndRetry(page, "Book");
+    await page.waitForURL(/\/bookings\/[\w-]{36}$/);
+  }
+  const bookingUrl = page.url();
+  await page.getByRole("heading", { name: /^N0527L · / }).waitFor();
+  await expectNoHorizontalOverflow(page);
 
-    // Weight and balance, saved with the booking, drawn on the envelope.
-    await page.getByRole("link", { name: "Work out weight and balance" }).click();
-    await page.waitForURL(/\/weight-balance$/);
-    const wb = page.getByRole("form", { name: "Weight and balance" });
-    await wb.getByLabel("Front seats (lb)").fill("360");
-    await wb.getByLabel("Baggage (lb)").fill("25");
-    await wb.getByLabel("Wing tanks (US gal)").fill("36");
-    await wb.getByLabel("Planned fuel burn (US gal)").fill("12");
-    await wb.getByRole("button", { name: "Work out and save" }).click();
-    await page.getByText("Saved: within the envelope and every limit at takeoff and at landing.").first().waitFor();
-    await page.getByText("● Within limits at takeoff").waitFor();
-    await page.getByText("● Within limits at landing").waitFor();
-    const chart = page.getByRole("figure", { name: "CG envelope chart" });
-    await chart.waitFor();
-    // One drawn symbol for takeoff (a circle) and one for landing (a triangle), on the outline.
-    await chart.locator(".recharts-scatter-symbol path.recharts-symbols").first().waitFor();
-    expect(await chart.locator(".recharts-scatter-symbol path.recharts-symbols").count()).toBe(2);
-    expect(await chart.locator(".recharts-scatter-line path, .recharts-scatter-line").count()).toBeGreaterThanOrEqual(1);
-    // Our arithmetic on the seeded K160 figures: 1486 + 360 + 25 + 216 (36 gal × 6 lb, FAA-H-8083-25)
-    // = 2087 lb, moment 83868.4 → CG 40.2 in; 72 lb burned at 48 in → 2015 lb, CG 39.9 in.
-    await chart.getByRole("row", { name: /Takeoff 2,087 40\.2/ }).waitFor();
-    await chart.getByRole("row", { name: /Landing 2,015 39\.9/ }).waitFor();
-    await expectNoHorizontalOverflow(page);
-    await screenshot(page, "bookings-weight-balance-phone");
+  // Weight and balance, saved with the booking, drawn on the envelope.
+  await page.getByRole("link", { name: "Work out weight and balance" }).click();
+  await page.waitForURL(/\/weight-balance$/);
+  const wb = page.getByRole("form", { name: "Weight and balance" });
+  await wb.getByLabel("Front seats (lb)").fill("360");
+  await wb.getByLabel("Baggage (lb)").fill("25");
+  await wb.getByLabel("Wing tanks (US gal)").fill("36");
+  await wb.getByLabel("Planned fuel burn (US gal)").fill("12");
+  await wb.getByRole("button", { name: "Work out and save" }).click();
+  await page.getByText("Saved: within the envelope and every limit at takeoff and at landing.").first().waitFor();
+  await page.getByText("● Within limits at takeoff").waitFor();
+  await page.getByText("● Within limits at landing").waitFor();
+  const chart = page.getByRole("figure", { name: "CG envelope chart" });
+  await chart.waitFor();
+  // One drawn symbol for takeoff (a circle) and one for landing (a triangle), on the outline.
+  await chart.locator(".recharts-scatter-symbol path.recharts-symbols").first().waitFor();
+  expect(await chart.locator(".recharts-scatter-symbol path.recharts-symbols").count()).toBe(2);
+  expect(await chart.locator(".recharts-scatter-line path, .recharts-scatter-line").count()).toBeGreaterThanOrEqual(1);
+  // Our arithmetic on the seeded K160 figures: 1486 + 360 + 25 + 216 (36 gal × 6 lb, FAA-H-8083-25)
+  // = 2087 lb, moment 83868.4 → CG 40.2 in; 72 lb burned at 48 in → 2015 lb, CG 39.9 in.
+  await chart.getByRole("row", { name: /Takeoff 2,087 40\.2/ }).waitFor();
+  await chart.getByRole("row", { name: /Landing 2,015 39\.9/ }).waitFor();
+  await expectNoHorizontalOverflow(page);
+  await screenshot(page, "bookings-weight-balance-phone");
 
-    // Preflight: every item OK but one tire, which becomes a squawk with a photo.
-    await page.goto(`${bookingUrl}/preflight`, { waitUntil: "networkidle" });
-    const pf = page.getByRole("form", { name: "Preflight record" });
-    let found = false;
-    for (const group of await pf.getByRole("radiogroup").all()) {
-      const name = (await group.getAttribute("aria-label")) ?? "";
-      if (name.startsWith("Sample from")) await group.getByLabel("Clear").check();
-      else if (name === "tire, brake and strut" && !found) {
-        await group.getByLabel("Finding").check();
-        found = true;
-      } else await group.getByRole("radio").first().check();
-    }
-    await pf.getByLabel("What you found: tire, brake and strut").fill("Left main tire worn through the tread");
-    await pf.locator('input[type=file][name^="photos."]').setInputFiles({ name: "tire.png", mimeType: "image/png", buffer: PNG });
-    await pf.getByLabel("Wing tanks (US gal)").fill("36");
-    await pf.getByLabel("Oil quantity (qt)").fill("6");
-    await pf.getByRole("button", { name: "Record the preflight" }).click();
-    await page.getByText(/Preflight recorded with 1 finding; 1 reported as squawk for maintenance/).waitFor();
-    await expectNoHorizontalOverflow(page);
-    const squawks = (await (await page.request.get(`/api/clubs/lakeshore-aero/squawks?aircraftId=${plane}&status=open`)).json()) as { squawks: { description: string; foundDuring: string }[] };
-    expect(squawks.squawks.some((s) => s.foundDuring === "preflight" && s.description.includes("Left main tire worn through the tread"))).toBe(true);
+  // Preflight: every item OK but one tire, which becomes a squawk with a photo.
+  await page.goto(`${bookingUrl}/preflight`, { waitUntil: "networkidle" });
+  const pf = page.getByRole("form", { name: "Preflight record" });
+  let found = false;
+  for (const group of await pf.getByRole("radiogroup").all()) {
+    const name = (await group.getAttribute("aria-label")) ?? "";
+    if (name.startsWith("Sample from")) await group.getByLabel("Clear").check();
+    else if (name === "tire, brake and strut" && !found) {
+      await group.getByLabel("Finding").check();
+      found = true;
+    } else await group.getByRole("radio").first().check();
+  }
+  await pf.getByLabel("What you found: tire, brake and strut").fill("Left main tire worn through the tread");
+  await pf.locator('input[type=file][name^="photos."]').setInputFiles({ name: "tire.png", mimeType: "image/png", buffer: PNG });
+  await pf.getByLabel("Wing tanks (US gal)").fill("36");
+  await pf.getByLabel("Oil quantity (qt)").fill("6");
+  await pf.getByRole("button", { name: "Record the preflight" }).click();
+  await page.getByText(/Preflight recorded with 1 finding; 1 reported as squawk for maintenance/).waitFor();
+  await expectNoHorizontalOverflow(page);
+  const squawks = (await (await page.request.get(`/api/clubs/lakeshore-aero/squawks?aircraftId=${plane}&status=open`)).json()) as { squawks: { description: string; foundDuring: string }[] };
+  expect(squawks.squawks.some((s) => s.foundDuring === "preflight" && s.description.includes("Left main tire worn through the tread"))).toBe(true);
 
-    // Dispatch confirms the record (its finding needs the extra tick), then check in.
-    await page.goto(bookingUrl, { waitUntil: "networkidle" });
-    const dispatch = page.getByRole("form", { name: "Dispatch" });
-    await dispatch.getByLabel(/I did this preflight myself/).check();
-    await dispatch.getByLabel("I have dealt with every finding listed for this aircraft.").check();
-    await dispatch.getByRole("button", { name: "Dispatch" }).click();
-    await page.getByRole("link", { name: "Check in" }).waitFor();
-    await page.getByRole("link", { name: "Check in" }).click();
-    await page.waitForURL(/\/check-in$/);
-    const checkIn = page.getByRole("form", { name: "Check in" });
-    const hobbsOut = Number(await checkIn.getByLabel("Hobbs out").inputValue());
-    const tachOut = Number(await checkIn.getByLabel("Tach out").inputValue());
-    await checkIn.getByLabel("Hobbs in").fill((hobbsOut + 1.2).toFixed(1));
-    await checkIn.getByLabel("Tach in").fill((tachOut + 1.0).toFixed(1));
-    await checkIn.getByLabel("Day landings").fill("4");
-    await checkIn.getByRole("button", { name: "Check in" }).click();
-    await page.getByText(/Checked in: flight logged and \$182\.40 charged to the account/).waitFor();
-    await expectNoHorizontalOverflow(page);
-    await page.goto(bookingUrl, { waitUntil: "networkidle" });
-    await page.getByText("Back, checked in").first().waitFor();
+  // Dispatch confirms the record (its finding needs the extra tick), then check in.
+  await page.goto(bookingUrl, { waitUntil: "networkidle" });
+  const dispatch = page.getByRole("form", { name: "Dispatch" });
+  await dispatch.getByLabel(/I did this preflight myself/).check();
+  await dispatch.getByLabel("I have dealt with every finding listed for this aircraft.").check();
+  await dispatch.getByRole("button", { name: "Dispatch" }).click();
+  await page.getByRole("link", { name: "Check in" }).waitFor();
+  await page.getByRole("link", { name: "Check in" }).click();
+  await page.waitForURL(/\/check-in$/);
+  const checkIn = page.getByRole("form", { name: "Check in" });
+  const hobbsOut = Number(await checkIn.getByLabel("Hobbs out").inputValue());
+  const tachOut = Number(await checkIn.getByLabel("Tach out").inputValue());
+  await checkIn.getByLabel("Hobbs in").fill((hobbsOut + 1.2).toFixed(1));
+  await checkIn.getByLabel("Tach in").fill((tachOut + 1.0).toFixed(1));
+  await checkIn.getByLabel("Day landings").fill("4");
+  await checkIn.getByRole("button", { name: "Check in" }).click();
+  await page.getByText(/Checked in: flight logged and \$182\.40 charged to the account/).waitFor();
+  await expectNoHorizontalOverflow(page);
+  await page.goto(bookingUrl, { waitUntil: "networkidle" });
+  await page.getByText("Back, checked in").first().waitFor();
 }
