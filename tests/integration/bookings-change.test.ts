@@ -9,6 +9,8 @@ import { changeBooking } from "@/lib/actions/bookings/change-booking";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { emailBookingHoldersOfGrounding } from "@/lib/actions/bookings/notify-grounding";
 import { issueGroundingNotice } from "@/lib/actions/fleet/issue-grounding-notice";
+import { triageSquawk } from "@/lib/actions/fleet/triage-squawk";
+import { squawks } from "@/db/schema";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
@@ -83,6 +85,21 @@ describe("changing and cancelling, the late rule, grounding e-mails, and the JSO
     const rows = db().select().from(emailOutbox).where(eq(emailOutbox.template, "grounding-notice")).all().slice(before);
     expect(rows.map((r) => r.toAddress).sort()).toEqual(emails);
     expect(rows[0]!.payload).toMatchObject({ registration: "N0556L", because: "booking" });
+  });
+
+  it("a squawk triaged as grounding e-mails the members holding bookings on that aircraft", async () => {
+    await book("pilot2@hangarline.test", "N0549L", 10, "13:00", "14:00");
+    const club = clubBySlug(SLUG);
+    const aircraftId = planeId(SLUG, "N0549L");
+    const [sq] = db().insert(squawks).values({ clubId: club.id, aircraftId, description: "Left brake soft and fading", foundDuring: "postflight", reportedById: signInAs("member@hangarline.test")!.id }).returning().all();
+    const before = db().select().from(emailOutbox).where(eq(emailOutbox.template, "grounding-notice")).all().length;
+    signInAs("maintenance@hangarline.test");
+    const state = await triageSquawk(EMPTY, form({ club: SLUG, squawkId: sq!.id, triage: "grounding" }));
+    expect(state, state.message).toMatchObject({ ok: true });
+    expect(state.message).toMatch(/with bookings on this aircraft will be e-mailed/);
+    const rows = db().select().from(emailOutbox).where(eq(emailOutbox.template, "grounding-notice")).all().slice(before);
+    expect(rows.map((r) => r.toAddress)).toContain("pilot2@hangarline.test");
+    expect(rows.find((r) => r.toAddress === "pilot2@hangarline.test")!.payload).toMatchObject({ registration: "N0549L", because: "booking", reason: "Left brake soft and fading" });
   });
 
   it("a grounding notice reaches the booking holders first, marked as such", async () => {

@@ -1,6 +1,8 @@
 "use server";
 import { and, eq } from "drizzle-orm";
-import { squawks } from "@/db/schema";
+import { aircraft, squawks } from "@/db/schema";
+import { emailBookingHoldersOfGrounding } from "@/lib/actions/bookings/notify-grounding";
+import { kickOutbox } from "@/lib/email/runner";
 import { getSquawk, recordSquawkEvent } from "@/db/queries/fleet-squawks";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
@@ -41,6 +43,14 @@ export const triageSquawk = clubAction({
       before: { triage: current.triage, limitation: current.limitation, placarded: current.placarded },
       after: change,
     });
-    return { message: MESSAGES[input.triage], revalidate: fleetPaths(club.slug, current.aircraftId) };
+    let message: string = MESSAGES[input.triage];
+    if (input.triage === "grounding" && current.triage !== "grounding") {
+      // Members holding bookings on this aircraft hear about it first, as with a grounding notice.
+      const plane = tx.select().from(aircraft).where(and(eq(aircraft.clubId, club.id), eq(aircraft.id, current.aircraftId))).get();
+      const told = plane ? emailBookingHoldersOfGrounding(tx, club, plane, { reason: current.description, effectiveAt: new Date(), issuedBy: user.name ?? user.email }) : 0;
+      if (told > 0) message += ` ${told} member${told === 1 ? "" : "s"} with bookings on this aircraft will be e-mailed.`;
+    }
+    return { message, revalidate: fleetPaths(club.slug, current.aircraftId) };
   },
+  after: () => kickOutbox(),
 });
