@@ -49,7 +49,8 @@ async function flow(page: Page) {
   const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
   await form.getByLabel("Aircraft").selectOption(plane!);
   // BOOKINGS_E2E_DAYS moves the day when rerunning against a database kept from an earlier run.
-  const day = localDay(Number(process.env.BOOKINGS_E2E_DAYS ?? 11), "America/Chicago");
+  // A retried run books another day, so it never meets its own earlier booking.
+  const day = localDay(Number(process.env.BOOKINGS_E2E_DAYS ?? 11 + Math.floor(Math.random() * 40)), "America/Chicago");
   await form.getByLabel("Start (club time)").fill(`${day}T06:00`);
   await form.getByLabel("End (club time)").fill(`${day}T08:00`);
   await form.getByLabel("Instructor").selectOption({ label: "Imani Ostrowski" });
