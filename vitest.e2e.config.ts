@@ -16,7 +16,7 @@ export default defineConfig({
     // A form submission in headless Chromium occasionally never gets its server-action answer
     // (seen a few times, cause not yet found); a retry keeps one such hiccup from failing CI.
     retry: 2,
-    testTimeout: 90_000,
+    testTimeout: 150_000,
     hookTimeout: 180_000,
   },
 });

@@ -30,7 +30,7 @@ export async function newPage(kind: keyof typeof VIEWPORTS = "desktop"): Promise
   const b = await getBrowser();
   const context = await b.newContext({ viewport: VIEWPORTS[kind], baseURL: baseUrl, isMobile: kind === "phone", hasTouch: kind === "phone" });
   const page = await context.newPage();
-  page.setDefaultTimeout(20_000);
+  page.setDefaultTimeout(40_000); // a loaded 2-core CI machine renders slowly
   return page;
 }
 
