@@ -34,7 +34,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
   } as never),
   session: { strategy: "jwt", maxAge: 30 * 24 * 3600 },
   trustHost: true,
-  secret: process.env.AUTH_SECRET ?? "hangarline-local-development-secret-change-me",
+  // A production server without AUTH_SECRET refuses to start sessions rather than use a known key.
+  secret: process.env.AUTH_SECRET ?? (process.env.NODE_ENV === "production" ? undefined : "hangarline-local-development-secret-change-me"),
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in" },
   providers: [
     Credentials({
