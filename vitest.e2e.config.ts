@@ -14,8 +14,8 @@ export default defineConfig({
     globalSetup: ["tests/e2e/global-setup.ts"],
     fileParallelism: false,
     // A form submission in headless Chromium occasionally never gets its server-action answer
-    // (seen a few times, cause not yet found); a retry keeps one such hiccup from failing CI.
-    retry: 2,
+    // (seen a few times, cause not yet found); retries keep such a hiccup from failing CI.
+    retry: 4,
     testTimeout: 150_000,
     hookTimeout: 180_000,
   },
