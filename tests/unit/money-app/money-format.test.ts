@@ -1,3 +1,5 @@
+// Sources: ISO 4217 minor-unit exponents (USD 2, EUR 2, JPY 0), from memory; display via the
+// ECMA-402 Intl.NumberFormat currency style.
 // The cached formatter used for thousands of statements must print exactly what formatMoney
 // (lib/money) prints; ISO 4217 minor units: USD and EUR 2 digits, JPY 0.
 import { describe, expect, it } from "vitest";

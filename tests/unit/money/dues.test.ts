@@ -1,3 +1,5 @@
+// Sources: calendar periods per the Gregorian calendar rule; proration by days is common practice
+// for club dues (from memory). Values are own arithmetic.
 import { describe, expect, it } from "vitest";
 import { duesForMember, duesPeriod } from "@/lib/money";
 

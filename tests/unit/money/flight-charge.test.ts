@@ -1,3 +1,5 @@
+// Sources: billing meter time (Hobbs or tach) × hourly rate is common practice for flying clubs
+// (from memory); rounding half away from zero per REFERENCES.md. Values are own arithmetic.
 import { describe, expect, it } from "vitest";
 import { flightCharge, meterTimeCharge } from "@/lib/money";
 

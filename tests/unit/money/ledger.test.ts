@@ -1,3 +1,5 @@
+// Sources: double-entry bookkeeping — every entry's debits equal its credits, corrections by a
+// reversing entry — standard accounting practice (common practice, from memory). Values are own arithmetic.
 import { describe, expect, it } from "vitest";
 import {
   assertBalanced,

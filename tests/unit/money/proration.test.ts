@@ -1,3 +1,6 @@
+// Sources: proration by days, both ends counted, is common practice for club dues (no regulation);
+// month lengths follow the Gregorian calendar rule; rounding half away from zero is the rule fixed
+// in REFERENCES.md (common practice, from memory). Values are own arithmetic.
 import { describe, expect, it } from "vitest";
 import { prorate } from "@/lib/money";
 
