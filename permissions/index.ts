@@ -2,3 +2,4 @@ export * from "./roles";
 export * from "./subjects";
 export * from "./abilities";
 export * from "./operator";
+export * from "./authorize";

@@ -1,17 +1,18 @@
 import Link from "next/link";
 import type { AppAbility } from "@/permissions";
+import { can, canAll } from "@/permissions";
 
 export function MoneyNav({ slug, ability, current }: { slug: string; ability: AppAbility; current?: string }) {
   const base = `/clubs/${slug}/money`;
   const items = [
     { href: base, label: "Overview", show: true },
-    { href: `${base}/journal`, label: "Journal", show: ability.can("read", "Ledger") },
-    { href: `${base}/balances`, label: "Member balances", show: ability.can("read", "Account") },
-    { href: `${base}/billing`, label: "Dues and billing", show: ability.can("read", "Ledger") },
-    { href: `${base}/payments`, label: "Payments", show: ability.can("read", "Payment") || ability.can("read", "Account") },
-    { href: `${base}/reconciliation`, label: "Bank reconciliation", show: ability.can("read", "Reconciliation") },
-    { href: `${base}/ageing`, label: "Ageing", show: ability.can("read", "Account") },
-    { href: `${base}/rates`, label: "Hourly rates", show: ability.can("read", "Rates") },
+    { href: `${base}/journal`, label: "Journal", show: can(ability, "read", "Ledger") },
+    { href: `${base}/balances`, label: "Member balances", show: canAll(ability, "read", "Account") },
+    { href: `${base}/billing`, label: "Dues and billing", show: can(ability, "read", "Ledger") },
+    { href: `${base}/payments`, label: "Payments", show: can(ability, "read", "Payment") || canAll(ability, "read", "Account") },
+    { href: `${base}/reconciliation`, label: "Bank reconciliation", show: can(ability, "read", "Reconciliation") },
+    { href: `${base}/ageing`, label: "Ageing", show: canAll(ability, "read", "Account") },
+    { href: `${base}/rates`, label: "Hourly rates", show: can(ability, "read", "Rates") },
   ].filter((i) => i.show);
   return (
     <nav aria-label="Money sections" className="mb-5 overflow-x-auto">

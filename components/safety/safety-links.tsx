@@ -1,16 +1,16 @@
 import Link from "next/link";
-import { own, type AppAbility } from "@/permissions";
+import { type AppAbility, can, canOn } from "@/permissions";
 
 /** The safety area's sections, shown to whoever may use each. */
-export function SafetyLinks({ slug, ability, userId }: { slug: string; ability: AppAbility; userId?: string }) {
+export function SafetyLinks({ slug, ability, userId }: { slug: string; ability: AppAbility; userId: string }) {
   const base = `/clubs/${slug}`;
   const links = [
-    { href: `${base}/safety`, label: "Bulletins", show: ability.can("read", "Bulletin") },
-    { href: `${base}/safety/reports/new`, label: "File a safety report", show: ability.can("create", "SafetyReport") },
-    { href: `${base}/safety/reports`, label: ability.can("triage", "SafetyReport") ? "Report queue" : "My reports", show: ability.can("create", "SafetyReport") || ability.can("triage", "SafetyReport") },
-    { href: `${base}/me`, label: "My currency & documents", show: userId ? ability.can("read", own("Currency", userId)) : ability.can("read", "Currency") },
-    { href: `${base}/safety/currency`, label: "Currency board", show: ability.can("read", "CurrencyBoard") },
-    { href: `${base}/safety/checkouts`, label: "Checkouts", show: ability.can("read", "Checkout") },
+    { href: `${base}/safety`, label: "Bulletins", show: can(ability, "read", "Bulletin") },
+    { href: `${base}/safety/reports/new`, label: "File a safety report", show: can(ability, "create", "SafetyReport") },
+    { href: `${base}/safety/reports`, label: can(ability, "triage", "SafetyReport") ? "Report queue" : "My reports", show: can(ability, "create", "SafetyReport") || can(ability, "triage", "SafetyReport") },
+    { href: `${base}/me`, label: "My currency & documents", show: canOn(ability, "read", "Currency", { userId }) },
+    { href: `${base}/safety/currency`, label: "Currency board", show: can(ability, "read", "CurrencyBoard") },
+    { href: `${base}/safety/checkouts`, label: "Checkouts", show: can(ability, "read", "Checkout") },
   ].filter((l) => l.show);
   return (
     <nav aria-label="Safety sections" className="mb-5 flex flex-wrap gap-2">

@@ -5,7 +5,7 @@ import { z } from "zod";
 import { getDb, type Db, type Tx } from "@/db/client";
 import { resolveClubContext, type ClubContext } from "@/lib/server/club-context";
 import { getSessionUser, type SessionUser } from "@/lib/server/session";
-import { explainDenied, type Action, type AppAbility, type SubjectName } from "@/permissions";
+import { allows, explainDenied, type AppAbility, type Permission as Grant } from "@/permissions";
 import { ActionError, type ActionState } from "./action-state";
 
 type Schema = z.ZodType<unknown, unknown>;
@@ -50,7 +50,13 @@ async function settle<R>(work: () => Promise<Outcome<R>>, successMessage: string
   return { ok: true, message: outcome.message ?? successMessage, fieldErrors: {}, data: outcome.data };
 }
 
-type Permission<I> = [Action, SubjectName] | ((ability: AppAbility, input: I, ctx: ClubContext) => boolean);
+/**
+ * A fixed permission through the one helper ([action, Type] — refused for conditional subjects —
+ * or [action, Type, "all"]), or a function of the input that asks the helper about the record
+ * (canOn / canAll / can from "@/permissions"). A check that needs the stored record (a booking's
+ * owner, a report's reporter) is repeated inside `run` against the row read in the transaction.
+ */
+type Permission<I> = Grant | ((ability: AppAbility, input: I, ctx: ClubContext) => boolean);
 
 /**
  * The one way a club server action is built: session → club (slug from the form's "club" field)
@@ -77,7 +83,7 @@ export function clubAction<S extends Schema, P = undefined, R = unknown>(def: {
     const parsed = def.schema.safeParse(raw);
     if (!parsed.success) return fail("Some fields need attention; nothing was saved.", zodFieldErrors(parsed.error));
     const input = parsed.data as z.output<S>;
-    const allowed = typeof def.permission === "function" ? def.permission(ctx.ability, input, ctx) : ctx.ability.can(def.permission[0], def.permission[1]);
+    const allowed = typeof def.permission === "function" ? def.permission(ctx.ability, input, ctx) : allows(ctx.ability, def.permission);
     if (!allowed) {
       return fail(typeof def.permission === "function" ? "You do not have permission to do this." : explainDenied(def.permission[0], def.permission[1]));
     }

@@ -1,5 +1,5 @@
 import type { AppAbility } from "@/permissions";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 export type MedicalRecordLike = {
   kind: "faa_class" | "basicmed";
@@ -21,10 +21,10 @@ export type MedicalView =
  * birth is never part of this: it stays on the member's private record.
  */
 export function medicalViewFor(ability: AppAbility, ownerUserId: string, record: MedicalRecordLike): MedicalView | null {
-  if (ability.can("readDetails", own("Medical", ownerUserId))) {
+  if (canOn(ability, "readDetails", "Medical", { userId: ownerUserId })) {
     const { kind, medicalClass, examDate, courseDate, limitations, expiresOn } = record;
     return { level: "full", kind, medicalClass, examDate, courseDate, limitations, expiresOn };
   }
-  if (ability.can("read", own("Currency", ownerUserId))) return { level: "expiry", expiresOn: record.expiresOn };
+  if (canOn(ability, "read", "Currency", { userId: ownerUserId })) return { level: "expiry", expiresOn: record.expiresOn };
   return null;
 }

@@ -1,5 +1,6 @@
 import { subject } from "@casl/ability";
 import type { AppAbility } from "@/permissions";
+import { can } from "@/permissions";
 
 // Reading a safety report is checked against the report itself: the safety officer's grant
 // has no condition, a member's is { reporterId: their id }. An anonymous report has no
@@ -10,5 +11,5 @@ export function canReadReport(ability: AppAbility, report: { reporterId: string 
 
 /** Officers triage every report; members only ever see their own named ones. */
 export function canTriageReports(ability: AppAbility): boolean {
-  return ability.can("triage", "SafetyReport");
+  return can(ability, "triage", "SafetyReport");
 }

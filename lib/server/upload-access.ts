@@ -1,27 +1,27 @@
 import type { Upload } from "@/db/schema";
-import { own, type AppAbility } from "@/permissions";
+import { type AppAbility, can, canAll, canOn } from "@/permissions";
 
 // Who may read a stored file follows what it belongs to. Unknown kinds are readable by nobody.
 export function canReadUpload(ability: AppAbility, upload: Pick<Upload, "subjectType" | "ownerUserId">): boolean {
   switch (upload.subjectType) {
     case "Squawk":
     case "Aircraft":
-      return ability.can("read", "Squawk");
+      return can(ability, "read", "Squawk");
     case "InspectionCompletion":
-      return ability.can("read", "Inspection");
+      return can(ability, "read", "Inspection");
     case "Bulletin":
-      return ability.can("read", "Bulletin");
+      return can(ability, "read", "Bulletin");
     case "MemberDocument":
-      return ability.can("read", own("MemberDocument", upload.ownerUserId ?? ""));
+      return canOn(ability, "read", "MemberDocument", { userId: upload.ownerUserId ?? "" });
     case "Medical":
       // Medical scans: the member and club admins only, never the safety officer or instructors.
-      return ability.can("readDetails", own("Medical", upload.ownerUserId ?? ""));
+      return canOn(ability, "readDetails", "Medical", { userId: upload.ownerUserId ?? "" });
     case "SafetyReport":
-      return ability.can("read", "SafetyReport") && ability.can("triage", "SafetyReport");
+      return canAll(ability, "read", "SafetyReport") && can(ability, "triage", "SafetyReport");
     case "FuelReceipt":
-      return ability.can("read", own("Account", upload.ownerUserId ?? ""));
+      return canOn(ability, "read", "Account", { userId: upload.ownerUserId ?? "" });
     case "BankStatement":
-      return ability.can("reconcile", "Reconciliation");
+      return can(ability, "reconcile", "Reconciliation");
     default:
       return false;
   }

@@ -14,7 +14,7 @@ export default async function ClubLayout({ children, params }: { children: React
       <ClubShell
         club={{ slug: ctx.club.slug, name: ctx.club.name }}
         clubs={clubs}
-        nav={clubNavItems(ctx.club.slug, ctx.ability)}
+        nav={clubNavItems(ctx.club.slug, ctx.ability, ctx.user.id)}
         user={{ name: ctx.user.name, email: ctx.user.email }}
         roles={ctx.membership.roles}
         isOperator={ctx.user.platformRole === "operator"}

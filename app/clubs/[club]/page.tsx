@@ -9,7 +9,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { requireClubContext } from "@/lib/server/club-context";
-import { own, ROLE_LABELS } from "@/permissions";
+import { ROLE_LABELS, can, canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "Club home" };
 
@@ -19,11 +19,11 @@ export default async function ClubHome({ params }: { params: Promise<{ club: str
   const base = `/clubs/${club.slug}`;
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const tiles: { title: string; body?: string; href?: string; node?: ReactNode; show: boolean }[] = [
-    { title: "Flight line", node: <HomeFleet db={db} club={club} />, show: ability.can("read", "Aircraft") },
-    { title: "Safety bulletins", node: <HomeBulletins db={db} clubId={club.id} slug={club.slug} userId={user.id} roles={membership.roles} today={today} />, show: ability.can("read", "Bulletin") },
-    { title: "Your currency", node: <HomeCurrency db={db} club={club} userId={user.id} today={today} />, show: ability.can("read", own("Currency", user.id)) },
-    { title: "Your account", node: <HomeAccount db={db} club={club} userId={user.id} today={today} />, show: ability.can("read", own("Account", user.id)) },
-    { title: "Members", body: "The roster, roles and invitations.", href: `${base}/members`, show: ability.can("read", "Member") },
+    { title: "Flight line", node: <HomeFleet db={db} club={club} />, show: can(ability, "read", "Aircraft") },
+    { title: "Safety bulletins", node: <HomeBulletins db={db} clubId={club.id} slug={club.slug} userId={user.id} roles={membership.roles} today={today} />, show: can(ability, "read", "Bulletin") },
+    { title: "Your currency", node: <HomeCurrency db={db} club={club} userId={user.id} today={today} />, show: canOn(ability, "read", "Currency", { userId: user.id }) },
+    { title: "Your account", node: <HomeAccount db={db} club={club} userId={user.id} today={today} />, show: canOn(ability, "read", "Account", { userId: user.id }) },
+    { title: "Members", body: "The roster, roles and invitations.", href: `${base}/members`, show: can(ability, "read", "Member") },
   ].filter((t) => t.show);
   return (
     <div className="max-w-5xl">

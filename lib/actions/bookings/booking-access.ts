@@ -4,11 +4,11 @@ import type { BookingRow } from "@/db/schema";
 import { getBookingRow } from "@/db/queries/bookings";
 import { ActionError } from "@/lib/actions/action-state";
 import type { ClubContext } from "@/lib/server/club-context";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 /** The member of the booking, its instructor, or whoever may update anyone's booking. */
 export function mayActOnBooking(ctx: Pick<ClubContext, "user" | "ability">, booking: Pick<BookingRow, "userId" | "instructorId">): boolean {
-  return booking.userId === ctx.user.id || booking.instructorId === ctx.user.id || ctx.ability.can("update", own("Booking", booking.userId));
+  return booking.userId === ctx.user.id || booking.instructorId === ctx.user.id || canOn(ctx.ability, "update", "Booking", { userId: booking.userId });
 }
 
 export function loadBookingForParty(tx: Tx, ctx: Pick<ClubContext, "club" | "user" | "ability">, bookingId: string): BookingRow {

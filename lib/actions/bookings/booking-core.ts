@@ -12,7 +12,7 @@ import { checkWindow, findConflicts, type Conflict } from "@/lib/bookings/overla
 import { formatLocalTime, localTimeToInstant } from "@/lib/fleet/time";
 import type { ClubContext } from "@/lib/server/club-context";
 import type { ChangeBookingInput, CreateBookingInput } from "@/lib/validation/bookings";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 // The one path that makes or moves a booking, used by the server actions and the JSON route:
 // write lock first, then the window, the people, the overlap check, the guards and the write,
@@ -91,7 +91,7 @@ function loadPlane(tx: Tx, clubId: string, aircraftId: string): Aircraft {
 export function createBookingInTx(tx: Tx, ctx: Ctx, input: CreateBookingInput, now: Date = new Date()) {
   claimBookingWriteLock(tx);
   const memberId = input.memberId ?? ctx.user.id;
-  if (memberId !== ctx.user.id && !ctx.ability.can("update", own("Booking", memberId))) {
+  if (memberId !== ctx.user.id && !canOn(ctx.ability, "update", "Booking", { userId: memberId })) {
     throw new ActionError("You can book only for yourself.", { memberId: ["Only instructors book for other members."] }, "forbidden");
   }
   const member = activePerson(tx, ctx.club.id, memberId);
@@ -119,7 +119,7 @@ export function changeBookingInTx(tx: Tx, ctx: Ctx, input: ChangeBookingInput, n
   claimBookingWriteLock(tx);
   const booking = getBookingRow(tx, ctx.club.id, input.bookingId);
   if (!booking) throw new ActionError("That booking was not found in this club.", {}, "not_found");
-  if (!ctx.ability.can("update", own("Booking", booking.userId))) throw new ActionError("Only the member who booked, or an instructor, can change this booking.", {}, "forbidden");
+  if (!canOn(ctx.ability, "update", "Booking", { userId: booking.userId })) throw new ActionError("Only the member who booked, or an instructor, can change this booking.", {}, "forbidden");
   if (booking.status !== "reserved") throw new ActionError(`This booking is ${booking.status.replace("_", " ")} and can no longer be changed.`, {}, "conflict");
   const member = activePerson(tx, ctx.club.id, booking.userId);
   if (!member) throw new ActionError("The member of this booking is no longer active in the club.", {}, "conflict");

@@ -5,7 +5,7 @@ import { ActionError } from "@/lib/actions/action-state";
 import { describeLateCheck, lateCancellation } from "@/lib/bookings/late-cancellation";
 import { writeAudit } from "@/lib/server/audit";
 import { cancelBookingSchema } from "@/lib/validation/bookings";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 import { bookingPaths } from "./paths";
 
 export const cancelBooking = clubAction({
@@ -15,7 +15,7 @@ export const cancelBooking = clubAction({
   run(tx, { club, user, ability }, input) {
     const booking = getBookingRow(tx, club.id, input.bookingId);
     if (!booking) throw new ActionError("That booking was not found in this club.", {}, "not_found");
-    if (!ability.can("update", own("Booking", booking.userId))) throw new ActionError("Only the member who booked, or an instructor, can cancel this booking.", {}, "forbidden");
+    if (!canOn(ability, "update", "Booking", { userId: booking.userId })) throw new ActionError("Only the member who booked, or an instructor, can cancel this booking.", {}, "forbidden");
     if (booking.status === "cancelled") return { message: "This booking was already cancelled." };
     if (booking.status !== "reserved") throw new ActionError("The aircraft is already out on this booking; check in instead of cancelling.", {}, "conflict");
     const now = new Date();

@@ -7,14 +7,14 @@ import { clubToday } from "@/lib/actions/safety/bulletin-publishing";
 import { flightReviewDue } from "@/lib/currency";
 import { compareIsoDates } from "@/lib/dates";
 import { writeAudit } from "@/lib/server/audit";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 import { recordDocumentSchema } from "@/lib/validation/safety";
 import { checkAndStoreFile, discardOnFailure, insertUploadRow, type StoredFile } from "./stored-upload";
 
 /** A member records one of their own documents; a renewal is a new row and the old one stays. */
 export const recordDocument = clubAction({
   schema: recordDocumentSchema,
-  permission: (ability, _input, ctx) => ability.can("create", own("MemberDocument", ctx.user.id)),
+  permission: (ability, _input, ctx) => canOn(ability, "create", "MemberDocument", { userId: ctx.user.id }),
   success: "Document recorded.",
   async prepare(ctx, input): Promise<StoredFile | null> {
     // Refuse bad dates before any bytes are written.

@@ -7,7 +7,7 @@ import { clubToday } from "@/lib/actions/safety/bulletin-publishing";
 import { basicMedStatus, medicalExpiry } from "@/lib/currency";
 import { compareIsoDates } from "@/lib/dates";
 import { writeAudit } from "@/lib/server/audit";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 import { recordMedicalSchema } from "@/lib/validation/safety";
 
 /**
@@ -17,7 +17,7 @@ import { recordMedicalSchema } from "@/lib/validation/safety";
  */
 export const recordMedical = clubAction({
   schema: recordMedicalSchema,
-  permission: (ability, _input, ctx) => ability.can("update", own("Medical", ctx.user.id)),
+  permission: (ability, _input, ctx) => canOn(ability, "update", "Medical", { userId: ctx.user.id }),
   success: "Medical recorded.",
   run(tx, ctx, input) {
     const { club, user } = ctx;

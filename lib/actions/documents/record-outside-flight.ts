@@ -4,13 +4,13 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { clubToday } from "@/lib/actions/safety/bulletin-publishing";
 import { compareIsoDates } from "@/lib/dates";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 import { outsideFlightSchema } from "@/lib/validation/safety";
 
 /** Landings flown outside the club's own log (another club, a rental) count toward currency. */
 export const recordOutsideFlight = clubAction({
   schema: outsideFlightSchema,
-  permission: (ability, _input, ctx) => ability.can("create", own("Currency", ctx.user.id)),
+  permission: (ability, _input, ctx) => canOn(ability, "create", "Currency", { userId: ctx.user.id }),
   success: "Flight added to your currency.",
   run(tx, ctx, input) {
     if (compareIsoDates(input.flownOn, clubToday(ctx)) > 0) throw new ActionError("Some fields need attention; nothing was saved.", { flownOn: ["The date cannot be in the future."] });

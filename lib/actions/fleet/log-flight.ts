@@ -11,6 +11,7 @@ import { isoDateInTimeZone } from "@/lib/dates";
 import { advanceMeters, checkBetween } from "@/lib/fleet/continuity";
 import { logFlightSchema } from "@/lib/validation/fleet";
 import { fleetPaths } from "./paths";
+import { can } from "@/permissions";
 
 // One transaction: the flight, its continuity flag, the aircraft's current meters (which the
 // flight line reads instead of the flights) and, when one was found, the squawk.
@@ -23,7 +24,7 @@ export const logFlight = clubAction({
     if (!plane || plane.retiredAt) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
     const pilotId = input.pilotId ?? user.id;
     if (pilotId !== user.id) {
-      if (!ability.can("update", "Flight")) throw new ActionError("You can log only your own flights.", { pilotId: ["Only instructors and maintenance log flights for others."] }, "forbidden");
+      if (!can(ability, "update", "Flight")) throw new ActionError("You can log only your own flights.", { pilotId: ["Only instructors and maintenance log flights for others."] }, "forbidden");
       const pilot = tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.clubId, club.id), eq(memberships.userId, pilotId), eq(memberships.status, "active"))).get();
       if (!pilot) throw new ActionError("Some fields need attention; nothing was saved.", { pilotId: ["That pilot is not an active member of this club."] });
     }

@@ -4,12 +4,12 @@ import { kickOutbox } from "@/lib/email/runner";
 import { issueStatements } from "@/lib/ledger/statements";
 import { writeAudit } from "@/lib/server/audit";
 import { emailStatementSchema } from "@/lib/validation/money";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 import { ledger } from "./ledger-errors";
 
 export const emailStatement = clubAction({
   schema: emailStatementSchema,
-  permission: (ability, input) => ability.can("read", own("Account", input.memberUserId)),
+  permission: (ability, input) => canOn(ability, "read", "Account", { userId: input.memberUserId }),
   success: "The statement is on its way by e-mail.",
   run(tx, ctx, input) {
     ledger(() => issueStatements(tx, ctx.club.id, { month: input.month, memberUserIds: [input.memberUserId], force: true }));

@@ -8,7 +8,7 @@ import { getPaymentsClient } from "@/lib/ledger/payments-client";
 import { formatMoney } from "@/lib/money";
 import { appUrl } from "@/lib/server/urls";
 import { emptySchema } from "@/lib/validation/money";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 // The provider's smallest charge is about half a major unit (from memory of its documentation).
 const MIN_CARD_MINOR = 50;
@@ -20,7 +20,7 @@ const MIN_CARD_MINOR = 50;
  */
 export const startCardPayment = clubAction({
   schema: emptySchema,
-  permission: (ability, _input, ctx) => ability.can("pay", own("Account", ctx.user.id)),
+  permission: (ability, _input, ctx) => canOn(ability, "pay", "Account", { userId: ctx.user.id }),
   success: "Opening the payment page…",
   async prepare(ctx) {
     const balance = memberBalance(ctx.db, ctx.club.id, ctx.user.id);

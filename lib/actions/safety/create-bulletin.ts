@@ -10,10 +10,11 @@ import { kickOutbox } from "@/lib/email/runner";
 import { writeAudit } from "@/lib/server/audit";
 import { createBulletinSchema } from "@/lib/validation/safety";
 import { assertDeadlineAhead, fleetTypeGroupOrThrow, publishBulletinInTx } from "./bulletin-publishing";
+import { can } from "@/permissions";
 
 export const createBulletin = clubAction({
   schema: createBulletinSchema,
-  permission: (ability, input) => ability.can("create", "Bulletin") && (input.intent === "draft" || ability.can("publish", "Bulletin")),
+  permission: (ability, input) => can(ability, "create", "Bulletin") && (input.intent === "draft" || can(ability, "publish", "Bulletin")),
   success: "Bulletin saved.",
   async prepare(ctx, input): Promise<StoredFile | null> {
     assertDeadlineAhead(ctx, input.acknowledgeBy);
@@ -31,7 +32,7 @@ export const createBulletin = clubAction({
         seriesId = previous.seriesId;
         version = previous.version + 1;
       }
-      if (input.sourceReportId && (!ctx.ability.can("triage", "SafetyReport") || !getReport(tx, club.id, input.sourceReportId))) {
+      if (input.sourceReportId && (!can(ctx.ability, "triage", "SafetyReport") || !getReport(tx, club.id, input.sourceReportId))) {
         throw new ActionError("The safety report this bulletin draws on was not found.", {}, "not_found");
       }
       const typeGroup = input.audience === "type_group" ? fleetTypeGroupOrThrow(tx, club.id, input.audienceTypeGroup, "audienceTypeGroup") : null;

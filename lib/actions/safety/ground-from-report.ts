@@ -9,6 +9,7 @@ import { resolveClubContext } from "@/lib/server/club-context";
 import { canTriageReports } from "@/lib/safety/report-access";
 import { groundFromReportSchema } from "@/lib/validation/safety";
 import { revalidatePath } from "next/cache";
+import { can } from "@/permissions";
 
 /**
  * Grounds an aircraft from a safety report through the fleet's own grounding action (which
@@ -24,7 +25,7 @@ export async function groundFromReport(_prev: ActionState, formData: FormData): 
   const ctx = resolved.ctx;
   const parsed = groundFromReportSchema.safeParse(raw);
   if (!parsed.success) return { ok: false, message: "Some fields need attention; nothing was saved.", fieldErrors: zodFieldErrors(parsed.error) };
-  if (!canTriageReports(ctx.ability) || !ctx.ability.can("create", "GroundingNotice")) {
+  if (!canTriageReports(ctx.ability) || !can(ctx.ability, "create", "GroundingNotice")) {
     return { ok: false, message: "Only the safety officer can ground an aircraft from a safety report.", fieldErrors: {} };
   }
   const report = getReport(ctx.db, ctx.club.id, parsed.data.reportId);

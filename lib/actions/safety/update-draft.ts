@@ -9,11 +9,12 @@ import { kickOutbox } from "@/lib/email/runner";
 import { writeAudit } from "@/lib/server/audit";
 import { updateDraftSchema } from "@/lib/validation/safety";
 import { assertDeadlineAhead, fleetTypeGroupOrThrow, publishBulletinInTx } from "./bulletin-publishing";
+import { can } from "@/permissions";
 
 /** Drafts may change freely; a published bulletin never does (that is a revision: a new version). */
 export const updateDraft = clubAction({
   schema: updateDraftSchema,
-  permission: (ability, input) => ability.can("update", "Bulletin") && (input.intent === "draft" || ability.can("publish", "Bulletin")),
+  permission: (ability, input) => can(ability, "update", "Bulletin") && (input.intent === "draft" || can(ability, "publish", "Bulletin")),
   success: "Draft saved.",
   async prepare(ctx, input): Promise<StoredFile | null> {
     assertDeadlineAhead(ctx, input.acknowledgeBy);

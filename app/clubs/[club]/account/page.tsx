@@ -8,16 +8,16 @@ import { getMemberAccount } from "@/db/queries/money-accounts";
 import { formatMoney } from "@/lib/money";
 import { clubToday } from "@/lib/ledger/settings";
 import { requireClubContext } from "@/lib/server/club-context";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "My account" };
 
 export default async function MyAccountPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
   const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("read", own("Account", user.id))) notFound();
+  if (!canOn(ability, "read", "Account", { userId: user.id })) notFound();
   const data = getMemberAccount(db, club.id, user.id, clubToday(club));
-  const canPay = ability.can("pay", own("Account", user.id)) && data.balanceMinor >= 50;
+  const canPay = canOn(ability, "pay", "Account", { userId: user.id }) && data.balanceMinor >= 50;
   return (
     <div className="max-w-4xl">
       <PageHeader title="My account" lead={`Your account with ${club.name}, in ${club.currency}.`} />

@@ -1,12 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { AircraftForm } from "@/components/fleet/aircraft-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { listAircraft } from "@/db/queries/fleet";
 import { formatHours } from "@/lib/airworthiness";
 import { formatMoney } from "@/lib/money";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Aircraft" };
 export const dynamic = "force-dynamic";
@@ -14,8 +14,7 @@ export const dynamic = "force-dynamic";
 /** The fleet register: the records themselves. Status lives on the flight line. */
 export default async function AircraftListPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Aircraft")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Aircraft"]);
   const fleet = listAircraft(db, club.id);
   return (
     <div className="max-w-6xl">
@@ -39,7 +38,7 @@ export default async function AircraftListPage({ params }: { params: Promise<{ c
           </tbody>
         </table>
       </div>
-      {ability.can("create", "Aircraft") ? (
+      {can(ability, "create", "Aircraft") ? (
         <section className="card mt-6" aria-labelledby="add-h">
           <h2 id="add-h" className="mb-3 text-lg font-bold">Add an aircraft</h2>
           <p className="mb-3 text-sm text-ink-700">It starts with the default inspection items (annual, 100-hour, ELT, ELT battery, transponder, altimeter/static, VOR check, oil change); those that do not apply to its use are left out of its status. It shows &quot;Check status&quot; until their last completions are recorded.</p>

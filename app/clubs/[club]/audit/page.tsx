@@ -1,7 +1,6 @@
-import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/ui/page-header";
 import { listAudit } from "@/db/queries/members";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 function summarise(value: unknown): string {
   if (value === null || value === undefined) return "—";
@@ -10,8 +9,7 @@ function summarise(value: unknown): string {
 
 export default async function AuditPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "AuditLog")) notFound();
+  const { db, club } = await authorizePage(slug, ["read", "AuditLog"]);
   const rows = listAudit(db, club.id);
   return (
     <div className="max-w-6xl">

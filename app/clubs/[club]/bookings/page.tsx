@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { Suspense } from "react";
 import { FleetDays } from "@/components/bookings/fleet-days";
 import { FleetStatusPanel } from "@/components/bookings/fleet-status-panel";
@@ -12,16 +11,16 @@ import { listPersonBookings, listSheetBookings } from "@/db/queries/bookings";
 import { listAircraft } from "@/db/queries/fleet";
 import { viewRange } from "@/lib/actions/bookings/range";
 import { addDays, isoDateInTimeZone } from "@/lib/dates";
-import { requireClubContext } from "@/lib/server/club-context";
 import { bookingRangeSchema } from "@/lib/validation/bookings";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Bookings" };
 export const dynamic = "force-dynamic";
 
 export default async function BookingsPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<Record<string, string | undefined>> }) {
   const { club: slug } = await params;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Booking")) notFound();
+  const { db, club, user, ability } = await authorizePage(slug, ["read", "Booking"]);
   const parsed = bookingRangeSchema.safeParse(await searchParams);
   const query = parsed.success ? parsed.data : { view: "week" as const, date: undefined };
   const range = viewRange(club, query.view, query.date);
@@ -40,7 +39,7 @@ export default async function BookingsPage({ params, searchParams }: { params: P
         lead={`${title} · club time ${club.timeZone}`}
         actions={
           <>
-            {ability.can("create", "Booking") ? <Link href={`${base}/new`} className={buttonClass("primary")}>New booking</Link> : null}
+            {can(ability, "create", "Booking") ? <Link href={`${base}/new`} className={buttonClass("primary")}>New booking</Link> : null}
             <Link href={`${base}/calendar`} className={buttonClass("secondary")}>Calendar link</Link>
           </>
         }

@@ -1,20 +1,18 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { FlightLineBoard } from "@/components/fleet/flight-line-board";
 import { buttonClass } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { getFlightLine } from "@/db/queries/fleet-status";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Flight line" };
 export const dynamic = "force-dynamic";
 
 export default async function FlightLinePage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Aircraft")) notFound();
+  const { db, club } = await authorizePage(slug, ["read", "Aircraft"]);
   const initial = getFlightLine(db, club);
   return (
     <div className="max-w-6xl">

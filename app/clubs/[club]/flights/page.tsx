@@ -7,7 +7,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { getAircraft, listAircraft } from "@/db/queries/fleet";
 import { listFlights } from "@/db/queries/fleet-flights";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Flight log" };
 export const dynamic = "force-dynamic";
@@ -15,8 +16,7 @@ export const dynamic = "force-dynamic";
 export default async function FlightsPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<{ aircraft?: string }> }) {
   const { club: slug } = await params;
   const { aircraft: filter } = await searchParams;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Flight")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Flight"]);
   const selected = filter ? getAircraft(db, club.id, filter) : undefined;
   if (filter && !selected) notFound();
   const fleet = listAircraft(db, club.id);
@@ -25,7 +25,7 @@ export default async function FlightsPage({ params, searchParams }: { params: Pr
   return (
     <div className="max-w-6xl">
       <PageHeader title="Flight log" lead="Meter readings out and in for every flight. A gap or overlap with the flight before is flagged for maintenance." />
-      {ability.can("create", "Flight") ? (
+      {can(ability, "create", "Flight") ? (
         <details className="card mb-6" open={rows.length === 0}>
           <summary className="cursor-pointer text-lg font-bold text-fin-600">Log a flight</summary>
           <div className="mt-3 max-w-xl">

@@ -14,6 +14,7 @@ import { listNotices } from "@/db/queries/fleet-notices";
 import { getFlightLine } from "@/db/queries/fleet-status";
 import { listSquawkEvents, listSquawks } from "@/db/queries/fleet-squawks";
 import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Maintenance" };
 export const dynamic = "force-dynamic";
@@ -22,15 +23,15 @@ export const dynamic = "force-dynamic";
 export default async function MaintenancePage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
   const { db, club, ability } = await requireClubContext(slug);
-  if (!(ability.can("triage", "Squawk") || ability.can("record", "Inspection"))) notFound();
+  if (!(can(ability, "triage", "Squawk") || can(ability, "record", "Inspection"))) notFound();
   const base = `/clubs/${club.slug}`;
   const line = getFlightLine(db, club);
   const open = listSquawks(db, club.id, { status: "open", limit: 200 });
   const events = listSquawkEvents(db, club.id, open.map((s) => s.id));
   const files = listUploadsFor(db, club.id, "Squawk", open.map((s) => s.id));
   const active = listNotices(db, club.id, { limit: 200 }).filter((n) => !n.liftedAt);
-  const flags = ability.can("read", "Flight") ? listUnreviewedFlags(db, club.id) : [];
-  const canReview = ability.can("update", "Flight");
+  const flags = can(ability, "read", "Flight") ? listUnreviewedFlags(db, club.id) : [];
+  const canReview = can(ability, "update", "Flight");
   const attention = line.entries.flatMap((e) => e.due.filter((d) => d.overdue || d.incomplete || d.dueSoon).map((d) => ({ entry: e, d })));
   const untriaged = open.filter((s) => s.triage === "untriaged");
   const triaged = open.filter((s) => s.triage !== "untriaged");
@@ -54,12 +55,12 @@ export default async function MaintenancePage({ params }: { params: Promise<{ cl
 
       <section aria-labelledby="triage-h" className="mt-8">
         <h2 id="triage-h" className="mb-3 text-xl font-bold">Squawks awaiting triage</h2>
-        <SquawkList slug={club.slug} rows={untriaged} events={events} files={files} today={line.today} canTriage={ability.can("triage", "Squawk")} canClose={ability.can("close", "Squawk")} showAircraft empty="Nothing waiting for triage." />
+        <SquawkList slug={club.slug} rows={untriaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="Nothing waiting for triage." />
       </section>
 
       <section aria-labelledby="open-h" className="mt-8">
         <h2 id="open-h" className="mb-3 text-xl font-bold">Open squawks</h2>
-        <SquawkList slug={club.slug} rows={triaged} events={events} files={files} today={line.today} canTriage={ability.can("triage", "Squawk")} canClose={ability.can("close", "Squawk")} showAircraft empty="No other open squawks." />
+        <SquawkList slug={club.slug} rows={triaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="No other open squawks." />
       </section>
 
       <section aria-labelledby="due-h" className="mt-8">
@@ -93,7 +94,7 @@ export default async function MaintenancePage({ params }: { params: Promise<{ cl
 
       <section aria-labelledby="notices-h" className="mt-8">
         <h2 id="notices-h" className="mb-3 text-xl font-bold">Grounding notices in force</h2>
-        <NoticeList slug={club.slug} rows={active} timeZone={club.timeZone} canLift={ability.can("lift", "GroundingNotice")} showAircraft />
+        <NoticeList slug={club.slug} rows={active} timeZone={club.timeZone} canLift={can(ability, "lift", "GroundingNotice")} showAircraft />
       </section>
     </div>
   );

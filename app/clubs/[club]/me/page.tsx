@@ -12,14 +12,14 @@ import { listCheckouts, listFleetTypeGroups, listOutsideFlights } from "@/db/que
 import { getCurrentMedical, getOwnBirthDate, listMemberDocuments } from "@/db/queries/safety-documents";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { requireClubContext } from "@/lib/server/club-context";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "My currency & documents" };
 
 export default async function MePage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
   const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("read", own("Currency", user.id))) notFound();
+  if (!canOn(ability, "read", "Currency", { userId: user.id })) notFound();
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const currency = getMemberCurrency(db, club, user.id, today);
   const docs = listMemberDocuments(db, club.id, user.id);

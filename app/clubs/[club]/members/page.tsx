@@ -5,24 +5,22 @@ import { RevokeInvitationButton } from "@/components/members/member-admin-forms"
 import { MembersTable } from "@/components/members/members-table";
 import { PageHeader } from "@/components/ui/page-header";
 import { listMembers, listOpenInvitations } from "@/db/queries/members";
-import { requireClubContext } from "@/lib/server/club-context";
-import { ROLE_LABELS, explainDenied } from "@/permissions";
-import { notFound } from "next/navigation";
+import { ROLE_LABELS, explainDenied, can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Members" };
 
 export default async function MembersPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Member")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Member"]);
   const rows = listMembers(db, club.id);
-  const canInvite = ability.can("invite", "Member");
+  const canInvite = can(ability, "invite", "Member");
   const invitations = canInvite ? listOpenInvitations(db, club.id) : [];
   return (
     <div className="max-w-6xl">
       <PageHeader title="Members" lead={`${rows.filter((r) => r.status === "active").length} active members of ${club.name}.`} />
       <Suspense fallback={<div className="h-40 animate-pulse rounded bg-sand-200" />}>
-        <MembersTable rows={rows} slug={club.slug} canManage={ability.can("assignRoles", "Member")} />
+        <MembersTable rows={rows} slug={club.slug} canManage={can(ability, "assignRoles", "Member")} />
       </Suspense>
       <div className="mt-8 grid gap-6 lg:grid-cols-2">
         <section className="card" aria-labelledby="invite-h">

@@ -13,7 +13,7 @@ import { monthLabel, monthOf, shiftMonthKey } from "@/lib/ledger/months";
 import { lockedThrough } from "@/lib/ledger/post-entry";
 import { clubToday } from "@/lib/ledger/settings";
 import { requireClubContext } from "@/lib/server/club-context";
-import { explainDenied } from "@/permissions";
+import { explainDenied, can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Money" };
 
@@ -23,7 +23,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
   const today = clubToday(club);
   const balances = accountBalances(db, club.id);
   const by = (code: string) => balances.find((b) => b.code === code)?.balanceMinor ?? 0;
-  const members = ability.can("read", "Account") ? listMemberBalances(db, club.id, today) : [];
+  const members = can(ability, "read", "Account") ? listMemberBalances(db, club.id, today) : [];
   const owed = members.reduce((s, m) => s + Math.max(0, m.balanceMinor), 0);
   const arrears = members.filter((m) => m.inArrears);
   const problems = unbalancedEntries(db, club.id);
@@ -31,7 +31,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
   const locked = lockedThrough(db, club.id);
   const month = monthOf(today);
   const base = `/clubs/${club.slug}/money`;
-  const canPost = ability.can("create", "Ledger");
+  const canPost = can(ability, "create", "Ledger");
   const tiles = [
     { label: "Members owe the club", value: <Money minor={owed} currency={club.currency} />, href: `${base}/balances` },
     { label: "In the bank (books)", value: <Money minor={by("bank")} currency={club.currency} />, href: `${base}/reconciliation` },

@@ -1,13 +1,11 @@
-import { notFound } from "next/navigation";
 import { OutboxTable } from "@/components/outbox-table";
 import { PageHeader } from "@/components/ui/page-header";
 import { listClubOutbox } from "@/db/queries/outbox";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export default async function OutboxPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Outbox")) notFound();
+  const { db, club } = await authorizePage(slug, ["read", "Outbox"]);
   const rows = listClubOutbox(db, club.id).map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), sentAt: r.sentAt?.toISOString() ?? null }));
   return (
     <div className="max-w-6xl">

@@ -1,22 +1,21 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { BulletinList } from "@/components/safety/bulletin-list";
 import { SafetyLinks } from "@/components/safety/safety-links";
 import { PageHeader } from "@/components/ui/page-header";
 import { bulletinAckStats, getBulletin, listBulletins, listBulletinsToAcknowledge } from "@/db/queries/safety-bulletins";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Safety" };
 
 export default async function SafetyPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, user, membership, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Bulletin")) notFound();
+  const { db, club, user, membership, ability } = await authorizePage(slug, ["read", "Bulletin"]);
   const today = isoDateInTimeZone(new Date(), club.timeZone);
-  const writer = ability.can("create", "Bulletin");
-  const seesAcks = ability.can("readAcknowledgements", "Bulletin");
+  const writer = can(ability, "create", "Bulletin");
+  const seesAcks = can(ability, "readAcknowledgements", "Bulletin");
   const toAck = new Set(listBulletinsToAcknowledge(db, club.id, { userId: user.id, roles: membership.roles }).map((b) => b.id));
   const all = listBulletins(db, club.id, { includeDrafts: writer });
   const rows = all.map((b) => {
@@ -32,7 +31,7 @@ export default async function SafetyPage({ params }: { params: Promise<{ club: s
         lead="Bulletins from the safety officer, confidential reports, currency and checkouts."
         actions={writer ? <Link href={`/clubs/${club.slug}/safety/bulletins/new`} className="inline-flex min-h-11 items-center rounded bg-fin-600 px-4 py-2 font-bold text-white no-underline hover:bg-fin-700">New bulletin</Link> : null}
       />
-      <SafetyLinks slug={club.slug} ability={ability} />
+      <SafetyLinks slug={club.slug} ability={ability} userId={user.id} />
       {toAck.size > 0 ? (
         <p role="status" className="mb-4 rounded border border-sock-500 bg-sock-100 px-3 py-2">
           {toAck.size === 1 ? "One bulletin is" : `${toAck.size} bulletins are`} waiting for your acknowledgement.

@@ -1,23 +1,22 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { listAircraft } from "@/db/queries/fleet";
 import { listWeightBalanceProfiles } from "@/db/queries/tools-wb";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Pilot tools" };
 export const dynamic = "force-dynamic";
 
 export default async function ToolsPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Tools")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Tools"]);
   const base = `/clubs/${club.slug}/tools`;
   const fleet = listAircraft(db, club.id);
   const profiles = new Set(listWeightBalanceProfiles(db, club.id).map((p) => p.aircraftId));
-  const canSetUp = ability.can("update", "Aircraft");
+  const canSetUp = can(ability, "update", "Aircraft");
   const tools = [
     { href: `${base}/weight-balance`, title: "Weight and balance", body: "Weight, moment and CG at takeoff and at landing, drawn on the aircraft's envelope." },
     { href: `${base}/fuel`, title: "Fuel and reserve", body: `Endurance against the 14 CFR 91.151 reserve${club.settings.extraReserveMinutes ? ` plus the club's ${club.settings.extraReserveMinutes} minutes` : ""}.` },

@@ -7,7 +7,7 @@ import { getPaymentBySession } from "@/db/queries/money-payments";
 import { memberBalance } from "@/lib/ledger/balances";
 import { syncCheckoutSession } from "@/lib/ledger/checkout-sync";
 import { requireClubContext } from "@/lib/server/club-context";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "Payment" };
 export const dynamic = "force-dynamic";
@@ -16,7 +16,7 @@ export default async function PaidPage({ params, searchParams }: { params: Promi
   const { club: slug } = await params;
   const { session } = await searchParams;
   const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("read", own("Account", user.id)) || !session) notFound();
+  if (!canOn(ability, "read", "Account", { userId: user.id }) || !session) notFound();
   let payment = getPaymentBySession(db, club.id, session);
   if (!payment || payment.memberUserId !== user.id) notFound();
   // Normally the signed webhook has already posted it; if it is late, ask the provider now.

@@ -20,8 +20,8 @@ import { listNotices } from "@/db/queries/fleet-notices";
 import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
 import { listSquawkEvents, listSquawks } from "@/db/queries/fleet-squawks";
 import { minorToDecimalString, currencyExponent, formatMoney } from "@/lib/money";
-import { requireClubContext } from "@/lib/server/club-context";
-import { explainDenied } from "@/permissions";
+import { explainDenied, can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Aircraft" };
 export const dynamic = "force-dynamic";
@@ -38,33 +38,32 @@ function Section({ id, title, children }: { id: string; title: string; children:
 export default async function AircraftPage({ params, searchParams }: { params: Promise<{ club: string; aircraftId: string }>; searchParams?: Promise<{ reported?: string }> }) {
   const { club: slug, aircraftId } = await params;
   const { reported } = (await searchParams) ?? {};
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Aircraft")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Aircraft"]);
   const plane = getAircraft(db, club.id, aircraftId);
   const entry = plane ? getAircraftStatusEntry(db, club, plane.id) : undefined;
   if (!plane || !entry) notFound();
 
-  const can = {
-    report: ability.can("create", "Squawk"),
-    triage: ability.can("triage", "Squawk"),
-    close: ability.can("close", "Squawk"),
-    record: ability.can("record", "Inspection"),
-    addItem: ability.can("create", "Inspection"),
-    editItem: ability.can("update", "Inspection"),
-    issue: ability.can("create", "GroundingNotice"),
-    lift: ability.can("lift", "GroundingNotice"),
-    readFlights: ability.can("read", "Flight"),
-    logFlight: ability.can("create", "Flight"),
-    edit: ability.can("update", "Aircraft"),
+  const may = {
+    report: can(ability, "create", "Squawk"),
+    triage: can(ability, "triage", "Squawk"),
+    close: can(ability, "close", "Squawk"),
+    record: can(ability, "record", "Inspection"),
+    addItem: can(ability, "create", "Inspection"),
+    editItem: can(ability, "update", "Inspection"),
+    issue: can(ability, "create", "GroundingNotice"),
+    lift: can(ability, "lift", "GroundingNotice"),
+    readFlights: can(ability, "read", "Flight"),
+    logFlight: can(ability, "create", "Flight"),
+    edit: can(ability, "update", "Aircraft"),
   };
   const squawks = listSquawks(db, club.id, { aircraftId: plane.id, limit: 100 });
   const events = listSquawkEvents(db, club.id, squawks.map((s) => s.id));
   const squawkFiles = listUploadsFor(db, club.id, "Squawk", squawks.map((s) => s.id));
   const notices = listNotices(db, club.id, { aircraftId: plane.id, limit: 50 });
-  const flights = can.readFlights ? listFlights(db, club.id, { aircraftId: plane.id, limit: 25 }) : [];
+  const flights = may.readFlights ? listFlights(db, club.id, { aircraftId: plane.id, limit: 25 }) : [];
   const history = listCompletionHistory(db, club.id, plane.id, 60);
   const completionFiles = listUploadsFor(db, club.id, "InspectionCompletion", history.map((c) => c.id));
-  const items = can.record || can.editItem ? listItems(db, club.id, plane.id) : [];
+  const items = may.record || may.editItem ? listItems(db, club.id, plane.id) : [];
   const dueKeys = new Set(entry.due.map((d) => d.key));
   const meterNow = plane.maintenanceMeter === "hobbs" ? plane.currentHobbs : plane.currentTach;
   const open = squawks.filter((s) => s.status === "open");
@@ -98,25 +97,25 @@ export default async function AircraftPage({ params, searchParams }: { params: P
             Squawk reported: &ldquo;{open.find((s) => s.id === reported)!.description}&rdquo;. It is on the list below, and maintenance sees it on the flight line.
           </p>
         ) : null}
-        <div className="card">{can.report ? <ReportSquawkForm slug={club.slug} aircraftId={plane.id} registration={plane.registration} /> : <p className="text-sm text-ink-500">{explainDenied("create", "Squawk")}</p>}</div>
+        <div className="card">{may.report ? <ReportSquawkForm slug={club.slug} aircraftId={plane.id} registration={plane.registration} /> : <p className="text-sm text-ink-500">{explainDenied("create", "Squawk")}</p>}</div>
       </Section>
 
       <Section id="due" title="What comes due">
         <DueTable due={entry.due} caption={`Inspection items of ${plane.registration}`} />
-        {can.record || can.editItem ? (
+        {may.record || may.editItem ? (
           <div className="mt-3 space-y-2">
             {items.filter((i) => dueKeys.has(i.key)).map((item) => (
               <details key={item.id} className="rounded border border-sand-300 bg-white p-3">
                 <summary className="cursor-pointer font-bold text-fin-600">Record or update: {item.name}</summary>
                 <div className="mt-3 grid gap-4 md:grid-cols-2">
-                  {can.record ? <RecordCompletionForm slug={club.slug} itemId={item.id} itemName={item.name} today={entry.today} hoursBased={item.ruleKind === "hours" || item.ruleKind === "months-or-hours"} fixedDate={item.ruleKind === "fixed-date"} meterName={plane.maintenanceMeter} meterNow={meterNow} /> : null}
-                  {can.editItem && (item.usageLimitHours !== null || item.origin !== "regulation") ? <UpdateItemForm slug={club.slug} itemId={item.id} hasUsage={item.usageLimitHours !== null} canRetire={item.origin !== "regulation"} /> : null}
+                  {may.record ? <RecordCompletionForm slug={club.slug} itemId={item.id} itemName={item.name} today={entry.today} hoursBased={item.ruleKind === "hours" || item.ruleKind === "months-or-hours"} fixedDate={item.ruleKind === "fixed-date"} meterName={plane.maintenanceMeter} meterNow={meterNow} /> : null}
+                  {may.editItem && (item.usageLimitHours !== null || item.origin !== "regulation") ? <UpdateItemForm slug={club.slug} itemId={item.id} hasUsage={item.usageLimitHours !== null} canRetire={item.origin !== "regulation"} /> : null}
                 </div>
               </details>
             ))}
           </div>
         ) : null}
-        {can.addItem ? (
+        {may.addItem ? (
           <details className="mt-3 rounded border border-sand-300 bg-white p-3">
             <summary className="cursor-pointer font-bold text-fin-600">Add a directive or club item</summary>
             <div className="mt-3"><CreateItemForm slug={club.slug} aircraftId={plane.id} /></div>
@@ -125,7 +124,7 @@ export default async function AircraftPage({ params, searchParams }: { params: P
       </Section>
 
       <Section id="squawks" title={`Squawks (${open.length} open)`}>
-        <SquawkList slug={club.slug} rows={open} events={events} files={squawkFiles} today={entry.today} canTriage={can.triage} canClose={can.close} />
+        <SquawkList slug={club.slug} rows={open} events={events} files={squawkFiles} today={entry.today} canTriage={may.triage} canClose={may.close} />
         {closed.length ? (
           <details className="mt-3">
             <summary className="cursor-pointer font-bold text-fin-600">Closed squawks ({closed.length})</summary>
@@ -135,18 +134,18 @@ export default async function AircraftPage({ params, searchParams }: { params: P
       </Section>
 
       <Section id="notices" title="Grounding notices">
-        <NoticeList slug={club.slug} rows={notices} timeZone={club.timeZone} canLift={can.lift} />
-        {can.issue ? (
+        <NoticeList slug={club.slug} rows={notices} timeZone={club.timeZone} canLift={may.lift} />
+        {may.issue ? (
           <details className="mt-3 rounded border border-sand-300 bg-white p-3">
             <summary className="cursor-pointer font-bold text-stop-800">Ground {plane.registration}</summary>
-            <div className="mt-3"><IssueNoticeForm slug={club.slug} aircraftId={plane.id} registration={plane.registration} defaultCategory={ability.can("update", "Aircraft") || ability.can("record", "Inspection") ? "maintenance" : "safety"} /></div>
+            <div className="mt-3"><IssueNoticeForm slug={club.slug} aircraftId={plane.id} registration={plane.registration} defaultCategory={can(ability, "update", "Aircraft") || can(ability, "record", "Inspection") ? "maintenance" : "safety"} /></div>
           </details>
         ) : null}
       </Section>
 
-      {can.readFlights ? (
+      {may.readFlights ? (
         <Section id="flights" title="Flights">
-          {can.logFlight ? (
+          {may.logFlight ? (
             <details className="mb-3 rounded border border-sand-300 bg-white p-3">
               <summary className="cursor-pointer font-bold text-fin-600">Log a flight in {plane.registration}</summary>
               <div className="mt-3"><LogFlightForm slug={club.slug} aircraft={[{ id: plane.id, registration: plane.registration, hobbs: plane.currentHobbs, tach: plane.currentTach }]} fixedAircraftId={plane.id} today={entry.today} metric={club.unitSystem === "metric"} /></div>
@@ -169,7 +168,7 @@ export default async function AircraftPage({ params, searchParams }: { params: P
           <div><dt className="inline font-bold">Engine: </dt><dd className="inline">{plane.engineTimeSinceOverhaul ?? "—"} h since overhaul of {plane.engineTboHours ?? "—"} h TBO</dd></div>
           <div><dt className="inline font-bold">Rules: </dt><dd className="inline">{[plane.usedForInstruction && "instruction", plane.usedForHire && "hire", plane.ifrEquipped && "IFR-equipped", plane.usedForIfr && "IFR use"].filter(Boolean).join(", ") || "private VFR"}</dd></div>
         </dl>
-        {can.edit ? (
+        {may.edit ? (
           <details className="mt-3 rounded border border-sand-300 bg-white p-3">
             <summary className="cursor-pointer font-bold text-fin-600">Edit the record</summary>
             <div className="mt-3">

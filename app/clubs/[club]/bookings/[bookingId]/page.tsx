@@ -17,7 +17,7 @@ import { mayActOnBooking } from "@/lib/actions/bookings/booking-access";
 import { describeLateCheck, lateCancellation } from "@/lib/bookings/late-cancellation";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { formatLocalTime } from "@/lib/fleet/time";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Booking" };
 export const dynamic = "force-dynamic";
@@ -36,9 +36,8 @@ function Step({ n, title, done, children }: { n: number; title: string; done: bo
 
 export default async function BookingPage({ params }: { params: Promise<{ club: string; bookingId: string }> }) {
   const { club: slug, bookingId } = await params;
-  const ctx = await requireClubContext(slug);
-  const { db, club, ability } = ctx;
-  if (!ability.can("read", "Booking")) notFound();
+  const ctx = await authorizePage(slug, ["read", "Booking"]);
+  const { db, club } = ctx;
   const booking = getBooking(db, club.id, bookingId);
   if (!booking) notFound();
   const status = getAircraftStatusEntry(db, club, booking.aircraftId);

@@ -1,18 +1,16 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { CalendarLinkPanel } from "@/components/bookings/calendar-link-panel";
 import { PageHeader } from "@/components/ui/page-header";
 import { getLiveFeedToken } from "@/db/queries/bookings-feed";
 import { formatLocalTime } from "@/lib/fleet/time";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Calendar link" };
 export const dynamic = "force-dynamic";
 
 export default async function CalendarPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("create", "Booking")) notFound();
+  const { db, club, user } = await authorizePage(slug, ["create", "Booking"]);
   const live = getLiveFeedToken(db, club.id, user.id);
   return (
     <div className="max-w-2xl">

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { BookingForm } from "@/components/bookings/booking-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
@@ -7,16 +6,15 @@ import { getFlightLine } from "@/db/queries/fleet-status";
 import { listMembers } from "@/db/queries/members";
 import { addDays, isIsoDate, isoDateInTimeZone } from "@/lib/dates";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
-import { requireClubContext } from "@/lib/server/club-context";
-import { explainDenied, own } from "@/permissions";
+import { explainDenied, can, canOn } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "New booking" };
 export const dynamic = "force-dynamic";
 
 export default async function NewBookingPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<Record<string, string | undefined>> }) {
   const { club: slug } = await params;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Booking")) notFound();
+  const { db, club, user, ability } = await authorizePage(slug, ["read", "Booking"]);
   const query = await searchParams;
   const line = getFlightLine(db, club);
   const today = isoDateInTimeZone(new Date(), club.timeZone);
@@ -25,12 +23,12 @@ export default async function NewBookingPage({ params, searchParams }: { params:
   const people = listMembers(db, club.id).filter((m) => m.status === "active" && !(m.roles.length === 1 && m.roles[0] === "mechanic"));
   // Instructors include the person booking: an instructor books a student with themselves aboard.
   const instructors = people.filter((m) => m.roles.includes("instructor")).map((m) => ({ id: m.userId, label: m.userId === user.id ? `${m.name ?? m.email} (you)` : m.name ?? m.email }));
-  const forOthers = ability.can("update", own("Booking", "__someone-else__"));
+  const forOthers = canOn(ability, "update", "Booking", { userId: "__someone-else__" });
   return (
     <div className="max-w-2xl">
       <PageHeader title="New booking" lead={`Times are ${club.name}'s own (${club.timeZone}). The booking is checked against the aircraft's records and yours.`} />
       <div className="mb-4"><SafetyCaution compact /></div>
-      {ability.can("create", "Booking") ? (
+      {can(ability, "create", "Booking") ? (
         <section className="card">
           <BookingForm
             slug={club.slug}

@@ -3,12 +3,11 @@ import { notFound } from "next/navigation";
 import { ChangeRolesForm, MembershipStatusForm } from "@/components/members/member-admin-forms";
 import { PageHeader } from "@/components/ui/page-header";
 import { getMember } from "@/db/queries/members";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export default async function MemberPage({ params }: { params: Promise<{ club: string; membershipId: string }> }) {
   const { club: slug, membershipId } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("assignRoles", "Member")) notFound();
+  const { db, club } = await authorizePage(slug, ["assignRoles", "Member"]);
   const member = getMember(db, club.id, membershipId);
   if (!member) notFound();
   return (

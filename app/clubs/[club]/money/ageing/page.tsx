@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { ActionButton } from "@/components/money/action-form";
 import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
@@ -9,19 +8,19 @@ import { ageingByMember } from "@/db/queries/money-accounts";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
 import { AGEING_BUCKETS } from "@/lib/money";
 import { clubToday } from "@/lib/ledger/settings";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Receivables ageing" };
 
 export default async function AgeingPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Account")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Account"]);
   const today = clubToday(club);
   const { rows, totals } = ageingByMember(db, club.id, today);
   return (
     <>
-      <PageHeader title="Receivables ageing" lead={`What members owe on ${today}, by how many days past its due date each unpaid charge is.`} actions={ability.can("create", "Ledger") ? <ActionButton action={sendReminders} slug={club.slug} label="E-mail dues reminders" pendingText="Queueing…" /> : null} />
+      <PageHeader title="Receivables ageing" lead={`What members owe on ${today}, by how many days past its due date each unpaid charge is.`} actions={can(ability, "create", "Ledger") ? <ActionButton action={sendReminders} slug={club.slug} label="E-mail dues reminders" pendingText="Queueing…" /> : null} />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/ageing`} />
       <section aria-label="Totals by age" className="mb-6 grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-6">
         {AGEING_BUCKETS.map((b) => (

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { Suspense } from "react";
 import { ActionForm } from "@/components/money/action-form";
 import { DataTable } from "@/components/money/data-table";
@@ -8,14 +7,14 @@ import { PageHeader } from "@/components/ui/page-header";
 import { listMemberBalances } from "@/db/queries/money-accounts";
 import { recordManualPayment } from "@/lib/actions/money/record-manual-payment";
 import { clubToday } from "@/lib/ledger/settings";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Member balances" };
 
 export default async function BalancesPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Account")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Account"]);
   const today = clubToday(club);
   const members = listMemberBalances(db, club.id, today);
   const rows = members.map((m) => ({ ...m, href: `/clubs/${club.slug}/money/members/${m.userId}`, arrearsWord: m.inArrears ? "In arrears" : "Up to date" }));
@@ -40,7 +39,7 @@ export default async function BalancesPage({ params }: { params: Promise<{ club:
           ]}
         />
       </Suspense>
-      {ability.can("create", "Payment") ? (
+      {can(ability, "create", "Payment") ? (
         <section className="card mt-8 max-w-2xl" aria-labelledby="manual-h">
           <h2 id="manual-h" className="mb-1 text-lg font-bold">Record a cheque, cash or bank transfer</h2>
           <p className="mb-3 text-sm text-ink-700">Posted to the bank account and the member&apos;s account; the member gets a receipt by e-mail.</p>

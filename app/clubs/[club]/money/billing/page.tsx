@@ -13,6 +13,7 @@ import { currencyExponent, minorToDecimalString } from "@/lib/money";
 import { monthLabel } from "@/lib/ledger/months";
 import { DEFAULT_MONEY_SETTINGS, clubToday } from "@/lib/ledger/settings";
 import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Dues and billing" };
 
@@ -22,7 +23,7 @@ const CATEGORY_WORDS = { full: "Full member", student: "Student", family: "Famil
 export default async function BillingPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
   const { db, club, ability } = await requireClubContext(slug);
-  const canEdit = ability.can("update", "Rates");
+  const canEdit = can(ability, "update", "Rates");
   const plans = listDuesPlans(db, club.id);
   const assignments = listDuesAssignments(db, club.id);
   const runs = listBillingRuns(db, club.id);

@@ -12,6 +12,7 @@ import { reverseJournalEntry } from "@/lib/actions/money/reverse-entry";
 import { clubToday } from "@/lib/ledger/settings";
 import { requireClubContext } from "@/lib/server/club-context";
 import { ENTRY_KINDS } from "@/db/schema/money";
+import { can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Journal" };
 
@@ -24,7 +25,7 @@ const NOT_HERE = new Set(["card-payment", "card-refund", "payout-received"]);
 export default async function JournalPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
   const { db, club, ability } = await requireClubContext(slug);
-  const canPost = ability.can("create", "Ledger");
+  const canPost = can(ability, "create", "Ledger");
   const rows = listJournal(db, club.id).map((r) => ({
     ...r,
     kindLabel: KIND_WORDS[r.kind] ?? r.kind,
@@ -38,7 +39,7 @@ export default async function JournalPage({ params }: { params: Promise<{ club: 
       <PageHeader
         title="Journal"
         lead="Every posting, newest first. Entries are never edited: a correction is a reversing entry."
-        actions={ability.can("export", "Ledger") ? <a className="inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold" href={`/api/clubs/${club.slug}/money/journal?format=csv`}>Download every line (CSV)</a> : null}
+        actions={can(ability, "export", "Ledger") ? <a className="inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold" href={`/api/clubs/${club.slug}/money/journal?format=csv`}>Download every line (CSV)</a> : null}
       />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/journal`} />
       <Suspense fallback={<div className="h-64 animate-pulse rounded bg-sand-200" />}>

@@ -5,6 +5,7 @@ import { MoneyNav } from "@/components/money/money-nav";
 import { PageHeader } from "@/components/ui/page-header";
 import { listPayments } from "@/db/queries/money-payments";
 import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Payments" };
 
@@ -14,7 +15,7 @@ const METHOD = { card: "Card", cheque: "Cheque", cash: "Cash", transfer: "Bank t
 export default async function PaymentsPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
   const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Payment") && !ability.can("read", "Account")) notFound();
+  if (!can(ability, "read", "Payment") && !can(ability, "read", "Account")) notFound();
   const rows = listPayments(db, club.id).map((p) => ({ ...p, href: `/clubs/${club.slug}/money/members/${p.memberUserId}`, statusWord: STATUS[p.status] ?? p.status, methodWord: METHOD[p.method] ?? p.method, date: p.receivedOn ?? p.createdAt.slice(0, 10), net: p.amountMinor - p.feeMinor }));
   return (
     <>

@@ -1,18 +1,17 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { MoneyNav } from "@/components/money/money-nav";
 import { RateCalculator, type RateInputs } from "@/components/money/rate-calculator";
 import { PageHeader } from "@/components/ui/page-header";
 import { listRateProfiles } from "@/db/queries/money-billing";
 import { currencyExponent, minorToDecimalString } from "@/lib/money";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Hourly rates" };
 
 export default async function RatesPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Rates")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Rates"]);
   const exp = currencyExponent(club.currency);
   const major = (m: number) => minorToDecimalString(m, exp);
   const profiles: RateInputs[] = listRateProfiles(db, club.id).map((p) => ({
@@ -30,7 +29,7 @@ export default async function RatesPage({ params }: { params: Promise<{ club: st
     <>
       <PageHeader title="Hourly rates" lead="The break-even rate for an aircraft: fixed costs spread over the hours it flies, plus what each hour costs, plus the engine reserve (overhaul cost ÷ TBO). Each part is rounded to the cent before adding, so the table adds up." />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/rates`} />
-      <RateCalculator slug={club.slug} currency={club.currency} unit={club.unitSystem === "metric" ? "litre" : "gallon"} profiles={profiles} canSave={ability.can("update", "Rates")} />
+      <RateCalculator slug={club.slug} currency={club.currency} unit={club.unitSystem === "metric" ? "litre" : "gallon"} profiles={profiles} canSave={can(ability, "update", "Rates")} />
     </>
   );
 }

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
@@ -8,15 +7,14 @@ import { PageHeader } from "@/components/ui/page-header";
 import { listBankStatements } from "@/db/queries/money-reconcile";
 import { importBankStatement } from "@/lib/actions/money/import-bank-statement";
 import { lockedThrough } from "@/lib/ledger/post-entry";
-import { requireClubContext } from "@/lib/server/club-context";
-import { explainDenied } from "@/permissions";
+import { explainDenied, can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Bank reconciliation" };
 
 export default async function ReconciliationPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Reconciliation")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Reconciliation"]);
   const statements = listBankStatements(db, club.id);
   const locked = lockedThrough(db, club.id);
   const base = `/clubs/${club.slug}/money/reconciliation`;
@@ -48,7 +46,7 @@ export default async function ReconciliationPage({ params }: { params: Promise<{
       <section className="card mt-8 max-w-3xl" aria-labelledby="imp-h">
         <h2 id="imp-h" className="mb-1 text-lg font-bold">Import a bank statement</h2>
         <p className="mb-3 text-sm text-ink-700">OFX files carry their own balance and period. For CSV, say which columns hold what (by header name), and enter the closing balance printed on the statement. Lines already imported are skipped, and matching runs straight away.</p>
-        {ability.can("reconcile", "Reconciliation") ? (
+        {can(ability, "reconcile", "Reconciliation") ? (
           <ActionForm
             action={importBankStatement}
             slug={club.slug}

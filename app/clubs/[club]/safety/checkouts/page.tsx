@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { RecordCheckoutForm, RevokeCheckoutForm } from "@/components/safety/checkout-forms";
 import { SafetyLinks } from "@/components/safety/safety-links";
 import { PageHeader } from "@/components/ui/page-header";
@@ -7,20 +6,19 @@ import { listAudienceCandidates } from "@/db/queries/safety-bulletins";
 import { listCheckouts, listFleetTypeGroups } from "@/db/queries/safety-checkouts";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { isClubMember } from "@/lib/safety/audience";
-import { requireClubContext } from "@/lib/server/club-context";
-import { explainDenied } from "@/permissions";
+import { explainDenied, can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Checkouts" };
 
 export default async function CheckoutsPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<{ history?: string }> }) {
   const { club: slug } = await params;
   const sp = await searchParams;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Checkout")) notFound();
+  const { db, club, user, ability } = await authorizePage(slug, ["read", "Checkout"]);
   const showHistory = sp.history === "1";
   const rows = listCheckouts(db, club.id, { includeRevoked: showHistory });
-  const canRecord = ability.can("create", "Checkout");
-  const canRevoke = ability.can("update", "Checkout");
+  const canRecord = can(ability, "create", "Checkout");
+  const canRevoke = can(ability, "update", "Checkout");
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const members = canRecord
     ? listAudienceCandidates(db, club.id).filter((m) => isClubMember(m.roles) && m.userId !== user.id).map((m) => ({ userId: m.userId, label: m.name ? `${m.name} (${m.email})` : m.email }))

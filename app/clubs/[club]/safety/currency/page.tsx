@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { Suspense } from "react";
 import { CurrencyBoard } from "@/components/currency/currency-board";
 import { SendRemindersForm } from "@/components/currency/send-reminders-form";
@@ -7,14 +6,13 @@ import { SafetyLinks } from "@/components/safety/safety-links";
 import { PageHeader } from "@/components/ui/page-header";
 import { getCurrencyBoard } from "@/db/queries/currency";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Currency board" };
 
 export default async function CurrencyBoardPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "CurrencyBoard")) notFound();
+  const { db, club, user, ability } = await authorizePage(slug, ["read", "CurrencyBoard"]);
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   // Medicals appear as their expiry date only; class, exam and limitations never leave the member's own page.
   const rows = getCurrencyBoard(db, club, today).map((r) => ({ userId: r.userId, name: r.name ?? r.email, email: r.email, items: r.currency.items, next: r.currency.next, attention: r.currency.attention }));

@@ -7,6 +7,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { listOwnNamedReports, listReportsForOfficer, type ReportListRow } from "@/db/queries/safety-reports";
 import { requireClubContext } from "@/lib/server/club-context";
 import { canTriageReports } from "@/lib/safety/report-access";
+import { can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Safety reports" };
 
@@ -39,7 +40,7 @@ export default async function ReportsPage({ params, searchParams }: { params: Pr
   const sp = await searchParams;
   const { db, club, user, ability } = await requireClubContext(slug);
   const officer = canTriageReports(ability);
-  if (!officer && !ability.can("create", "SafetyReport")) notFound();
+  if (!officer && !can(ability, "create", "SafetyReport")) notFound();
   const rows = officer ? listReportsForOfficer(db, club.id) : listOwnNamedReports(db, club.id, user.id);
   const open = rows.filter((r) => r.status !== "closed");
   const closed = rows.filter((r) => r.status === "closed");
@@ -48,7 +49,7 @@ export default async function ReportsPage({ params, searchParams }: { params: Pr
       <PageHeader
         title={officer ? "Safety reports" : "My safety reports"}
         lead={officer ? "Every report filed in the club. Anonymous reports carry no link to who filed them." : "Reports you filed under your name. Anonymous reports are not linked to you and do not appear here."}
-        actions={ability.can("create", "SafetyReport") ? <Link href={`/clubs/${club.slug}/safety/reports/new`} className="inline-flex min-h-11 items-center rounded bg-fin-600 px-4 py-2 font-bold text-white no-underline hover:bg-fin-700">File a report</Link> : null}
+        actions={can(ability, "create", "SafetyReport") ? <Link href={`/clubs/${club.slug}/safety/reports/new`} className="inline-flex min-h-11 items-center rounded bg-fin-600 px-4 py-2 font-bold text-white no-underline hover:bg-fin-700">File a report</Link> : null}
       />
       <SafetyLinks slug={club.slug} ability={ability} userId={user.id} />
       {sp.filed === "anonymous" ? <p role="status" className="mb-4 rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">Filed anonymously. Thank you. It is not linked to you, so it will not appear in your list.</p> : null}

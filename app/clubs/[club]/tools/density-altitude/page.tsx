@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { buttonClass } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
@@ -7,8 +6,8 @@ import { SafetyCaution } from "@/components/ui/safety-caution";
 import { zodFieldErrors } from "@/lib/actions/create-action";
 import { densityAltitudeCaution } from "@/lib/bookings/density-caution";
 import { densityAltitude, inHgFromHpa, isaTemperatureC, pressureAltitude } from "@/lib/performance";
-import { requireClubContext } from "@/lib/server/club-context";
 import { densityToolMetricSchema, densityToolSchema, queryToObject } from "@/lib/validation/tools";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Pressure and density altitude" };
 export const dynamic = "force-dynamic";
@@ -17,8 +16,7 @@ const ft = (n: number) => `${Math.round(n).toLocaleString("en-US")} ft`;
 
 export default async function DensityAltitudePage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { club: slug } = await params;
-  const { club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Tools")) notFound();
+  const { club } = await authorizePage(slug, ["read", "Tools"]);
   const query = queryToObject(await searchParams);
   const metric = club.unitSystem === "metric";
   const submitted = query.fieldElevation !== undefined;

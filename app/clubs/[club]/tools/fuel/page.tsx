@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { CheckboxField } from "@/components/fleet/form-bits";
 import { buttonClass } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
@@ -7,8 +6,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { zodFieldErrors } from "@/lib/actions/create-action";
 import { planFuel, requiredReserveMinutes } from "@/lib/bookings/fuel-plan";
-import { requireClubContext } from "@/lib/server/club-context";
 import { fuelToolSchema, queryToObject } from "@/lib/validation/tools";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Fuel and reserve" };
 export const dynamic = "force-dynamic";
@@ -17,8 +16,7 @@ const fmt = (n: number, digits = 1) => n.toLocaleString("en-US", { maximumFracti
 
 export default async function FuelToolPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { club: slug } = await params;
-  const { club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Tools")) notFound();
+  const { club } = await authorizePage(slug, ["read", "Tools"]);
   const query = queryToObject(await searchParams);
   const unit = club.unitSystem === "metric" ? "L" : "US gal";
   const extra = club.settings.extraReserveMinutes;

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { LoadingFields } from "@/components/tools/loading-fields";
 import { LoadingResult } from "@/components/tools/loading-result";
 import { buttonClass } from "@/components/ui/button";
@@ -10,16 +9,15 @@ import { listAircraft } from "@/db/queries/fleet";
 import { getWeightBalanceProfile, listWeightBalanceProfiles, toLoadingProfile } from "@/db/queries/tools-wb";
 import { zodFieldErrors } from "@/lib/actions/create-action";
 import { computeLoading } from "@/lib/bookings/loading";
-import { requireClubContext } from "@/lib/server/club-context";
 import { queryToObject, quickLoadingSchema } from "@/lib/validation/tools";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Weight and balance" };
 export const dynamic = "force-dynamic";
 
 export default async function WeightBalanceToolPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Tools")) notFound();
+  const { db, club } = await authorizePage(slug, ["read", "Tools"]);
   const query = queryToObject(await searchParams);
   const withFigures = new Set(listWeightBalanceProfiles(db, club.id).map((p) => p.aircraftId));
   const fleet = listAircraft(db, club.id).filter((a) => withFigures.has(a.id));

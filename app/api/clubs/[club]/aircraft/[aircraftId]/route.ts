@@ -5,6 +5,7 @@ import { listNotices } from "@/db/queries/fleet-notices";
 import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
 import { listSquawks } from "@/db/queries/fleet-squawks";
 import { apiError, withClub } from "@/lib/server/api";
+import { can } from "@/permissions";
 
 export const dynamic = "force-dynamic";
 
@@ -20,7 +21,7 @@ export async function GET(_req: Request, { params }: { params: Promise<{ club: s
       record: { category: plane.category, classRating: plane.classRating, serialNumber: plane.serialNumber, year: plane.year, hourlyRateMinor: plane.hourlyRateMinor, currency: ctx.club.currency, engineTboHours: plane.engineTboHours, engineTimeSinceOverhaul: plane.engineTimeSinceOverhaul },
       squawks: listSquawks(ctx.db, ctx.club.id, { aircraftId: plane.id, limit: 50 }).map(({ reportedById: _r, closedById: _c, ...s }) => s),
       notices: listNotices(ctx.db, ctx.club.id, { aircraftId: plane.id, limit: 20 }),
-      flights: ctx.ability.can("read", "Flight") ? listFlights(ctx.db, ctx.club.id, { aircraftId: plane.id, limit: 20 }) : [],
+      flights: can(ctx.ability, "read", "Flight") ? listFlights(ctx.db, ctx.club.id, { aircraftId: plane.id, limit: 20 }) : [],
     });
   });
 }

@@ -3,7 +3,7 @@ import { getMemberDocument } from "@/db/queries/safety-documents";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { apiError, withClub } from "@/lib/server/api";
 import { documentJson } from "@/lib/safety/document-json";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 export const dynamic = "force-dynamic";
 
@@ -12,7 +12,7 @@ export async function GET(_req: Request, { params }: { params: Promise<{ club: s
   const { club, documentId } = await params;
   return withClub(club, null, (ctx) => {
     const doc = getMemberDocument(ctx.db, ctx.club.id, documentId);
-    if (!doc || !ctx.ability.can("read", own("MemberDocument", doc.userId))) return apiError("not_found", "Not found.");
+    if (!doc || !canOn(ctx.ability, "read", "MemberDocument", { userId: doc.userId })) return apiError("not_found", "Not found.");
     const today = isoDateInTimeZone(new Date(), ctx.club.timeZone);
     return NextResponse.json({ document: documentJson(ctx.club.slug, doc, today, ctx.club.settings.documentReminderDays) });
   });

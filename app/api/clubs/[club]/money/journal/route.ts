@@ -4,6 +4,7 @@ import { minorToDecimalString, currencyExponent } from "@/lib/money";
 import { toCsv } from "@/lib/ledger/csv-export";
 import { apiError, withClub } from "@/lib/server/api";
 import { isoDateField } from "@/lib/validation/money";
+import { can } from "@/permissions";
 
 export const dynamic = "force-dynamic";
 
@@ -21,7 +22,7 @@ export async function GET(req: Request, { params }: { params: Promise<{ club: st
       range[key] = parsed.data;
     }
     if (url.searchParams.get("format") !== "csv") return NextResponse.json({ currency: ctx.club.currency, entries: listJournal(ctx.db, ctx.club.id, range) });
-    if (!ctx.ability.can("export", "Ledger")) return apiError("forbidden", "Only a treasurer or club admin can export the journal.");
+    if (!can(ctx.ability, "export", "Ledger")) return apiError("forbidden", "Only a treasurer or club admin can export the journal.");
     const exp = currencyExponent(ctx.club.currency);
     const rows = journalLinesForExport(ctx.db, ctx.club.id, range);
     const csv = toCsv(

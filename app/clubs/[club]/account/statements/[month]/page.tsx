@@ -9,14 +9,14 @@ import { monthLabel } from "@/lib/ledger/months";
 import { statementFor } from "@/lib/ledger/statements";
 import { requireClubContext } from "@/lib/server/club-context";
 import { monthField } from "@/lib/validation/money";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "Statement" };
 
 export default async function MyStatementPage({ params }: { params: Promise<{ club: string; month: string }> }) {
   const { club: slug, month } = await params;
   const { db, club, user, ability } = await requireClubContext(slug);
-  if (!ability.can("read", own("Account", user.id))) notFound();
+  if (!canOn(ability, "read", "Account", { userId: user.id })) notFound();
   const parsed = monthField.safeParse(month);
   if (!parsed.success) notFound();
   const figures = statementFor(db, club.id, user.id, parsed.data);

@@ -8,16 +8,15 @@ import { getBooking } from "@/db/queries/bookings";
 import { getAircraft } from "@/db/queries/fleet";
 import { mayActOnBooking } from "@/lib/actions/bookings/booking-access";
 import { formatMoney } from "@/lib/money";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Check in" };
 export const dynamic = "force-dynamic";
 
 export default async function CheckInPage({ params }: { params: Promise<{ club: string; bookingId: string }> }) {
   const { club: slug, bookingId } = await params;
-  const ctx = await requireClubContext(slug);
-  const { db, club, ability } = ctx;
-  if (!ability.can("create", "Flight")) notFound();
+  const ctx = await authorizePage(slug, ["create", "Flight"]);
+  const { db, club } = ctx;
   const booking = getBooking(db, club.id, bookingId);
   if (!booking || !mayActOnBooking(ctx, booking)) notFound();
   const plane = getAircraft(db, club.id, booking.aircraftId);

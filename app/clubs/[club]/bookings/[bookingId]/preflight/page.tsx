@@ -12,16 +12,15 @@ import { getPreflightRecord, getPreflightTemplate, listPreflightRecords } from "
 import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
 import { mayActOnBooking } from "@/lib/actions/bookings/booking-access";
 import { formatLocalTime } from "@/lib/fleet/time";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Preflight" };
 export const dynamic = "force-dynamic";
 
 export default async function PreflightPage({ params }: { params: Promise<{ club: string; bookingId: string }> }) {
   const { club: slug, bookingId } = await params;
-  const ctx = await requireClubContext(slug);
-  const { db, club, ability } = ctx;
-  if (!ability.can("read", "Booking")) notFound();
+  const ctx = await authorizePage(slug, ["read", "Booking"]);
+  const { db, club } = ctx;
   const booking = getBooking(db, club.id, bookingId);
   if (!booking || !mayActOnBooking(ctx, booking)) notFound();
   const template = getPreflightTemplate(db, club.id, booking.aircraftId);

@@ -9,16 +9,15 @@ import { SafetyCaution } from "@/components/ui/safety-caution";
 import { getBooking } from "@/db/queries/bookings";
 import { getBookingLoading, getWeightBalanceProfile } from "@/db/queries/tools-wb";
 import { mayActOnBooking } from "@/lib/actions/bookings/booking-access";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Weight and balance" };
 export const dynamic = "force-dynamic";
 
 export default async function BookingWeightBalancePage({ params }: { params: Promise<{ club: string; bookingId: string }> }) {
   const { club: slug, bookingId } = await params;
-  const ctx = await requireClubContext(slug);
-  const { db, club, ability } = ctx;
-  if (!ability.can("read", "Tools")) notFound();
+  const ctx = await authorizePage(slug, ["read", "Tools"]);
+  const { db, club } = ctx;
   const booking = getBooking(db, club.id, bookingId);
   if (!booking || !mayActOnBooking(ctx, booking)) notFound();
   const profile = getWeightBalanceProfile(db, club.id, booking.aircraftId);

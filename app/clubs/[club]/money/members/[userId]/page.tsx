@@ -11,19 +11,19 @@ import { refundPayment } from "@/lib/actions/money/refund-payment";
 import { minorToDecimalString, currencyExponent } from "@/lib/money";
 import { clubToday } from "@/lib/ledger/settings";
 import { requireClubContext } from "@/lib/server/club-context";
-import { own } from "@/permissions";
+import { can, canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "Member account" };
 
 export default async function MemberAccountPage({ params }: { params: Promise<{ club: string; userId: string }> }) {
   const { club: slug, userId } = await params;
   const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", own("Account", userId))) notFound();
+  if (!canOn(ability, "read", "Account", { userId: userId })) notFound();
   const member = getMemberName(db, club.id, userId);
   if (!member) notFound();
   const data = getMemberAccount(db, club.id, userId, clubToday(club));
   const refundable = data.payments.filter((p) => p.method === "card" && (p.status === "succeeded" || p.status === "partially_refunded"));
-  const canRefund = ability.can("refund", "Payment");
+  const canRefund = can(ability, "refund", "Payment");
   const exp = currencyExponent(club.currency);
   return (
     <>

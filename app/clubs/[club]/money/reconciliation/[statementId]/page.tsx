@@ -5,15 +5,15 @@ import { MoneyNav } from "@/components/money/money-nav";
 import { ReconcileWorkspace } from "@/components/money/reconcile-workspace";
 import { PageHeader } from "@/components/ui/page-header";
 import { getReconciliationWorkspace, type ReconciliationWorkspace } from "@/db/queries/money-reconcile";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Reconcile a statement" };
 export const dynamic = "force-dynamic";
 
 export default async function StatementWorkspacePage({ params }: { params: Promise<{ club: string; statementId: string }> }) {
   const { club: slug, statementId } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Reconciliation")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Reconciliation"]);
   const workspace = getReconciliationWorkspace(db, club.id, statementId);
   if (!workspace) notFound();
   // The same plain JSON the live refresh fetches from the API.
@@ -23,7 +23,7 @@ export default async function StatementWorkspacePage({ params }: { params: Promi
     <>
       <PageHeader title={`Statement ${st.periodStart} to ${st.periodEnd}`} lead={<><Link href={`/clubs/${club.slug}/money/reconciliation`}>All statements</Link> · {st.fileName} · {st.lineCount} lines{st.skippedCount ? `, ${st.skippedCount} skipped as already imported` : ""}</>} />
       <MoneyNav slug={club.slug} ability={ability} />
-      {ability.can("reconcile", "Reconciliation") ? (
+      {can(ability, "reconcile", "Reconciliation") ? (
         <ReconcileWorkspace slug={club.slug} currency={club.currency} initial={initial} renderedAt={Date.now()} />
       ) : (
         <p className="text-ink-700">Only a treasurer can match lines and lock the period.</p>

@@ -12,17 +12,17 @@ import { listFleetTypeGroups } from "@/db/queries/safety-checkouts";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { deadlineState } from "@/lib/safety/acknowledgements";
 import { audienceLabel } from "@/lib/safety/labels";
-import { requireClubContext } from "@/lib/server/club-context";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Bulletin" };
 
 export default async function BulletinPage({ params, searchParams }: { params: Promise<{ club: string; bulletinId: string }>; searchParams: Promise<{ published?: string; saved?: string }> }) {
   const { club: slug, bulletinId } = await params;
   const sp = await searchParams;
-  const { db, club, user, membership, ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Bulletin")) notFound();
+  const { db, club, user, membership, ability } = await authorizePage(slug, ["read", "Bulletin"]);
   const bulletin = getBulletin(db, club.id, bulletinId);
-  const writer = ability.can("create", "Bulletin");
+  const writer = can(ability, "create", "Bulletin");
   if (!bulletin || (bulletin.status === "draft" && !writer)) notFound();
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const versions = listBulletinVersions(db, club.id, bulletin.seriesId).filter((v) => v.status === "published" || writer);
@@ -31,7 +31,7 @@ export default async function BulletinPage({ params, searchParams }: { params: P
   const current = published && !bulletin.supersededAt;
   const inAudience = isUserInAudience(db, club.id, bulletin, { userId: user.id, roles: membership.roles });
   const mine = published ? getAcknowledgement(db, club.id, bulletin.id, user.id) : undefined;
-  const stats = published && ability.can("readAcknowledgements", "Bulletin") ? bulletinAckStats(db, club.id, bulletin) : null;
+  const stats = published && can(ability, "readAcknowledgements", "Bulletin") ? bulletinAckStats(db, club.id, bulletin) : null;
   const deadline = deadlineState(bulletin.acknowledgeBy, today);
   const base = `/clubs/${club.slug}/safety`;
   return (
@@ -70,7 +70,7 @@ export default async function BulletinPage({ params, searchParams }: { params: P
               <p className="inline-flex items-center gap-2 font-bold text-go-800"><ShapeIcon shape="check" />You acknowledged this on {mine.acknowledgedAt.toISOString().slice(0, 10)}.</p>
             ) : !current ? (
               <p className="text-ink-700">This version has been replaced; acknowledge the newest version instead.</p>
-            ) : inAudience && ability.can("acknowledge", "Bulletin") ? (
+            ) : inAudience && can(ability, "acknowledge", "Bulletin") ? (
               <AcknowledgeForm slug={club.slug} bulletinId={bulletin.id} />
             ) : (
               <p className="text-ink-700">Addressed to {audienceLabel(bulletin.audience, bulletin.audienceTypeGroup).toLowerCase()}; you are not asked to acknowledge it.</p>
@@ -84,7 +84,7 @@ export default async function BulletinPage({ params, searchParams }: { params: P
       {!published && writer ? (
         <section className="card mb-6" aria-labelledby="edit-h">
           <h2 id="edit-h" className="mb-3 text-lg font-bold">Edit the draft</h2>
-          <BulletinForm slug={club.slug} typeGroups={listFleetTypeGroups(db, club.id)} canPublish={ability.can("publish", "Bulletin")} initial={bulletin} bulletinId={bulletin.id} today={today} />
+          <BulletinForm slug={club.slug} typeGroups={listFleetTypeGroups(db, club.id)} canPublish={can(ability, "publish", "Bulletin")} initial={bulletin} bulletinId={bulletin.id} today={today} />
         </section>
       ) : null}
       {stats ? (
@@ -93,8 +93,8 @@ export default async function BulletinPage({ params, searchParams }: { params: P
             slug={club.slug}
             bulletinId={bulletin.id}
             current={current}
-            canExport={ability.can("export", "Bulletin")}
-            canRemind={ability.can("publish", "Bulletin")}
+            canExport={can(ability, "export", "Bulletin")}
+            canRemind={can(ability, "publish", "Bulletin")}
             initial={{ ...stats, rows: stats.rows.map((r) => ({ ...r, acknowledgedAt: r.acknowledgedAt?.toISOString() ?? null })) }}
           />
         </div>

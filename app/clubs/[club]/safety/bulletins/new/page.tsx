@@ -7,16 +7,16 @@ import { getBulletin } from "@/db/queries/safety-bulletins";
 import { listFleetTypeGroups } from "@/db/queries/safety-checkouts";
 import { getReport } from "@/db/queries/safety-reports";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { requireClubContext } from "@/lib/server/club-context";
 import { canTriageReports } from "@/lib/safety/report-access";
+import { can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "New bulletin" };
 
 export default async function NewBulletinPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<{ revise?: string; fromReport?: string }> }) {
   const { club: slug } = await params;
   const sp = await searchParams;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("create", "Bulletin")) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["create", "Bulletin"]);
   let initial: Partial<BulletinFormValues> = {};
   let supersedesId: string | undefined;
   let sourceReportId: string | undefined;
@@ -46,7 +46,7 @@ export default async function NewBulletinPage({ params, searchParams }: { params
       <BulletinForm
         slug={club.slug}
         typeGroups={listFleetTypeGroups(db, club.id)}
-        canPublish={ability.can("publish", "Bulletin")}
+        canPublish={can(ability, "publish", "Bulletin")}
         initial={initial}
         supersedesId={supersedesId}
         sourceReportId={sourceReportId}

@@ -1,18 +1,16 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { ReportForm } from "@/components/safety/report-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { listClubAircraftChoices } from "@/db/queries/safety-reports";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "File a safety report" };
 
 export default async function NewReportPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("create", "SafetyReport")) notFound();
+  const { db, club } = await authorizePage(slug, ["create", "SafetyReport"]);
   return (
     <div className="max-w-5xl">
       <p className="mb-2 text-sm"><Link href={`/clubs/${club.slug}/safety`}>← Safety</Link></p>

@@ -9,7 +9,7 @@ import { getAircraft } from "@/db/queries/fleet";
 import { getPreflightTemplate } from "@/db/queries/tools-preflight";
 import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
 import { unitsOf } from "@/lib/bookings/loading";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Aircraft figures and checklist" };
 export const dynamic = "force-dynamic";
@@ -18,8 +18,7 @@ const corners = (pts: [number, number][] | null | undefined) => (pts ?? []).map(
 
 export default async function AircraftToolsSetupPage({ params }: { params: Promise<{ club: string; aircraftId: string }> }) {
   const { club: slug, aircraftId } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("update", "Aircraft")) notFound();
+  const { db, club } = await authorizePage(slug, ["update", "Aircraft"]);
   const plane = getAircraft(db, club.id, aircraftId);
   if (!plane || plane.retiredAt) notFound();
   const p = getWeightBalanceProfile(db, club.id, plane.id);

@@ -5,7 +5,7 @@ import { renderStatementPdf } from "@/lib/ledger/statement-pdf";
 import { statementFor } from "@/lib/ledger/statements";
 import { apiError, withClub } from "@/lib/server/api";
 import { monthField } from "@/lib/validation/money";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 export const dynamic = "force-dynamic";
 
@@ -14,7 +14,7 @@ export async function GET(_req: Request, { params }: { params: Promise<{ club: s
   const { club, userId, month } = await params;
   return withClub(club, null, async (ctx) => {
     // Someone else's statement is answered like a missing one.
-    if (!ctx.ability.can("read", own("Account", userId))) return apiError("not_found", "Not found.");
+    if (!canOn(ctx.ability, "read", "Account", { userId: userId })) return apiError("not_found", "Not found.");
     const parsed = monthField.safeParse(month);
     if (!parsed.success) return apiError("invalid", "Give the month as YYYY-MM.", { month: parsed.error.issues.map((i) => i.message) });
     const member = getMemberName(ctx.db, ctx.club.id, userId);

@@ -10,14 +10,14 @@ import { monthLabel } from "@/lib/ledger/months";
 import { statementFor } from "@/lib/ledger/statements";
 import { requireClubContext } from "@/lib/server/club-context";
 import { monthField } from "@/lib/validation/money";
-import { own } from "@/permissions";
+import { canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "Member statement" };
 
 export default async function MemberStatementPage({ params }: { params: Promise<{ club: string; userId: string; month: string }> }) {
   const { club: slug, userId, month } = await params;
   const { db, club, ability } = await requireClubContext(slug);
-  if (!ability.can("read", own("Account", userId))) notFound();
+  if (!canOn(ability, "read", "Account", { userId: userId })) notFound();
   const parsed = monthField.safeParse(month);
   const member = getMemberName(db, club.id, userId);
   if (!parsed.success || !member) notFound();
