@@ -26,18 +26,33 @@ export function requirePermission(ctx: Pick<ClubContext, "ability">, ...permissi
   if (!authorized(ctx, ...permissions)) notFound();
 }
 
-/** Pages: session → club → membership → ability → these permissions, or sign-in / the 404 page. */
-export async function authorizePage(slug: string, ...permissions: Permission[]): Promise<ClubContext> {
+/** A permission, or one built from the context (e.g. the signed-in person's own account). */
+export type PagePermission = Permission | ((ctx: ClubContext) => Permission);
+
+const resolve = (ctx: ClubContext, p: PagePermission): Permission => (typeof p === "function" ? p(ctx) : p);
+
+/**
+ * Pages: session → club → membership → ability → these permissions, or sign-in / the 404 page.
+ * With no permission at all the page is open to every person with a role in the club (say so
+ * beside the call). A record that depends on the URL is checked once it is read:
+ * `requirePermission(ctx, ["read", "Account", { userId }])`.
+ */
+export async function authorizePage(slug: string, ...permissions: PagePermission[]): Promise<ClubContext> {
   const ctx = await requireClubContext(slug);
-  requirePermission(ctx, ...permissions);
+  requirePermission(ctx, ...permissions.map((p) => resolve(ctx, p)));
   return ctx;
 }
 
 /** Pages where any one of several permissions lets the person in. */
-export async function authorizePageAny(slug: string, ...permissions: Permission[]): Promise<ClubContext> {
+export async function authorizePageAny(slug: string, ...permissions: PagePermission[]): Promise<ClubContext> {
   const ctx = await requireClubContext(slug);
-  if (!authorizedAny(ctx, ...permissions)) notFound();
+  if (!authorizedAny(ctx, ...permissions.map((p) => resolve(ctx, p)))) notFound();
   return ctx;
+}
+
+/** The signed-in person's own record of a type with conditions (their account, their currency). */
+export function ownRecord(action: Permission[0], type: Permission[1]): (ctx: ClubContext) => Permission {
+  return (ctx) => [action, type, { userId: ctx.user.id }];
 }
 
 /** Words for a refused type-level permission (buttons, API 403 bodies). */

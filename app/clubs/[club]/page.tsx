@@ -8,14 +8,14 @@ import { HomeBulletins } from "@/components/safety/home-bulletins";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 import { ROLE_LABELS, can, canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "Club home" };
 
 export default async function ClubHome({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, user, membership, ability } = await requireClubContext(slug);
+  const { db, club, user, membership, ability } = await authorizePage(slug); // every person with a role in the club; each tile checks its own permission
   const base = `/clubs/${club.slug}`;
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const tiles: { title: string; body?: string; href?: string; node?: ReactNode; show: boolean }[] = [

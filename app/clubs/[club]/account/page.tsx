@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { Suspense } from "react";
 import { AccountView } from "@/components/money/account-view";
 import { PayButton } from "@/components/money/pay-button";
@@ -7,15 +6,14 @@ import { PageHeader } from "@/components/ui/page-header";
 import { getMemberAccount } from "@/db/queries/money-accounts";
 import { formatMoney } from "@/lib/money";
 import { clubToday } from "@/lib/ledger/settings";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage, ownRecord } from "@/lib/server/authorize";
 import { canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "My account" };
 
 export default async function MyAccountPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!canOn(ability, "read", "Account", { userId: user.id })) notFound();
+  const { db, club, user, ability } = await authorizePage(slug, ownRecord("read", "Account"));
   const data = getMemberAccount(db, club.id, user.id, clubToday(club));
   const canPay = canOn(ability, "pay", "Account", { userId: user.id }) && data.balanceMinor >= 50;
   return (

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { ReviewMeterFlagForm } from "@/components/fleet/flight-forms";
 import { NoticeList } from "@/components/fleet/notice-list";
 import { SquawkList } from "@/components/fleet/squawk-list";
@@ -13,7 +12,7 @@ import { listUnreviewedFlags } from "@/db/queries/fleet-flights";
 import { listNotices } from "@/db/queries/fleet-notices";
 import { getFlightLine } from "@/db/queries/fleet-status";
 import { listSquawkEvents, listSquawks } from "@/db/queries/fleet-squawks";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePageAny } from "@/lib/server/authorize";
 import { can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Maintenance" };
@@ -22,8 +21,7 @@ export const dynamic = "force-dynamic";
 /** The maintenance work queue: squawks to triage and close, meter flags, items coming due. */
 export default async function MaintenancePage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!(can(ability, "triage", "Squawk") || can(ability, "record", "Inspection"))) notFound();
+  const { db, club, ability } = await authorizePageAny(slug, ["triage", "Squawk"], ["record", "Inspection"]);
   const base = `/clubs/${club.slug}`;
   const line = getFlightLine(db, club);
   const open = listSquawks(db, club.id, { status: "open", limit: 200 });

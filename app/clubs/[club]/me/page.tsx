@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { CurrencyList } from "@/components/currency/currency-list";
 import { DocumentForm } from "@/components/documents/document-form";
 import { DocumentsList } from "@/components/documents/documents-list";
@@ -11,15 +10,13 @@ import { getMemberCurrency } from "@/db/queries/currency";
 import { listCheckouts, listFleetTypeGroups, listOutsideFlights } from "@/db/queries/safety-checkouts";
 import { getCurrentMedical, getOwnBirthDate, listMemberDocuments } from "@/db/queries/safety-documents";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { requireClubContext } from "@/lib/server/club-context";
-import { canOn } from "@/permissions";
+import { authorizePage, ownRecord } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "My currency & documents" };
 
 export default async function MePage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!canOn(ability, "read", "Currency", { userId: user.id })) notFound();
+  const { db, club, user, ability } = await authorizePage(slug, ownRecord("read", "Currency"));
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const currency = getMemberCurrency(db, club, user.id, today);
   const docs = listMemberDocuments(db, club.id, user.id);

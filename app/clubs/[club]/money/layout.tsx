@@ -1,11 +1,10 @@
-import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 // The treasurer's area: only roles that read the club's ledger (treasurer, admin) come in.
+// A courtesy only: a layout renders beside its page, so every page checks its own permission.
 export default async function MoneyLayout({ children, params }: { children: ReactNode; params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { ability } = await requireClubContext(slug);
-  if (!ability.can("read", "Ledger")) notFound();
+  await authorizePage(slug, ["read", "Ledger"]);
   return <div className="max-w-6xl">{children}</div>;
 }

@@ -12,18 +12,19 @@ import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
 import { monthLabel, monthOf, shiftMonthKey } from "@/lib/ledger/months";
 import { lockedThrough } from "@/lib/ledger/post-entry";
 import { clubToday } from "@/lib/ledger/settings";
-import { requireClubContext } from "@/lib/server/club-context";
-import { explainDenied, can } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
+import { explainDenied, can, canAll } from "@/permissions";
 
 export const metadata: Metadata = { title: "Money" };
 
 export default async function MoneyOverview({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
+  // Checked here, not only in the layout: an RSC request can render this page without it.
+  const { db, club, ability } = await authorizePage(slug, ["read", "Ledger"]);
   const today = clubToday(club);
   const balances = accountBalances(db, club.id);
   const by = (code: string) => balances.find((b) => b.code === code)?.balanceMinor ?? 0;
-  const members = can(ability, "read", "Account") ? listMemberBalances(db, club.id, today) : [];
+  const members = canAll(ability, "read", "Account") ? listMemberBalances(db, club.id, today) : [];
   const owed = members.reduce((s, m) => s + Math.max(0, m.balanceMinor), 0);
   const arrears = members.filter((m) => m.inArrears);
   const problems = unbalancedEntries(db, club.id);

@@ -1,13 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PageHeader } from "@/components/ui/page-header";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage, ownRecord } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Payment cancelled" };
 
 export default async function CancelledPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { club } = await requireClubContext(slug);
+  const { club } = await authorizePage(slug, ownRecord("read", "Account"));
   return (
     <div className="max-w-2xl">
       <PageHeader title="No payment was made" />

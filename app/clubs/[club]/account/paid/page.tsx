@@ -6,8 +6,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { getPaymentBySession } from "@/db/queries/money-payments";
 import { memberBalance } from "@/lib/ledger/balances";
 import { syncCheckoutSession } from "@/lib/ledger/checkout-sync";
-import { requireClubContext } from "@/lib/server/club-context";
-import { canOn } from "@/permissions";
+import { authorizePage, ownRecord } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Payment" };
 export const dynamic = "force-dynamic";
@@ -15,8 +14,8 @@ export const dynamic = "force-dynamic";
 export default async function PaidPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<{ session?: string }> }) {
   const { club: slug } = await params;
   const { session } = await searchParams;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!canOn(ability, "read", "Account", { userId: user.id }) || !session) notFound();
+  const { db, club, user } = await authorizePage(slug, ownRecord("read", "Account"));
+  if (!session) notFound();
   let payment = getPaymentBySession(db, club.id, session);
   if (!payment || payment.memberUserId !== user.id) notFound();
   // Normally the signed webhook has already posted it; if it is late, ask the provider now.

@@ -15,7 +15,7 @@ export const metadata: Metadata = { title: "Receivables ageing" };
 
 export default async function AgeingPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await authorizePage(slug, ["read", "Account"]);
+  const { db, club, ability } = await authorizePage(slug, ["read", "Account", "all"]);
   const today = clubToday(club);
   const { rows, totals } = ageingByMember(db, club.id, today);
   return (

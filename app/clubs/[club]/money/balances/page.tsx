@@ -14,7 +14,7 @@ export const metadata: Metadata = { title: "Member balances" };
 
 export default async function BalancesPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await authorizePage(slug, ["read", "Account"]);
+  const { db, club, ability } = await authorizePage(slug, ["read", "Account", "all"]);
   const today = clubToday(club);
   const members = listMemberBalances(db, club.id, today);
   const rows = members.map((m) => ({ ...m, href: `/clubs/${club.slug}/money/members/${m.userId}`, arrearsWord: m.inArrears ? "In arrears" : "Up to date" }));

@@ -12,7 +12,7 @@ import { saveDuesPlan } from "@/lib/actions/money/save-dues-plan";
 import { currencyExponent, minorToDecimalString } from "@/lib/money";
 import { monthLabel } from "@/lib/ledger/months";
 import { DEFAULT_MONEY_SETTINGS, clubToday } from "@/lib/ledger/settings";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Dues and billing" };
@@ -22,7 +22,8 @@ const CATEGORY_WORDS = { full: "Full member", student: "Student", family: "Famil
 
 export default async function BillingPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
+  // Checked here, not only in the layout: an RSC request can render this page without it.
+  const { db, club, ability } = await authorizePage(slug, ["read", "Ledger"]);
   const canEdit = can(ability, "update", "Rates");
   const plans = listDuesPlans(db, club.id);
   const assignments = listDuesAssignments(db, club.id);

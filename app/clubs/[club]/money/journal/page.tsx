@@ -10,7 +10,7 @@ import { accountBalances, listJournal } from "@/db/queries/money-ledger";
 import { postAdjustment } from "@/lib/actions/money/post-adjustment";
 import { reverseJournalEntry } from "@/lib/actions/money/reverse-entry";
 import { clubToday } from "@/lib/ledger/settings";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 import { ENTRY_KINDS } from "@/db/schema/money";
 import { can } from "@/permissions";
 
@@ -24,7 +24,8 @@ const NOT_HERE = new Set(["card-payment", "card-refund", "payout-received"]);
 
 export default async function JournalPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
+  // Checked here, not only in the layout: an RSC request can render this page without it.
+  const { db, club, ability } = await authorizePage(slug, ["read", "Ledger"]);
   const canPost = can(ability, "create", "Ledger");
   const rows = listJournal(db, club.id).map((r) => ({
     ...r,
@@ -33,7 +34,8 @@ export default async function JournalPage({ params }: { params: Promise<{ club: 
     canReverse: canPost && !r.reversed && !r.reversesEntryId && !NOT_HERE.has(r.kind),
   }));
   const balances = accountBalances(db, club.id);
-  const members = listMemberBalances(db, club.id, clubToday(club));
+  // Only the names the adjustment form's select box needs, and only for those who may post.
+  const members = canPost ? listMemberBalances(db, club.id, clubToday(club)).map((m) => ({ userId: m.userId, name: m.name })) : [];
   return (
     <>
       <PageHeader

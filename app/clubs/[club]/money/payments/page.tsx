@@ -1,11 +1,9 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { PageHeader } from "@/components/ui/page-header";
 import { listPayments } from "@/db/queries/money-payments";
-import { requireClubContext } from "@/lib/server/club-context";
-import { can } from "@/permissions";
+import { authorizePageAny } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Payments" };
 
@@ -14,8 +12,8 @@ const METHOD = { card: "Card", cheque: "Cheque", cash: "Cash", transfer: "Bank t
 
 export default async function PaymentsPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!can(ability, "read", "Payment") && !can(ability, "read", "Account")) notFound();
+  // Every member's payments: the treasurer (read Payment) or whoever reads every account.
+  const { db, club, ability } = await authorizePageAny(slug, ["read", "Payment"], ["read", "Account", "all"]);
   const rows = listPayments(db, club.id).map((p) => ({ ...p, href: `/clubs/${club.slug}/money/members/${p.memberUserId}`, statusWord: STATUS[p.status] ?? p.status, methodWord: METHOD[p.method] ?? p.method, date: p.receivedOn ?? p.createdAt.slice(0, 10), net: p.amountMinor - p.feeMinor }));
   return (
     <>

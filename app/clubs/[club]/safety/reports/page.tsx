@@ -1,11 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { ReportStatusBadge } from "@/components/safety/status-shapes";
 import { SafetyLinks } from "@/components/safety/safety-links";
 import { PageHeader } from "@/components/ui/page-header";
 import { listOwnNamedReports, listReportsForOfficer, type ReportListRow } from "@/db/queries/safety-reports";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePageAny } from "@/lib/server/authorize";
 import { canTriageReports } from "@/lib/safety/report-access";
 import { can } from "@/permissions";
 
@@ -38,9 +37,8 @@ function ReportTable({ slug, rows, officer }: { slug: string; rows: ReportListRo
 export default async function ReportsPage({ params, searchParams }: { params: Promise<{ club: string }>; searchParams: Promise<{ filed?: string }> }) {
   const { club: slug } = await params;
   const sp = await searchParams;
-  const { db, club, user, ability } = await requireClubContext(slug);
+  const { db, club, user, ability } = await authorizePageAny(slug, ["triage", "SafetyReport"], ["create", "SafetyReport"]);
   const officer = canTriageReports(ability);
-  if (!officer && !can(ability, "create", "SafetyReport")) notFound();
   const rows = officer ? listReportsForOfficer(db, club.id) : listOwnNamedReports(db, club.id, user.id);
   const open = rows.filter((r) => r.status !== "closed");
   const closed = rows.filter((r) => r.status === "closed");

@@ -7,16 +7,14 @@ import { PageHeader } from "@/components/ui/page-header";
 import { emailStatement } from "@/lib/actions/money/email-statement";
 import { monthLabel } from "@/lib/ledger/months";
 import { statementFor } from "@/lib/ledger/statements";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage, ownRecord } from "@/lib/server/authorize";
 import { monthField } from "@/lib/validation/money";
-import { canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "Statement" };
 
 export default async function MyStatementPage({ params }: { params: Promise<{ club: string; month: string }> }) {
   const { club: slug, month } = await params;
-  const { db, club, user, ability } = await requireClubContext(slug);
-  if (!canOn(ability, "read", "Account", { userId: user.id })) notFound();
+  const { db, club, user } = await authorizePage(slug, ownRecord("read", "Account"));
   const parsed = monthField.safeParse(month);
   if (!parsed.success) notFound();
   const figures = statementFor(db, club.id, user.id, parsed.data);

@@ -10,15 +10,14 @@ import { getMemberAccount, getMemberName } from "@/db/queries/money-accounts";
 import { refundPayment } from "@/lib/actions/money/refund-payment";
 import { minorToDecimalString, currencyExponent } from "@/lib/money";
 import { clubToday } from "@/lib/ledger/settings";
-import { requireClubContext } from "@/lib/server/club-context";
-import { can, canOn } from "@/permissions";
+import { authorizePage } from "@/lib/server/authorize";
+import { can } from "@/permissions";
 
 export const metadata: Metadata = { title: "Member account" };
 
 export default async function MemberAccountPage({ params }: { params: Promise<{ club: string; userId: string }> }) {
   const { club: slug, userId } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!canOn(ability, "read", "Account", { userId: userId })) notFound();
+  const { db, club, ability } = await authorizePage(slug, ["read", "Account", { userId }]);
   const member = getMemberName(db, club.id, userId);
   if (!member) notFound();
   const data = getMemberAccount(db, club.id, userId, clubToday(club));

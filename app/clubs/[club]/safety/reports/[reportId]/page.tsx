@@ -9,14 +9,14 @@ import { getReport, getReporterName, listClubAircraftChoices, listReportEvents }
 import { FACTOR_LABELS, REPORT_STATUS_LABELS, type ContributingFactor } from "@/lib/safety/labels";
 import { canReadReport, canTriageReports } from "@/lib/safety/report-access";
 import { nextReportStatuses } from "@/lib/safety/report-states";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Safety report" };
 
 export default async function ReportPage({ params, searchParams }: { params: Promise<{ club: string; reportId: string }>; searchParams: Promise<{ filed?: string }> }) {
   const { club: slug, reportId } = await params;
   const sp = await searchParams;
-  const { db, club, ability } = await requireClubContext(slug);
+  const { db, club, ability } = await authorizePage(slug); // the report itself is checked below, once read
   const report = getReport(db, club.id, reportId);
   // Not readable is answered exactly like not there.
   if (!report || !canReadReport(ability, report)) notFound();

@@ -8,16 +8,14 @@ import { getMemberName } from "@/db/queries/money-accounts";
 import { emailStatement } from "@/lib/actions/money/email-statement";
 import { monthLabel } from "@/lib/ledger/months";
 import { statementFor } from "@/lib/ledger/statements";
-import { requireClubContext } from "@/lib/server/club-context";
+import { authorizePage } from "@/lib/server/authorize";
 import { monthField } from "@/lib/validation/money";
-import { canOn } from "@/permissions";
 
 export const metadata: Metadata = { title: "Member statement" };
 
 export default async function MemberStatementPage({ params }: { params: Promise<{ club: string; userId: string; month: string }> }) {
   const { club: slug, userId, month } = await params;
-  const { db, club, ability } = await requireClubContext(slug);
-  if (!canOn(ability, "read", "Account", { userId: userId })) notFound();
+  const { db, club } = await authorizePage(slug, ["read", "Account", { userId }]);
   const parsed = monthField.safeParse(month);
   const member = getMemberName(db, club.id, userId);
   if (!parsed.success || !member) notFound();
