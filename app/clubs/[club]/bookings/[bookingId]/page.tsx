@@ -13,6 +13,7 @@ import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
 import { listMembers } from "@/db/queries/members";
 import { listPreflightRecords } from "@/db/queries/tools-preflight";
 import { getBookingLoading } from "@/db/queries/tools-wb";
+import { visibleBookingWarnings } from "@/lib/bookings/warning-access";
 import { mayActOnBooking } from "@/lib/actions/bookings/booking-access";
 import { describeLateCheck, lateCancellation } from "@/lib/bookings/late-cancellation";
 import { isoDateInTimeZone } from "@/lib/dates";
@@ -42,6 +43,7 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
   if (!booking) notFound();
   const status = getAircraftStatusEntry(db, club, booking.aircraftId);
   const mayAct = mayActOnBooking(ctx, booking);
+  const warnings = visibleBookingWarnings(ctx.ability, ctx.user.id, booking);
   const loading = getBookingLoading(db, club.id, booking.id);
   const records = listPreflightRecords(db, club.id, booking.id);
   const base = `/clubs/${club.slug}/bookings/${booking.id}`;
@@ -69,8 +71,8 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
         ) : null}
         <SafetyCaution compact />
         {booking.purpose ? <p className="text-sm"><strong>Purpose:</strong> {booking.purpose}</p> : null}
-        {mayAct && booking.acceptedWarnings.length ? (
-          <div className="text-sm"><strong>Warnings read when booked:</strong><ul className="list-disc pl-5">{booking.acceptedWarnings.map((w) => <li key={w.guard}>{w.reason}</li>)}</ul></div>
+        {warnings.length ? (
+          <div className="text-sm"><strong>Warnings read when booked:</strong><ul className="list-disc pl-5">{warnings.map((w) => <li key={w.guard}>{w.reason}</li>)}</ul></div>
         ) : null}
         {booking.lateCancel ? <p className="text-sm font-bold text-sock-700">▲ Booked time was given back inside the club&apos;s {club.settings.lateCancellationHours}-hour late-cancellation window.</p> : null}
         {booking.status === "cancelled" ? <p className="text-sm">Cancelled {booking.cancelledAt ? formatLocalTime(booking.cancelledAt, tz) : ""}{booking.cancelReason ? `: ${booking.cancelReason}` : ""}.</p> : null}

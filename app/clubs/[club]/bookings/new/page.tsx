@@ -6,7 +6,7 @@ import { getFlightLine } from "@/db/queries/fleet-status";
 import { listMembers } from "@/db/queries/members";
 import { addDays, isIsoDate, isoDateInTimeZone } from "@/lib/dates";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
-import { explainDenied, can, canOn } from "@/permissions";
+import { explainDenied, can, canAll } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "New booking" };
@@ -23,7 +23,7 @@ export default async function NewBookingPage({ params, searchParams }: { params:
   const people = listMembers(db, club.id).filter((m) => m.status === "active" && !(m.roles.length === 1 && m.roles[0] === "mechanic"));
   // Instructors include the person booking: an instructor books a student with themselves aboard.
   const instructors = people.filter((m) => m.roles.includes("instructor")).map((m) => ({ id: m.userId, label: m.userId === user.id ? `${m.name ?? m.email} (you)` : m.name ?? m.email }));
-  const forOthers = canOn(ability, "update", "Booking", { userId: "__someone-else__" });
+  const forOthers = canAll(ability, "update", "Booking"); // instructors book for any member
   return (
     <div className="max-w-2xl">
       <PageHeader title="New booking" lead={`Times are ${club.name}'s own (${club.timeZone}). The booking is checked against the aircraft's records and yours.`} />

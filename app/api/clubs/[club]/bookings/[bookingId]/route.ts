@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { getBooking } from "@/db/queries/bookings";
+import { visibleBookingWarnings } from "@/lib/bookings/warning-access";
 import { apiError, withClub } from "@/lib/server/api";
 
 export const dynamic = "force-dynamic";
@@ -14,7 +15,7 @@ export async function GET(_request: Request, { params }: { params: Promise<{ clu
         id: b.id, aircraftId: b.aircraftId, registration: b.registration, status: b.status,
         startsAt: b.startsAt.toISOString(), endsAt: b.endsAt.toISOString(),
         member: b.memberName ?? b.memberEmail, instructor: b.instructorName, lateCancel: b.lateCancel,
-        acceptedWarnings: b.acceptedWarnings, flightId: b.flightId,
+        acceptedWarnings: visibleBookingWarnings(ctx.ability, ctx.user.id, b), flightId: b.flightId,
       },
     });
   });
