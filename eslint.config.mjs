@@ -10,4 +10,21 @@ export default tseslint.config(
       "no-console": "off",
     },
   },
+  {
+    // Permission questions go through permissions/authorize.ts (can / canAll / canOn, and
+    // lib/server/authorize.ts for pages): a plain ability.can(action, "Account") is true for
+    // every member because of the rule on their own account. The browser's <Allowed> hint is
+    // the one exception (components/ability-boundary.tsx); it never guards data.
+    files: ["app/**/*.{ts,tsx}", "lib/**/*.{ts,tsx}", "components/**/*.{ts,tsx}", "db/**/*.ts", "auth.ts", "middleware.ts"],
+    ignores: ["components/ability-boundary.tsx"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        {
+          selector: "CallExpression[callee.type='MemberExpression'][callee.property.name=/^(can|cannot|relevantRuleFor|rulesFor|possibleRulesFor)$/]",
+          message: "Ask permissions through can / canAll / canOn (permissions/authorize.ts) or authorizePage (lib/server/authorize.ts), never ability.can directly.",
+        },
+      ],
+    },
+  },
 );
