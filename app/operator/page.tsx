@@ -3,12 +3,12 @@ import { AssignAdminForm } from "@/components/operator/assign-admin-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { getDb } from "@/db/client";
 import { listOperatorClubSummaries } from "@/db/queries/operator";
-import { getSessionUser } from "@/lib/server/session";
+import { authorizeOperatorPage } from "@/lib/server/authorize";
 import { formatMoney } from "@/lib/money";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
 
 export default async function OperatorHome() {
-  const user = (await getSessionUser())!;
+  const user = await authorizeOperatorPage();
   const summaries = listOperatorClubSummaries(getDb(), user.id);
   return (
     <div>

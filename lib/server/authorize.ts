@@ -1,7 +1,8 @@
 import "server-only";
-import { notFound } from "next/navigation";
-import { allows, explainDenied, type Permission } from "@/permissions";
+import { notFound, redirect } from "next/navigation";
+import { allows, canUseOperatorConsole, explainDenied, type Permission } from "@/permissions";
 import { requireClubContext, type ClubContext } from "./club-context";
+import { getSessionUser, type SessionUser } from "./session";
 
 // Authorization where the data is read. Every page, route handler and server action checks its
 // own permission here (a layout renders beside its page and can be skipped by an RSC request, so
@@ -58,4 +59,15 @@ export function ownRecord(action: Permission[0], type: Permission[1]): (ctx: Clu
 /** Words for a refused type-level permission (buttons, API 403 bodies). */
 export function deniedReason(permission: Permission): string {
   return explainDenied(permission[0], permission[1]);
+}
+
+/**
+ * Operator console pages: the signed-in operator, checked in the page itself (the operator
+ * layout's check is a courtesy). Anyone else gets the 404 page; nobody signed in, sign-in.
+ */
+export async function authorizeOperatorPage(): Promise<SessionUser> {
+  const user = await getSessionUser();
+  if (!user) redirect("/sign-in?callbackUrl=/operator");
+  if (!canUseOperatorConsole({ userId: user.id, isOperator: user.platformRole === "operator", clubIds: [] })) notFound();
+  return user;
 }

@@ -8,11 +8,13 @@ import { GET as documentsOf } from "@/app/api/clubs/[club]/documents/route";
 import { GET as medicalOf } from "@/app/api/clubs/[club]/documents/medical/[userId]/route";
 import { GET as reportApi } from "@/app/api/clubs/[club]/safety/reports/[reportId]/route";
 import MePage from "@/app/clubs/[club]/me/page";
+import NewClubPage from "@/app/operator/clubs/new/page";
+import OperatorHome from "@/app/operator/page";
 import ReportPage from "@/app/clubs/[club]/safety/reports/[reportId]/page";
 import { safetyReports, users } from "@/db/schema";
 import { params, treeText } from "./authz-helpers";
 import { seedScenario } from "./bookings-helpers";
-import { clubBySlug, db, signInAs } from "./helpers";
+import { clubBySlug, db, expectRedirect, signInAs } from "./helpers";
 
 const CLUB = "lakeshore-aero";
 const MEMBER = "member@hangarline.test";
@@ -78,5 +80,19 @@ describe("a member's own records, and nobody else's", () => {
     expect(other.status).toBe(404);
     expect(await other.text()).toBe(await (await call("no-such-report")).text());
     await expect(ReportPage({ params: Promise.resolve({ club: CLUB, reportId: namedReport }), searchParams: Promise.resolve({}) })).rejects.toThrow("not found");
+  });
+});
+
+describe("operator console pages check the operator themselves", () => {
+  it("a club admin or member gets the 404 page, nobody signed in is sent to sign in", async () => {
+    for (const who of [MEMBER, "admin@hangarline.test"]) {
+      signInAs(who);
+      await expect(OperatorHome(), who).rejects.toThrow("not found");
+      await expect(NewClubPage(), who).rejects.toThrow("not found");
+    }
+    signInAs(null);
+    expect(await expectRedirect(() => OperatorHome())).toBe("/sign-in?callbackUrl=/operator");
+    signInAs("operator@hangarline.test");
+    await expect(OperatorHome()).resolves.toBeTruthy();
   });
 });

@@ -1,7 +1,9 @@
 import { CreateClubForm } from "@/components/operator/create-club-form";
 import { PageHeader } from "@/components/ui/page-header";
+import { authorizeOperatorPage } from "@/lib/server/authorize";
 
-export default function NewClubPage() {
+export default async function NewClubPage() {
+  await authorizeOperatorPage();
   return (
     <div className="max-w-xl">
       <PageHeader title="Create a club" lead="The club starts with default settings; its admin adjusts them." />
