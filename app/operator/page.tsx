@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { notFound, redirect } from "next/navigation";
 import { AssignAdminForm } from "@/components/operator/assign-admin-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { getDb } from "@/db/client";
@@ -8,8 +9,11 @@ import { formatMoney } from "@/lib/money";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
 
 export default async function OperatorHome() {
-  const user = (await getSessionUser())!;
-  const summaries = listOperatorClubSummaries(getDb(), user.id);
+  // Checked here, not only in the layout: a layout renders beside its page, never in front of it.
+  const user = await getSessionUser();
+  if (!user) redirect("/sign-in?callbackUrl=/operator");
+  if (user.platformRole !== "operator") notFound();
+  const summaries = listOperatorClubSummaries(getDb(), user);
   return (
     <div>
       <PageHeader title="Clubs you administer" lead={`${summaries.length} clubs. Totals only: member-level detail stays with each club.`} actions={<Link href="/operator/clubs/new">Create a club</Link>} />

@@ -1,7 +1,9 @@
 import { createHash, timingSafeEqual } from "node:crypto";
 import { NextResponse } from "next/server";
+import { getDb } from "@/db/client";
+import { kickOutbox } from "@/lib/email/runner";
+import { composeSafetyDigests } from "@/lib/email/safety-digest";
 import { apiError } from "@/lib/server/api";
-import { runScheduledTick } from "@/lib/email/runner";
 
 export const dynamic = "force-dynamic";
 
@@ -17,6 +19,7 @@ export async function POST(request: Request) {
   if (!secret) return apiError("not_found", "Not found.");
   const given = (request.headers.get("authorization") ?? "").replace(/^Bearer\s+/i, "");
   if (!given || !timingSafeEqual(digest(given), digest(secret))) return apiError("unauthenticated", "A valid scheduler token is required.");
-  const result = runScheduledTick();
+  const result = composeSafetyDigests(getDb());
+  if (result.messages > 0) kickOutbox();
   return NextResponse.json({ ok: true, digests: result });
 }
