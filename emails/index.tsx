@@ -10,6 +10,7 @@ import { DocumentExpiryEmail, type DocumentExpiryProps } from "./document-expiry
 import { StatementEmail, type StatementEmailProps } from "./statement";
 import { ReceiptEmail, type ReceiptEmailProps } from "./receipt";
 import { DuesReminderEmail, type DuesReminderEmailProps } from "./dues-reminder";
+import { SafetyDigestEmail, type SafetyDigestProps } from "./safety-digest";
 
 // Every template the outbox can send, by name. A row stores the name and the props; the worker
 // renders when it sends, so a template fix applies to messages still waiting.
@@ -24,6 +25,7 @@ export type EmailTemplates = {
   statement: StatementEmailProps;
   receipt: ReceiptEmailProps;
   "dues-reminder": DuesReminderEmailProps;
+  "safety-digest": SafetyDigestProps;
 };
 export type EmailTemplateName = keyof EmailTemplates;
 
@@ -38,6 +40,7 @@ const components: { [K in EmailTemplateName]: (props: EmailTemplates[K]) => Reac
   statement: (p) => <StatementEmail {...p} />,
   receipt: (p) => <ReceiptEmail {...p} />,
   "dues-reminder": (p) => <DuesReminderEmail {...p} />,
+  "safety-digest": (p) => <SafetyDigestEmail {...p} />,
 };
 
 export function isEmailTemplateName(name: string): name is EmailTemplateName {

@@ -9,7 +9,7 @@ import { STATUS_WORDS } from "@/lib/fleet/status-words";
 
 export default async function OperatorHome() {
   const user = await authorizeOperatorPage();
-  const summaries = listOperatorClubSummaries(getDb(), user.id);
+  const summaries = listOperatorClubSummaries(getDb(), user);
   return (
     <div>
       <PageHeader title="Clubs you administer" lead={`${summaries.length} clubs. Totals only: member-level detail stays with each club.`} actions={<Link href="/operator/clubs/new">Create a club</Link>} />

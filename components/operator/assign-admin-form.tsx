@@ -11,10 +11,10 @@ export function AssignAdminForm({ clubId, clubName }: { clubId: string; clubName
     <form action={action} noValidate aria-label={`Appoint an admin for ${clubName}`} className="mt-3">
       <FormMessage state={state} />
       <input type="hidden" name="clubId" value={clubId} />
-      <label className="field-label" htmlFor={`admin-${clubId}`}>Appoint an admin (e-mail)</label>
+      <label className="field-label" htmlFor={`admin-${clubId}`}>Invite an admin (e-mail)</label>
       <div className="flex flex-wrap gap-2">
         <input id={`admin-${clubId}`} name="adminEmail" type="email" className="field-input min-w-0 flex-1" />
-        <SubmitButton variant="secondary">Appoint</SubmitButton>
+        <SubmitButton variant="secondary">Send invitation</SubmitButton>
       </div>
       {state.fieldErrors.adminEmail ? <p className="field-error">{state.fieldErrors.adminEmail.join(" ")}</p> : null}
     </form>

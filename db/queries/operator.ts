@@ -14,9 +14,14 @@ export type ClubSummary = {
   receivables: { totalMinor: number; over30Minor: number; over90Minor: number };
 };
 
-/** Counts only: an operator sees no member-level detail. */
-export function listOperatorClubSummaries(db: Db, operatorId: string): ClubSummary[] {
-  const ids = listOperatorClubIds(db, operatorId);
+/**
+ * Counts and totals only: an operator sees no member-level detail (no names, addresses, balances
+ * of a person, bookings or reports), and only for the clubs assigned to them. Anyone who is not
+ * an operator gets nothing.
+ */
+export function listOperatorClubSummaries(db: Db, operator: { id: string; platformRole: "operator" | null }): ClubSummary[] {
+  if (operator.platformRole !== "operator") return [];
+  const ids = listOperatorClubIds(db, operator.id);
   const list = listClubsByIds(db, ids);
   if (list.length === 0) return [];
   const members = db

@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, desc, eq, isNull } from "drizzle-orm";
+import { and, asc, desc, eq, gte, isNull, lt, sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
-import { aircraft, bulletins, safetyReportEvents, safetyReports, users, type SafetyReport } from "@/db/schema";
+import { aircraft, bulletins, clubs, emailOutbox, safetyReportEvents, safetyReports, users, type SafetyReport } from "@/db/schema";
 
 type Reader = Db | Tx;
 
@@ -23,7 +23,8 @@ function listWhere(db: Reader, where: ReturnType<typeof and>): ReportListRow[] {
     .from(safetyReports)
     .leftJoin(aircraft, and(eq(aircraft.id, safetyReports.aircraftId), eq(aircraft.clubId, safetyReports.clubId)))
     .where(where)
-    .orderBy(desc(safetyReports.createdAt))
+    // The random id breaks ties: rows of one day never line up in the order they were filed.
+    .orderBy(desc(safetyReports.createdAt), asc(safetyReports.id))
     .all();
 }
 
@@ -74,4 +75,35 @@ export function listClubAircraftChoices(db: Reader, clubId: string): { id: strin
 
 export function getClubAircraft(db: Reader, clubId: string, aircraftId: string) {
   return db.select({ id: aircraft.id, registration: aircraft.registration }).from(aircraft).where(and(eq(aircraft.clubId, clubId), eq(aircraft.id, aircraftId))).get();
+}
+
+/** The outbox template of the officers' daily digest; its rows are how the digest remembers what it covered. */
+export const SAFETY_DIGEST_TEMPLATE = "safety-digest" as const;
+
+/** The last club day a digest covered (from the digest rows in the outbox), or null before the first. */
+export function lastDigestCoveredDay(db: Reader, clubId: string): string | null {
+  const row = db
+    .select({ day: sql<string | null>`max(json_extract(${emailOutbox.payload}, '$.toDay'))` })
+    .from(emailOutbox)
+    .where(and(eq(emailOutbox.clubId, clubId), eq(emailOutbox.template, SAFETY_DIGEST_TEMPLATE)))
+    .get();
+  return row?.day ?? null;
+}
+
+/**
+ * Reports received in [from, until): ids and kinds only, ordered by the random id so that a
+ * list of them says nothing about the order in which they arrived.
+ */
+export function listReportsReceivedBetween(db: Reader, clubId: string, from: Date, until: Date): { id: string; anonymous: boolean; occurredOn: string }[] {
+  return db
+    .select({ id: safetyReports.id, anonymous: safetyReports.anonymous, occurredOn: safetyReports.occurredOn })
+    .from(safetyReports)
+    .where(and(eq(safetyReports.clubId, clubId), gte(safetyReports.createdAt, from), lt(safetyReports.createdAt, until)))
+    .orderBy(asc(safetyReports.id))
+    .all();
+}
+
+/** Clubs the digest runs for. */
+export function listDigestClubs(db: Reader): { id: string; slug: string; name: string; timeZone: string }[] {
+  return db.select({ id: clubs.id, slug: clubs.slug, name: clubs.name, timeZone: clubs.timeZone }).from(clubs).where(isNull(clubs.archivedAt)).orderBy(asc(clubs.slug)).all();
 }

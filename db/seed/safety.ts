@@ -12,6 +12,7 @@ import {
 import { newId } from "@/db/schema/columns";
 import { flightReviewDue, medicalExpiry } from "@/lib/currency";
 import { addDays, formatIsoDate, isoDateInTimeZone, parseIsoDate, shiftMonth } from "@/lib/dates";
+import { startOfClubDay } from "@/lib/safety/report-digest";
 import type { SeededFoundation } from "./foundation";
 
 const DAY = 86_400_000;
@@ -72,7 +73,7 @@ function seedLakeshoreBulletins(tx: Tx, clubId: string, u: Ids, today: string) {
   });
 }
 
-function seedLakeshoreReports(tx: Tx, clubId: string, u: Ids, today: string, plane: string | undefined) {
+function seedLakeshoreReports(tx: Tx, clubId: string, u: Ids, today: string, plane: string | undefined, timeZone: string) {
   const named = newId();
   tx.insert(safetyReports).values({
     id: named, clubId, reporterId: u["member@hangarline.test"]!, anonymous: false, occurredOn: addDays(today, -6), occurredTime: "16:40",
@@ -81,8 +82,8 @@ function seedLakeshoreReports(tx: Tx, clubId: string, u: Ids, today: string, pla
     contributingFactors: ["communication", "procedures"], factorsNote: "The fuel pit has no hold line painted on the truck's side.", status: "reviewing", createdAt: ago(6), updatedAt: ago(5),
   }).run();
   tx.insert(safetyReportEvents).values({ clubId, reportId: named, actorId: u["safety@hangarline.test"]!, kind: "status", fromStatus: "received", toStatus: "reviewing", note: "Talked to the fuel supplier; asked the field owner about a hold line.", createdAt: ago(5), updatedAt: ago(5) }).run();
-  // Anonymous: no reporter column value at all, and the instant rounded to the day.
-  const day = new Date(Date.UTC(ago(2).getUTCFullYear(), ago(2).getUTCMonth(), ago(2).getUTCDate()));
+  // Anonymous: no reporter column value at all, and the instant is the start of the club day it arrived on.
+  const day = startOfClubDay(addDays(today, -2), timeZone);
   tx.insert(safetyReports).values({
     clubId, anonymous: true, occurredOn: addDays(today, -2), location: "Lakeshore Field (X01), tie-down row C",
     whatHappened: "The fuel sample from the left sump showed water twice before it ran clear. The previous pilot had logged no fuel. I kept draining until it was clean and flew, but I think the cap seal may let rain in.",
@@ -189,7 +190,7 @@ export function seedSafety(db: Db, foundation: SeededFoundation): void {
       const today = isoDateInTimeZone(new Date(), lake.timeZone);
       const plane = tx.select({ id: aircraft.id }).from(aircraft).where(and(eq(aircraft.clubId, lake.id), eq(aircraft.typeGroup, "Kestrel K160"))).get()?.id;
       seedLakeshoreBulletins(tx, lake.id, userIds, today);
-      seedLakeshoreReports(tx, lake.id, userIds, today, plane);
+      seedLakeshoreReports(tx, lake.id, userIds, today, plane, lake.timeZone);
       seedLakeshorePeople(tx, lake.id, userIds, today);
       seedLakeshoreCheckouts(tx, lake.id, userIds, today);
     }

@@ -8,7 +8,13 @@ export type EnqueueInput<K extends EmailTemplateName> = {
   subject: string;
   template: K;
   payload: EmailTemplates[K];
+  /** Compose the row at this instant instead of now (a scheduled batch is stamped with its batch time). */
+  at?: Date;
 };
+
+function stamps(at: Date | undefined) {
+  return at ? { createdAt: at, updatedAt: at, nextAttemptAt: at } : {};
+}
 
 /** Writes the message as a row inside the caller's transaction; the worker sends it later. */
 export function enqueueEmail<K extends EmailTemplateName>(tx: Tx | Db, input: EnqueueInput<K>): string {
@@ -20,6 +26,7 @@ export function enqueueEmail<K extends EmailTemplateName>(tx: Tx | Db, input: En
       subject: input.subject,
       template: input.template,
       payload: input.payload as Record<string, unknown>,
+      ...stamps(input.at),
     })
     .returning({ id: emailOutbox.id })
     .all();
@@ -35,6 +42,7 @@ export function enqueueEmails<K extends EmailTemplateName>(tx: Tx | Db, inputs: 
     subject: input.subject,
     template: input.template,
     payload: input.payload as Record<string, unknown>,
+    ...stamps(input.at),
   }));
   // SQLite limits bound parameters per statement; insert in slices.
   for (let i = 0; i < rows.length; i += 200) tx.insert(emailOutbox).values(rows.slice(i, i + 200)).run();

@@ -1,11 +1,12 @@
 import { AsyncResource } from "node:async_hooks";
 import { getDb } from "@/db/client";
 import { createEmailProvider, type EmailProvider } from "./provider";
+import { composeSafetyDigests, type DigestTickResult } from "./safety-digest";
 import { drainOutbox } from "./worker";
 
 // The in-process worker: started once by instrumentation.ts, and nudged right after a message is
 // queued so that a sign-in link does not wait for the next tick.
-const state = globalThis as unknown as { __outbox?: { provider: EmailProvider; running: Promise<void> | null; again: boolean; timer?: NodeJS.Timeout; scope?: AsyncResource } };
+const state = globalThis as unknown as { __outbox?: { provider: EmailProvider; running: Promise<void> | null; again: boolean; timer?: NodeJS.Timeout; digestTimer?: NodeJS.Timeout; scope?: AsyncResource } };
 
 function getState() {
   state.__outbox ??= { provider: createEmailProvider(), running: null, again: false };
@@ -37,12 +38,32 @@ function drainNow(): void {
     });
 }
 
-export function startOutboxWorker(intervalMs = Number(process.env.OUTBOX_INTERVAL_MS ?? 2000)): void {
+/**
+ * The scheduled tick: queues any safety digest whose batch time has passed, then drains. Safe to
+ * call as often as wanted (the in-process timer, a cron route or a script): a batch is composed once.
+ */
+export function runScheduledTick(now = new Date()): DigestTickResult {
+  let result: DigestTickResult = { clubs: 0, messages: 0 };
+  try {
+    result = composeSafetyDigests(getDb(), now);
+  } catch (error) {
+    console.error("[outbox] scheduled tick failed", error instanceof Error ? error.message : "unknown error");
+  }
+  if (result.messages > 0) kickOutbox();
+  return result;
+}
+
+export function startOutboxWorker(intervalMs = Number(process.env.OUTBOX_INTERVAL_MS ?? 2000), digestIntervalMs = Number(process.env.SCHEDULED_TICK_INTERVAL_MS ?? 60_000)): void {
   const s = getState();
   if (s.timer) return;
   // Created at start-up, outside any request: drains run in this scope, not a request's.
   s.scope = new AsyncResource("hangarline-outbox");
   s.timer = setInterval(() => s.scope!.runInAsyncScope(drainNow), intervalMs);
   s.timer.unref();
+  if (process.env.SCHEDULED_TICK !== "off") {
+    s.digestTimer = setInterval(() => s.scope!.runInAsyncScope(() => void runScheduledTick()), digestIntervalMs);
+    s.digestTimer.unref();
+    s.scope.runInAsyncScope(() => void runScheduledTick());
+  }
   drainNow();
 }

@@ -79,7 +79,7 @@ describe("a member's own records, and nobody else's", () => {
     const other = await call(namedReport);
     expect(other.status).toBe(404);
     expect(await other.text()).toBe(await (await call("no-such-report")).text());
-    await expect(ReportPage({ params: Promise.resolve({ club: CLUB, reportId: namedReport }), searchParams: Promise.resolve({}) })).rejects.toThrow("not found");
+    await expect(ReportPage({ params: Promise.resolve({ club: CLUB, reportId: namedReport }) })).rejects.toThrow("not found");
   });
 });
 

@@ -1,10 +1,14 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { and, eq } from "drizzle-orm";
-import { auditLog, clubs, invitations, operatorAssignments } from "@/db/schema";
+import { GET as membersRoute } from "@/app/api/clubs/[club]/members/route";
+import MembersPage from "@/app/clubs/[club]/members/page";
+import { auditLog, clubs, invitations, memberships, operatorAssignments, users } from "@/db/schema";
+import { acceptInvitation } from "@/lib/actions/invitations/accept-invitation";
+import { resolveClubContext } from "@/lib/server/club-context";
 import { createClub } from "@/lib/actions/operator/create-club";
 import { assignClubAdmin } from "@/lib/actions/operator/assign-admin";
 import { listOperatorClubSummaries } from "@/db/queries/operator";
-import { EMPTY, clubBySlug, db, form, membershipOf, outboxFor, seedOnce, signInAs } from "./helpers";
+import { EMPTY, clubBySlug, db, expectRedirect, form, membershipOf, outboxFor, seedOnce, signInAs } from "./helpers";
 
 const newClub = { name: "Juniper Ridge Flyers", slug: "juniper-ridge", timeZone: "America/Denver", currency: "USD", unitSystem: "imperial" };
 
@@ -15,14 +19,41 @@ describe("operator console", () => {
 
   it("summarises each club with counts and totals only, no member-level detail", () => {
     const operator = signInAs("operator@hangarline.test")!;
-    const summaries = listOperatorClubSummaries(db(), operator.id);
+    const summaries = listOperatorClubSummaries(db(), operator);
     expect(summaries.map((s) => s.slug).sort()).toEqual(["aeroclub-silberau", "cottonwood-flyers", "lakeshore-aero"]);
     for (const s of summaries) {
+      // Club facts, then numbers only: no list of people anywhere in the shape.
+      expect(Object.keys(s).sort()).toEqual(["activeMembers", "admins", "currency", "fleet", "id", "name", "receivables", "slug", "timeZone", "unitSystem"]);
       expect(Object.keys(s.fleet).sort()).toEqual(["flyable", "grounded", "limited", "unknown"]);
-      expect(Number.isInteger(s.receivables.totalMinor)).toBe(true);
+      expect(Object.keys(s.receivables).sort()).toEqual(["over30Minor", "over90Minor", "totalMinor"]);
+      for (const n of [s.activeMembers, s.admins, ...Object.values(s.fleet), ...Object.values(s.receivables)]) expect(Number.isInteger(n)).toBe(true);
+      expect(s.activeMembers).toBeGreaterThan(0);
     }
     const text = JSON.stringify(summaries);
-    expect(text).not.toMatch(/@hangarline\.test|Rowan|Pike/);
+    for (const u of db().select({ id: users.id, email: users.email, name: users.name }).from(users).all()) {
+      expect(text).not.toContain(u.id);
+      expect(text).not.toContain(u.email);
+      if (u.name) expect(text).not.toContain(u.name);
+    }
+  });
+
+  it("gives anyone who is not an operator no summaries at all", () => {
+    const admin = signInAs("admin@hangarline.test")!;
+    expect(listOperatorClubSummaries(db(), admin)).toEqual([]);
+    // Even with assignments, a person without the operator role sees nothing.
+    expect(listOperatorClubSummaries(db(), { id: signInAs("operator@hangarline.test")!.id, platformRole: null })).toEqual([]);
+  });
+
+  it("an operator holds no membership in the demo and reads none of a club's member-level pages", async () => {
+    const operator = signInAs("operator@hangarline.test")!;
+    expect(db().select().from(memberships).where(eq(memberships.userId, operator.id)).all()).toEqual([]);
+    for (const slug of ["lakeshore-aero", "cottonwood-flyers", "aeroclub-silberau"]) {
+      expect(await resolveClubContext(slug)).toEqual({ ok: false, code: "not_found" });
+      const res = await membersRoute(new Request(`http://app.test/api/clubs/${slug}/members`), { params: Promise.resolve({ club: slug }) });
+      expect(res.status).toBe(404);
+      expect(await res.text()).not.toMatch(/@hangarline\.test/);
+      await expect(MembersPage({ params: Promise.resolve({ club: slug }), searchParams: Promise.resolve({}) } as never)).rejects.toThrow("not found");
+    }
   });
 
   it("an operator creates a club and its first admin is invited through the outbox", async () => {
@@ -48,12 +79,56 @@ describe("operator console", () => {
     expect(db().select().from(clubs).all().length).toBe(before);
   });
 
-  it("appoints an existing account as admin directly", async () => {
+  it("refuses an operator who names themselves, with a clear message, and creates nothing", async () => {
+    const operator = signInAs("operator@hangarline.test")!;
+    const club = clubBySlug("juniper-ridge");
+    const invitationsBefore = db().select().from(invitations).all().length;
+    const self = await assignClubAdmin(EMPTY, form({ clubId: club.id, adminEmail: "Operator@Hangarline.test" }));
+    expect(self.ok).toBe(false);
+    expect(self.message).toMatch(/cannot appoint yourself/);
+    expect(self.fieldErrors.adminEmail?.[0]).toMatch(/not your own/);
+    const clubsBefore = db().select().from(clubs).all().length;
+    const created = await createClub(EMPTY, form({ ...newClub, slug: "self-run-club", adminEmail: operator.email }));
+    expect(created.ok).toBe(false);
+    expect(created.message).toMatch(/cannot appoint yourself/);
+    expect(db().select().from(clubs).all().length).toBe(clubsBefore);
+    expect(db().select().from(invitations).all().length).toBe(invitationsBefore);
+    expect(db().select().from(memberships).where(eq(memberships.userId, operator.id)).all()).toEqual([]);
+  });
+
+  it("appointing an existing account sends an invitation only; the role exists once the appointee accepts", async () => {
     signInAs("operator@hangarline.test");
     const club = clubBySlug("juniper-ridge");
+    const sentBefore = outboxFor("member@hangarline.test").length;
     const state = await assignClubAdmin(EMPTY, form({ clubId: club.id, adminEmail: "member@hangarline.test" }));
-    expect(state.ok).toBe(true);
-    expect(membershipOf("member@hangarline.test", "juniper-ridge")?.roles).toEqual(["member", "admin"]);
+    expect(state).toMatchObject({ ok: true });
+    expect(state.message).toMatch(/invited/);
+    expect(membershipOf("member@hangarline.test", "juniper-ridge")).toBeUndefined();
+    const inv = db().select().from(invitations).where(and(eq(invitations.clubId, club.id), eq(invitations.email, "member@hangarline.test"))).get()!;
+    expect(inv).toMatchObject({ roles: ["member", "admin"], acceptedAt: null, revokedAt: null });
+    const mail = outboxFor("member@hangarline.test").slice(sentBefore);
+    expect(mail.map((m) => m.template)).toEqual(["invitation"]);
+    const token = /\/invitations\/([^/?]+)/.exec((mail[0]!.payload as { url: string }).url)![1]!;
+    // Someone else cannot take it up.
+    signInAs("pilot2@hangarline.test");
+    expect((await acceptInvitation(EMPTY, form({ token }))).ok).toBe(false);
+    expect(membershipOf("member@hangarline.test", "juniper-ridge")).toBeUndefined();
+    signInAs("member@hangarline.test");
+    await expectRedirect(() => acceptInvitation(EMPTY, form({ token })));
+    expect(membershipOf("member@hangarline.test", "juniper-ridge")).toMatchObject({ status: "active", roles: ["member", "admin"] });
+  });
+
+  it("an operator who appoints an admin of an existing club grants nothing before acceptance", async () => {
+    signInAs("operator@hangarline.test");
+    const lakeshore = clubBySlug("lakeshore-aero");
+    const before = membershipOf("pilot2@hangarline.test", "lakeshore-aero")!;
+    expect(before.roles).not.toContain("admin");
+    expect((await assignClubAdmin(EMPTY, form({ clubId: lakeshore.id, adminEmail: "pilot2@hangarline.test" }))).ok).toBe(true);
+    expect(membershipOf("pilot2@hangarline.test", "lakeshore-aero")!.roles).toEqual(before.roles);
+    // An address that already holds the admin role is told so.
+    const again = await assignClubAdmin(EMPTY, form({ clubId: lakeshore.id, adminEmail: "admin@hangarline.test" }));
+    expect(again.ok).toBe(false);
+    expect(again.message).toMatch(/already an admin/);
   });
 
   it("a club admin who is not an operator can neither create clubs nor appoint admins", async () => {

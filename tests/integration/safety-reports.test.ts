@@ -1,11 +1,13 @@
-import { beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
 import { eq } from "drizzle-orm";
 import { GET as reportRoute } from "@/app/api/clubs/[club]/safety/reports/[reportId]/route";
-import { auditLog, emailOutbox, groundingNotices, safetyReportEvents, safetyReports, users } from "@/db/schema";
+import { emailOutbox, groundingNotices, safetyReportEvents, safetyReports, users } from "@/db/schema";
 import { listOwnNamedReports } from "@/db/queries/safety-reports";
 import { fileReport } from "@/lib/actions/safety/file-report";
 import { groundFromReport } from "@/lib/actions/safety/ground-from-report";
 import { triageReport } from "@/lib/actions/safety/triage-report";
+import { isoDateInTimeZone } from "@/lib/dates";
+import { startOfClubDay } from "@/lib/safety/report-digest";
 import { EMPTY, clubBySlug, db, expectRedirect, form, signInAs } from "./helpers";
 import { callRoute, planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
@@ -17,6 +19,22 @@ function reportForm(extra: Record<string, string | string[]> = {}) {
 }
 
 const userId = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;
+/** Rows in every table of the database, by table name. */
+function tableCounts(): Record<string, number> {
+  const tables = (db().$client.prepare("select name from sqlite_master where type = 'table' and name not like 'sqlite_%'").all() as { name: string }[]).map((t) => t.name);
+  return Object.fromEntries(tables.map((t) => [t, (db().$client.prepare(`select count(*) as n from "${t}"`).get() as { n: number }).n]));
+}
+
+/** Everything an action answers: where it redirects, or the state it returns. */
+async function answerOf(run: () => Promise<unknown>): Promise<unknown> {
+  try {
+    return { state: await run() };
+  } catch (error) {
+    if (error instanceof Error && error.message.startsWith("redirect:")) return { redirect: error.message.slice("redirect:".length) };
+    throw error;
+  }
+}
+
 const read = (reportId: string, club = CLUB) => callRoute(reportRoute, `/api/clubs/${club}/safety/reports/${reportId}`, { club, reportId });
 
 describe("confidential safety reports", () => {
@@ -27,29 +45,47 @@ describe("confidential safety reports", () => {
     await seedFleetOnce();
   });
 
-  it("an anonymous report stores no reporter at all, and nothing else that names the filer", async () => {
+  it("an anonymous report stores no reporter at all, and filing it creates nothing else", async () => {
     signInAs("member@hangarline.test");
-    const auditBefore = db().select().from(auditLog).all().length;
+    const club = clubBySlug(CLUB);
+    const before = tableCounts();
+    const spies = (["log", "info", "warn", "error", "debug"] as const).map((m) => vi.spyOn(console, m).mockImplementation(() => undefined));
     const to = await expectRedirect(() => fileReport(EMPTY, reportForm({ anonymous: "on" })));
-    expect(to).toBe(`/clubs/${CLUB}/safety/reports?filed=anonymous`);
+    for (const spy of spies) expect(spy).not.toHaveBeenCalled();
+    spies.forEach((spy) => spy.mockRestore());
+    expect(to).toBe(`/clubs/${CLUB}/safety/reports?filed=1`);
+    // Only the report itself is written: no outbox row, audit row, upload, event or anything else.
+    const after = tableCounts();
+    expect(Object.keys(after).filter((t) => after[t] !== before[t])).toEqual(["safety_reports"]);
+    expect(after.safety_reports).toBe(before.safety_reports! + 1);
     const row = db().select().from(safetyReports).all().find((r) => r.whatHappened === story && r.anonymous)!;
     anonymousId = row.id;
     // The column holds no value — checked in the raw table, not through the app's types.
-    const raw = db().$client.prepare("select reporter_id from safety_reports where id = ?").get(row.id) as { reporter_id: string | null };
+    const raw = db().$client.prepare("select reporter_id, created_at, updated_at from safety_reports where id = ?").get(row.id) as { reporter_id: string | null; created_at: number; updated_at: number };
     expect(raw.reporter_id).toBeNull();
-    expect(row.createdAt.getUTCHours() + row.createdAt.getUTCMinutes() + row.createdAt.getUTCSeconds() + row.createdAt.getUTCMilliseconds()).toBe(0);
+    // Its only time is the first instant of the club day it was filed on.
+    const dayStart = startOfClubDay(isoDateInTimeZone(new Date(), club.timeZone), club.timeZone).getTime();
+    expect([raw.created_at, raw.updated_at]).toEqual([dayStart, dayStart]);
     const columns = (db().$client.prepare("pragma table_info(safety_reports)").all() as { name: string }[]).map((c) => c.name);
     expect(columns.filter((c) => /ip|agent|session/i.test(c))).toEqual([]);
-    // No audit row, no e-mail and no event carries the filer.
     const me = userId("member@hangarline.test");
-    expect(db().select().from(auditLog).all().length).toBe(auditBefore);
-    const notices = db().select().from(emailOutbox).where(eq(emailOutbox.subject, "A safety report was filed")).all();
-    expect(notices.map((n) => n.toAddress)).toEqual(["safety@hangarline.test"]);
-    expect(JSON.stringify(notices)).not.toMatch(/member@hangarline|Rowan|Pike/);
     expect(JSON.stringify(db().select().from(safetyReportEvents).all())).not.toContain(me);
     // The database refuses to attach a reporter to an anonymous report later.
     expect(() => db().$client.prepare("update safety_reports set reporter_id = ? where id = ?").run(me, row.id)).toThrow(/stores no reporter/);
     expect(() => db().$client.prepare("update safety_reports set anonymous = 0 where id = ?").run(row.id)).toThrow(/stores no reporter/);
+  });
+
+  it("the filer gets the same answer for a named and an anonymous report; only the named one tells the officers at once", async () => {
+    signInAs("member@hangarline.test");
+    const anonymousAnswer = await answerOf(() => fileReport(EMPTY, reportForm({ anonymous: "on", location: "Wash rack" })));
+    const outboxBefore = db().select().from(emailOutbox).all().length;
+    const namedAnswer = await answerOf(() => fileReport(EMPTY, reportForm({ location: "Wash rack" })));
+    expect(namedAnswer).toEqual(anonymousAnswer);
+    expect(anonymousAnswer).toEqual({ redirect: `/clubs/${CLUB}/safety/reports?filed=1` });
+    const notices = db().select().from(emailOutbox).all().slice(outboxBefore);
+    expect(notices.map((n) => [n.toAddress, n.subject])).toEqual([["safety@hangarline.test", "A named safety report was filed"]]);
+    // The named notice says nothing of anonymous reports, nor who filed it.
+    expect(JSON.stringify(notices)).not.toMatch(/anonym|member@hangarline|Rowan|Pike/i);
   });
 
   it("an anonymous report is unreadable by its filer and by club admins; the safety officer reads it", async () => {
@@ -66,8 +102,8 @@ describe("confidential safety reports", () => {
 
   it("a named report is readable by its reporter and the safety officer only", async () => {
     signInAs("member@hangarline.test");
-    const to = await expectRedirect(() => fileReport(EMPTY, reportForm({ location: "Taxiway B" })));
-    namedId = /\/reports\/([^?]+)/.exec(to)![1]!;
+    await expectRedirect(() => fileReport(EMPTY, reportForm({ location: "Taxiway B" })));
+    namedId = db().select().from(safetyReports).where(eq(safetyReports.location, "Taxiway B")).get()!.id;
     expect(db().select().from(safetyReports).where(eq(safetyReports.id, namedId)).get()!.reporterId).toBe(userId("member@hangarline.test"));
     expect((await read(namedId)).status).toBe(200);
     signInAs("pilot2@hangarline.test");

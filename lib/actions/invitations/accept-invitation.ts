@@ -40,7 +40,9 @@ export const acceptInvitation = userAction({
     const existing = tx.select().from(memberships).where(and(eq(memberships.clubId, invitation.clubId), eq(memberships.userId, userId))).get();
     let membershipId: string;
     if (existing) {
-      const roles = [...new Set([...existing.roles, ...invitation.roles])];
+      const merged = [...new Set([...existing.roles, ...invitation.roles])];
+      // "mechanic" is records access for outsiders and never combines with club roles.
+      const roles = merged.length > 1 ? merged.filter((r) => r !== "mechanic") : merged;
       tx.update(memberships).set({ roles, status: "active", deactivatedAt: null }).where(eq(memberships.id, existing.id)).run();
       membershipId = existing.id;
     } else {

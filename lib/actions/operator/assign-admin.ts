@@ -14,12 +14,12 @@ export const assignClubAdmin = userAction({
   requireUser: true,
   permission: (user, input, db) =>
     Boolean(user) && canAdministerClub({ userId: user!.id, isOperator: user!.platformRole === "operator", clubIds: listOperatorClubIds(db, user!.id) }, input.clubId),
-  success: "Admin appointed.",
+  success: "Invitation sent.",
   run(tx, user, input) {
     const club = tx.select().from(clubs).where(eq(clubs.id, input.clubId)).get();
     if (!club || !user) throw new ActionError("That club was not found.", {}, "not_found");
-    const how = appointAdmin(tx, club, input.adminEmail, user);
-    return { message: how === "invited" ? `${input.adminEmail} has been invited as an admin.` : `${input.adminEmail} is now an admin.`, revalidate: ["/operator"] };
+    appointAdmin(tx, club, input.adminEmail, user);
+    return { message: `${input.adminEmail} has been invited as an admin of ${club.name}; they become one when they accept.`, revalidate: ["/operator"] };
   },
   after: () => kickOutbox(),
 });

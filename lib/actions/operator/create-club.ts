@@ -27,9 +27,10 @@ export const createClub = userAction({
     if (!club) throw new Error("Club insert returned no row");
     tx.insert(operatorAssignments).values({ userId: user.id, clubId: club.id }).run();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "club.create", subjectType: "Club", subjectId: club.id, after: { name: club.name, slug: club.slug, timeZone: club.timeZone, currency: club.currency, unitSystem: club.unitSystem } });
-    const how = appointAdmin(tx, club, input.adminEmail, user);
+    // Refuses the operator's own address; the thrown error rolls the whole club back.
+    appointAdmin(tx, club, input.adminEmail, user);
     return {
-      message: how === "invited" ? `Club created; ${input.adminEmail} has been invited as its admin.` : `Club created; ${input.adminEmail} is its admin.`,
+      message: `Club created; ${input.adminEmail} has been invited as its admin and becomes one on accepting.`,
       revalidate: ["/operator"],
       data: { slug: club.slug },
     };

@@ -6,7 +6,7 @@ export default async function NewClubPage() {
   await authorizeOperatorPage();
   return (
     <div className="max-w-xl">
-      <PageHeader title="Create a club" lead="The club starts with default settings; its admin adjusts them." />
+      <PageHeader title="Create a club" lead="The club starts with default settings. Its admin is invited by e-mail and takes over on accepting; you cannot name yourself." />
       <div className="card"><CreateClubForm /></div>
     </div>
   );

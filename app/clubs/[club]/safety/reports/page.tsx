@@ -7,6 +7,7 @@ import { listOwnNamedReports, listReportsForOfficer, type ReportListRow } from "
 import { authorizePageAny } from "@/lib/server/authorize";
 import { canTriageReports } from "@/lib/safety/report-access";
 import { can } from "@/permissions";
+import { REPORT_FILED_MESSAGE } from "@/lib/safety/report-filed";
 
 export const metadata: Metadata = { title: "Safety reports" };
 
@@ -50,7 +51,8 @@ export default async function ReportsPage({ params, searchParams }: { params: Pr
         actions={can(ability, "create", "SafetyReport") ? <Link href={`/clubs/${club.slug}/safety/reports/new`} className="inline-flex min-h-11 items-center rounded bg-fin-600 px-4 py-2 font-bold text-white no-underline hover:bg-fin-700">File a report</Link> : null}
       />
       <SafetyLinks slug={club.slug} ability={ability} userId={user.id} />
-      {sp.filed === "anonymous" ? <p role="status" className="mb-4 rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">Filed anonymously. Thank you. It is not linked to you, so it will not appear in your list.</p> : null}
+      {/* One answer for every filer: it must not say which kind of report was filed. */}
+      {sp.filed ? <p role="status" className="mb-4 rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">{REPORT_FILED_MESSAGE} Reports filed under your name are listed here; anonymous reports are not linked to you and never appear.</p> : null}
       <section aria-labelledby="open-h" className="mb-6">
         <h2 id="open-h" className="mb-2 text-lg font-bold">Open ({open.length})</h2>
         <ReportTable slug={club.slug} rows={open} officer={officer} />

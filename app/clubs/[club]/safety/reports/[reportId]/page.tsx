@@ -10,12 +10,12 @@ import { FACTOR_LABELS, REPORT_STATUS_LABELS, type ContributingFactor } from "@/
 import { canReadReport, canTriageReports } from "@/lib/safety/report-access";
 import { nextReportStatuses } from "@/lib/safety/report-states";
 import { authorizePage } from "@/lib/server/authorize";
+import { isoDateInTimeZone } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Safety report" };
 
-export default async function ReportPage({ params, searchParams }: { params: Promise<{ club: string; reportId: string }>; searchParams: Promise<{ filed?: string }> }) {
+export default async function ReportPage({ params }: { params: Promise<{ club: string; reportId: string }> }) {
   const { club: slug, reportId } = await params;
-  const sp = await searchParams;
   const { db, club, ability } = await authorizePage(slug); // the report itself is checked below, once read
   const report = getReport(db, club.id, reportId);
   // Not readable is answered exactly like not there.
@@ -27,7 +27,6 @@ export default async function ReportPage({ params, searchParams }: { params: Pro
   return (
     <div className="max-w-5xl">
       <p className="mb-2 text-sm"><Link href={`${base}/reports`}>← Reports</Link></p>
-      {sp.filed ? <p role="status" className="mb-4 rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">Report filed. Thank you. The safety officer has been told.</p> : null}
       <PageHeader title={`Safety report of ${report.occurredOn}`} lead={<span className="inline-flex flex-wrap items-center gap-2"><ReportStatusBadge status={report.status} /> {report.anonymous ? "Filed anonymously — no link to the reporter is stored." : `Filed by ${getReporterName(db, club.id, report) ?? "a member"}.`}</span>} />
       <article className="card mb-6">
         <dl className="mb-4 grid gap-x-6 gap-y-2 sm:grid-cols-3">
@@ -55,7 +54,8 @@ export default async function ReportPage({ params, searchParams }: { params: Pro
           <section className="card min-w-0 lg:col-span-2" aria-labelledby="history-h">
             <h2 id="history-h" className="mb-2 text-lg font-bold">History</h2>
             <ol className="flex flex-col gap-2 text-sm">
-              <li>{report.createdAt.toISOString().slice(0, 10)} · Received</li>
+              {/* The day only, in the club's calendar: an anonymous report keeps nothing finer. */}
+              <li>{isoDateInTimeZone(report.createdAt, club.timeZone)} · Received</li>
               {events.map((e) => (
                 <li key={e.id} className="break-words">
                   {e.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC · {e.actorName ?? "Safety officer"} ·{" "}
