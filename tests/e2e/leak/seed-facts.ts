@@ -26,6 +26,8 @@ export type Viewer = {
 export type Marker = {
   category: string;
   text: string;
+  /** A stricter test once `text` is found (e.g. a number in a JSON value position). */
+  re?: RegExp;
   /** Whose fact it is (a user id), when it belongs to a person. */
   ownerId: string | null;
   ownerName: string;
@@ -56,6 +58,16 @@ const isSelf = (v: Viewer, userId: string | null) => userId !== null && v.userId
 export const MONEY_PATH = /\/money(\/|$)|\/statements\/|\/account(\/|$)/;
 export const LEDGER_AREA = /\/money(\/|$)/;
 
+/** A number as a JSON value: after ":" / "," / "[", not part of a longer number. */
+function jsonNumber(n: number): RegExp {
+  return new RegExp(`[:,\\[]\\s*${String(n).replace("-", "\\-")}(?![\\d.])`);
+}
+
+/** An e-mail address standing alone (admin@… is not found inside cottonwood.admin@…). */
+export function emailPattern(email: string): RegExp {
+  return new RegExp(`(?<![\\w.+-])${email.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}`, "i");
+}
+
 export function readSeedFacts(dbFile: string): SeedFacts {
   const db = new Database(dbFile, { readonly: true, fileMustExist: true });
   const all = <T = Row>(sql: string, ...args: unknown[]) => db.prepare(sql).all(...args) as T[];
@@ -79,8 +91,8 @@ export function readSeedFacts(dbFile: string): SeedFacts {
   // ---- ids for the dynamic segments ---------------------------------------------------------
   const userByEmail = (email: string) => [...users.values()].find((u) => u.email === email)?.id;
   const idUsers = () => {
-    // Someone else's (with money, medical and a lapsed review), someone with medical limitations, the plain demo member.
-    const picks = [userByEmail("pilot2@hangarline.test"), userByEmail("instructor@hangarline.test"), userByEmail("member@hangarline.test")];
+    // Someone who is none of the signed-in roles (money, a lapsed medical and review), and one with medical limitations.
+    const picks = [userByEmail("pilot2@hangarline.test"), userByEmail("instructor@hangarline.test")];
     return picks.filter((x): x is string => Boolean(x && memberIds.has(x)));
   };
   const ids: Record<string, () => string[]> = {
@@ -93,7 +105,7 @@ export function readSeedFacts(dbFile: string): SeedFacts {
     bookingId: () => {
       // Bookings with accepted warnings (someone else's private reasons) first, then one plain one.
       const rows = all<{ id: string; userId: string; w: string }>("select id, user_id as userId, accepted_warnings as w from bookings where club_id = ? order by created_at desc", clubId);
-      const warned = rows.filter((r) => r.w !== "[]").slice(0, 2).map((r) => r.id);
+      const warned = rows.filter((r) => r.w !== "[]").slice(0, 1).map((r) => r.id);
       const plain = rows.find((r) => r.w === "[]")?.id;
       return [...warned, ...(plain ? [plain] : [])];
     },
@@ -108,7 +120,7 @@ export function readSeedFacts(dbFile: string): SeedFacts {
       for (const r of rows) if (!byOwner.has(r.userId)) byOwner.set(r.userId, r.id);
       return othersFirst([...byOwner.keys()]).slice(0, 2).map((u) => byOwner.get(u)!);
     },
-    aircraftId: () => all<{ id: string }>("select id from aircraft where club_id = ? order by registration limit 2", clubId).map((r) => r.id),
+    aircraftId: () => all<{ id: string }>("select id from aircraft where club_id = ? order by registration limit 1", clubId).map((r) => r.id),
     squawkId: () => all<{ id: string }>("select id from squawks where club_id = ? order by created_at limit 1", clubId).map((r) => r.id),
     bulletinId: () => {
       const pub = get<{ id: string }>("select id from bulletins where club_id = ? and status = 'published' order by created_at desc limit 1", clubId)?.id;
@@ -147,10 +159,13 @@ export function readSeedFacts(dbFile: string): SeedFacts {
   for (const b of balances) {
     if (Math.abs(b.bal) < 1000) continue; // under ten units: too common a figure to mean anything
     add({ category: "balance", text: money(b.bal), ownerId: b.userId, ownerName: nameOf(b.userId), allowed: accountAllowed(b.userId) });
+    // The same figure as data handed to a client component (minor units in the RSC payload).
+    add({ category: "balance (minor units)", text: String(b.bal), re: jsonNumber(b.bal), ownerId: b.userId, ownerName: nameOf(b.userId), allowed: accountAllowed(b.userId) });
   }
   for (const s of all<{ userId: string; closing: number; period: string }>("select member_user_id as userId, closing_minor as closing, period_start as period from statements where club_id = ?", clubId)) {
     if (Math.abs(s.closing) < 1000) continue;
     add({ category: `statement ${s.period.slice(0, 7)} closing balance`, text: money(s.closing), ownerId: s.userId, ownerName: nameOf(s.userId), allowed: accountAllowed(s.userId) });
+    add({ category: `statement ${s.period.slice(0, 7)} closing balance (minor units)`, text: String(s.closing), re: jsonNumber(s.closing), ownerId: s.userId, ownerName: nameOf(s.userId), allowed: accountAllowed(s.userId) });
   }
 
   // The club's receivables in total: the ledger roles and the club's operator (counts and totals only).
@@ -169,7 +184,7 @@ export function readSeedFacts(dbFile: string): SeedFacts {
 
   // Journal descriptions (ledger roles only); the viewer's own entries' descriptions are theirs to see.
   for (const e of all<{ memo: string; userId: string | null }>("select distinct memo, member_user_id as userId from journal_entries where club_id = ?", clubId)) {
-    if (e.memo.length < 12) continue;
+    if (e.memo.length < 16) continue; // "Card payment" and the like are words of the interface too
     add({ category: "journal description", text: e.memo, ownerId: e.userId, ownerName: nameOf(e.userId), allowed: (v) => isSelf(v, e.userId) || can(v, "read", "Ledger") });
   }
   for (const l of all<{ description: string }>("select distinct description from bank_lines where club_id = ?", clubId)) {
@@ -226,7 +241,7 @@ export function readSeedFacts(dbFile: string): SeedFacts {
         const u = users.get(m.userId);
         if (!u || actors.has(u.id)) continue;
         for (const text of [u.name, u.email]) {
-          add({ category: "a name beside an anonymous report", text, ownerId: u.id, ownerName: u.name, allowed: (v) => isSelf(v, u.id), scope: (p) => p.includes(r.id) });
+          add({ category: "a name beside an anonymous report", text, re: text === u.email ? emailPattern(text) : undefined, ownerId: u.id, ownerName: u.name, allowed: (v) => isSelf(v, u.id), scope: (p) => p.includes(r.id) });
         }
       }
     }
@@ -237,22 +252,23 @@ export function readSeedFacts(dbFile: string): SeedFacts {
     const u = users.get(m.userId);
     if (!u) continue;
     for (const text of [u.name, u.email]) {
-      add({ category: "a member of the club (seen from outside it)", text, ownerId: u.id, ownerName: u.name, allowed: (v) => v.roles !== null || v.knows.has(u.id) });
+      add({ category: "a member of the club (seen from outside it)", text, re: text === u.email ? emailPattern(text) : undefined, ownerId: u.id, ownerName: u.name, allowed: (v) => v.roles !== null || v.knows.has(u.id) });
     }
   }
 
+  const both = (out: Set<string>, minor: number) => out.add(money(minor)).add(String(minor));
   const viewerLegitAmounts = (userId: string | null) => {
     const out = new Set<string>();
-    for (const p of all<{ a: number }>("select amount_minor as a from dues_plans where club_id = ?", clubId)) out.add(money(p.a));
+    for (const p of all<{ a: number }>("select amount_minor as a from dues_plans where club_id = ?", clubId)) both(out, p.a);
     if (!userId) return out;
     for (const l of all<{ d: number; c: number }>(
       `select jl.debit_minor as d, jl.credit_minor as c from journal_lines jl join ledger_accounts la on la.id = jl.account_id where la.club_id = ? and la.member_user_id = ?`, clubId, userId,
-    )) out.add(money(l.d || l.c));
+    )) both(out, l.d || l.c);
     for (const s of all<{ o: number; ch: number; cr: number; cl: number }>("select opening_minor as o, charges_minor as ch, credits_minor as cr, closing_minor as cl from statements where club_id = ? and member_user_id = ?", clubId, userId)) {
-      for (const a of [s.o, s.ch, s.cr, s.cl]) out.add(money(a));
+      for (const a of [s.o, s.ch, s.cr, s.cl]) both(out, a);
     }
     const own = balances.find((b) => b.userId === userId);
-    if (own) out.add(money(own.bal));
+    if (own) both(out, own.bal);
     return out;
   };
   const viewerOwnMemos = (userId: string | null) =>
