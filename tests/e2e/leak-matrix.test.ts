@@ -14,7 +14,7 @@ import { CLUB_SLUG, readSeedFacts, viewerFor, type Marker, type SeedFacts, type 
 // from the permission table (permissions/abilities.ts), checked on the instance.
 
 const dbFile = path.join(inject("dataDir"), "e2e.db");
-const CONCURRENCY = 6;
+const CONCURRENCY = 4;
 
 const ROLES: { key: string; email: string | null }[] = [
   { key: "member", email: "member@hangarline.test" },
@@ -207,18 +207,30 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
     const findings: Finding[] = [];
     const serverErrors: string[] = [];
     let bytes = 0;
+    let scanMs = 0;
+    const timeByRoute = new Map<string, number>();
+    const statuses = new Map<string, number>();
     await pool(
       requests.map((r) => async () => {
         let res: Fetched;
+        const t0 = performance.now();
         try {
           res = await get(baseUrl, r.path, jars.get(r.viewer.key)!, r.headers);
+          const ms = performance.now() - t0;
+          const key = `${r.route.kind} ${pattern(r.route)}`;
+          timeByRoute.set(key, (timeByRoute.get(key) ?? 0) + ms);
         } catch (error) {
           serverErrors.push(`${r.viewer.key} ${r.kind} ${r.path}: ${(error as Error).message}`);
           return;
         }
         bytes += res.body.length;
+        const sk = `${r.kind.startsWith("rsc") ? "rsc" : r.kind} ${res.status}`;
+        statuses.set(sk, (statuses.get(sk) ?? 0) + 1);
         if (res.status >= 500) serverErrors.push(`${r.viewer.key} ${r.kind} ${r.path}: ${res.status}`);
-        for (const m of scan(res.body, r.path, indexes.get(r.viewer.key)!)) {
+        const t1 = performance.now();
+        const hits = scan(res.body, r.path, indexes.get(r.viewer.key)!);
+        scanMs += performance.now() - t1;
+        for (const m of hits) {
           findings.push({ viewer: r.viewer.key, kind: r.kind, path: r.path, status: res.status, category: m.category, owner: m.ownerName, text: m.text });
         }
       }),
@@ -241,6 +253,8 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
       `  × 3 request kinds: html ${kinds.get("html") ?? 0}, rsc (one per parent layout) ${kinds.get("rsc") ?? 0}, api ${kinds.get("api") ?? 0}`,
       `  = ${requests.length} requests, ${(bytes / 1e6).toFixed(1)} MB of bodies, ${seconds} s`,
       `  forbidden facts checked per role: ${markerCount}`,
+      `  answers: ${[...statuses].sort().map(([k, n]) => `${k}×${n}`).join(", ")}`,
+      `  time spent scanning bodies: ${(scanMs / 1000).toFixed(1)} s; slowest routes (sum of response times): ${[...timeByRoute].sort((a, b) => b[1] - a[1]).slice(0, 5).map(([k, ms]) => `${k} ${(ms / 1000).toFixed(0)} s`).join(", ")}`,
       ...(empty.length ? [`  no row in the database yet (asked with a made-up id): ${[...new Set(empty)].join("; ")}`] : []),
       ...(notCovered.length ? [`  not asked (no GET): ${notCovered.join("; ")}`] : []),
     ].join("\n");

@@ -123,9 +123,9 @@ export function readSeedFacts(dbFile: string): SeedFacts {
     aircraftId: () => all<{ id: string }>("select id from aircraft where club_id = ? order by registration limit 1", clubId).map((r) => r.id),
     squawkId: () => all<{ id: string }>("select id from squawks where club_id = ? order by created_at limit 1", clubId).map((r) => r.id),
     bulletinId: () => {
+      // The newest published one (its acknowledgements list names who read it).
       const pub = get<{ id: string }>("select id from bulletins where club_id = ? and status = 'published' order by created_at desc limit 1", clubId)?.id;
-      const draft = get<{ id: string }>("select id from bulletins where club_id = ? and status = 'draft' limit 1", clubId)?.id;
-      return [pub, draft].filter((x): x is string => Boolean(x));
+      return pub ? [pub] : [];
     },
     statementId: () => all<{ id: string }>("select id from bank_statements where club_id = ? order by period_end desc limit 1", clubId).map((r) => r.id),
     uploadId: () => {
