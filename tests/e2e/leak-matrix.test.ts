@@ -4,7 +4,7 @@ import Database from "better-sqlite3";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { baseUrl, DEMO_PASSWORD } from "./harness";
 import { get, pool, readable, signInOverHttp, type Fetched, type Jar } from "./leak/http";
-import { claimedTree, dynamicParams, fillPath, layoutName, pattern, routerStateHeader, routeTree, type Params, type Route } from "./leak/routes";
+import { claimedTree, dynamicParams, expectedRenderStart, fillPath, layoutName, pattern, renderStart, routerStateHeader, routeTree, type Params, type Route } from "./leak/routes";
 import { CLUB_SLUG, readSeedFacts, viewerFor, type Marker, type SeedFacts, type Viewer } from "./leak/seed-facts";
 
 // The leak matrix: every demo role (and a signed-in outsider, and nobody signed in) × every page
@@ -56,7 +56,7 @@ function paramSets(route: Route, facts: SeedFacts, missing: string[], empty: str
   return sets;
 }
 
-type Request = { viewer: Viewer; kind: string; path: string; headers: Record<string, string>; route: Route };
+type Request = { viewer: Viewer; kind: string; path: string; headers: Record<string, string>; route: Route; renderFrom?: string };
 type Finding = { viewer: string; kind: string; path: string; status: number; category: string; owner: string; text: string };
 
 const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "medicalExpired", "inArrears", "statusUnknown"];
@@ -153,22 +153,21 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
       const params = { club: CLUB_SLUG };
       const res = await get(baseUrl, fillPath(route, params), jars.get(role)!, { RSC: "1", "Next-Router-State-Tree": routerStateHeader(claimedTree(route, params, depth)) });
       expect(res.contentType).toContain("text/x-component");
+      // The server says where it started rendering: right below the claimed layout.
+      expect(renderStart(res.body)).toBe(expectedRenderStart(route, params, depth));
       return readable(res.body);
     };
-    // The operator console's layout holds its only guard and its header.
+    // The operator console's layout holds its only guard and renders its header.
     const operatorPage = path.join("operator", "page.tsx");
     expect(await rsc("operator", operatorPage, -1)).toContain("Operator console");
     const skipped = await rsc("operator", operatorPage, 0);
     expect(skipped).not.toContain("Operator console");
     expect(skipped).toContain("Clubs you administer");
-    // The club layout renders the club's navigation; the money layout holds a guard of its own.
+    // The club layout renders the club's navigation; the money layout (a guard only) starts the render or is skipped.
     const ratesPage = path.join("clubs", "[club]", "money", "rates", "page.tsx");
-    const [root, club, money] = [await rsc("treasurer", ratesPage, -1), await rsc("treasurer", ratesPage, 1), await rsc("treasurer", ratesPage, 2)];
-    expect(root).toContain("Club sections");
-    expect(club).not.toContain("Club sections");
-    expect(club).toContain("max-w-6xl"); // the money layout's wrapper, rendered
-    expect(money).not.toContain("Club sections");
-    expect(money).not.toContain("max-w-6xl"); // the money layout taken as on screen: not rendered, its check not run
+    expect(await rsc("treasurer", ratesPage, -1)).toContain("Club sections");
+    expect(await rsc("treasurer", ratesPage, 1)).not.toContain("Club sections");
+    expect(await rsc("treasurer", ratesPage, 2)).not.toContain("Club sections");
   });
 
   it("no response body carries another member's money, medical, report or booking data", { retry: 0, timeout: 600_000 }, async () => {
@@ -195,7 +194,7 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
           }
           requests.push({ viewer, kind: "html", path: p, headers: {}, route });
           for (const depth of route.layoutDepths) {
-            requests.push({ viewer, kind: `rsc(${layoutName(route, depth)})`, path: p, headers: { RSC: "1", "Next-Router-State-Tree": routerStateHeader(claimedTree(route, params, depth)) }, route });
+            requests.push({ viewer, kind: `rsc(${layoutName(route, depth)})`, path: p, headers: { RSC: "1", "Next-Router-State-Tree": routerStateHeader(claimedTree(route, params, depth)) }, route, renderFrom: expectedRenderStart(route, params, depth) });
           }
         }
       }
@@ -210,6 +209,7 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
     let scanMs = 0;
     const timeByRoute = new Map<string, number>();
     const statuses = new Map<string, number>();
+    const treeMisses: string[] = [];
     await pool(
       requests.map((r) => async () => {
         let res: Fetched;
@@ -227,6 +227,11 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
         const sk = `${r.kind.startsWith("rsc") ? "rsc" : r.kind} ${res.status}`;
         statuses.set(sk, (statuses.get(sk) ?? 0) + 1);
         if (res.status >= 500) serverErrors.push(`${r.viewer.key} ${r.kind} ${r.path}: ${res.status}`);
+        if (r.renderFrom && res.status === 200) {
+          // Every RSC answer must really have started below the claimed layouts, or the request proves nothing.
+          const from = renderStart(res.body);
+          if (from !== r.renderFrom) treeMisses.push(`${r.viewer.key} ${r.kind} ${r.path}: rendered from ${from}, expected ${r.renderFrom}`);
+        }
         const t1 = performance.now();
         const hits = scan(res.body, r.path, indexes.get(r.viewer.key)!);
         scanMs += performance.now() - t1;
@@ -282,6 +287,7 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
     if (lines.length) console.log(`Leaks in ${grouped.size} responses (full list in tests/.artifacts/leak-matrix.txt):\n${lines.join("\n")}`);
 
     expect(requests.length).toBeGreaterThan(500);
+    expect(treeMisses, "RSC answers that did not start rendering below the claimed layouts").toEqual([]);
     expect(serverErrors, "answers of 500 or no answer").toEqual([]);
     expect(lines, `${grouped.size} responses carry data their role may not see`).toEqual([]);
   });

@@ -126,3 +126,27 @@ export function routerStateHeader(tree: FlightRouterState): string {
 export function layoutName(route: Route, depth: number): string {
   return depth < 0 ? "root" : route.segments.slice(0, depth + 1).map((s) => s.name).join("/");
 }
+
+/** The tree segment rendering is expected to start at when `depth` is claimed (the one below that layout). */
+export function expectedRenderStart(route: Route, params: Params, depth: number): string {
+  const next = route.segments[depth + 1];
+  return JSON.stringify(next ? treeSegment(next, params) : "__PAGE__");
+}
+
+/**
+ * Where the server started rendering, read from an RSC answer: row 0 carries the flight data
+ * ("f"), whose first path lists the segments taken as on screen ("children", "clubs", "children",
+ * ["club", …], …) and then [segment, routerState, seedData, …] for the segment it rendered from.
+ */
+export function renderStart(body: string): string | null {
+  const row = body.split("\n").find((l) => l.startsWith("0:"));
+  if (!row) return null;
+  try {
+    const f = (JSON.parse(row.slice(2)) as { f?: unknown[][] }).f?.[0];
+    if (!Array.isArray(f)) return null;
+    const start = f.find((x) => Array.isArray(x) && x.length >= 2 && typeof x[1] === "object" && x[1] !== null && !Array.isArray(x[1])) as unknown[] | undefined;
+    return start ? JSON.stringify(start[0]) : null;
+  } catch {
+    return null;
+  }
+}
