@@ -79,7 +79,7 @@ export function readSeedFacts(dbFile: string): SeedFacts {
   const money = (minor: number) => formatMoney(minor, club.currency);
 
   const users = new Map(all<{ id: string; name: string; email: string }>("select id, name, email from users").map((u) => [u.id, u]));
-  const nameOf = (id: string | null) => (id ? (users.get(id)?.name ?? id) : "nobody");
+  const nameOf = (id: string | null) => (id ? (users.get(id)?.name ?? id) : "the club");
   const members = all<{ userId: string; membershipId: string; roles: string }>(
     "select user_id as userId, id as membershipId, roles from memberships where club_id = ? and status = 'active'", clubId,
   ).map((m) => ({ ...m, roles: JSON.parse(m.roles) as Role[] }));
