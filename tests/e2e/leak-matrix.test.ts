@@ -210,6 +210,20 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
     expect(missing, "dynamic segments with no id source in tests/e2e/leak/seed-facts.ts").toEqual([]);
 
     const indexes = new Map(viewers.map((v) => [v.key, indexMarkers(markersFor(v, facts))]));
+    // Positive controls: where a role may see a fact, the detector must find it, or a silent
+    // matrix could just mean the facts are looked for in the wrong form.
+    const [anonReport] = facts.ids.reportId!();
+    const [warnedBooking] = facts.ids.bookingId!();
+    const controls: { viewer: string; kind: string; path: string; category: RegExp }[] = [
+      { viewer: "treasurer", kind: "html", path: `/clubs/${CLUB_SLUG}/money/balances`, category: /^balance \(minor units\)$/ },
+      { viewer: "treasurer", kind: "html", path: `/clubs/${CLUB_SLUG}/money/balances`, category: /^name on a money page$/ },
+      { viewer: "admin", kind: "html", path: `/clubs/${CLUB_SLUG}/money/journal`, category: /^journal description$/ },
+      { viewer: "safety", kind: "html", path: `/clubs/${CLUB_SLUG}/safety/reports/${anonReport}`, category: /^anonymous safety report text$/ },
+      { viewer: "admin", kind: "api", path: `/api/clubs/${CLUB_SLUG}/bookings/${warnedBooking}`, category: /^booking warning/ },
+      { viewer: "instructor", kind: "html", path: `/clubs/${CLUB_SLUG}/me`, category: /^medical limitations$/ },
+    ];
+    const controlKeys = new Set(controls.map((c) => `${c.viewer} ${c.kind} ${c.path}`));
+    const seen = new Map<string, Set<string>>();
     const findings: Finding[] = [];
     const serverErrors: string[] = [];
     let bytes = 0;
@@ -239,6 +253,11 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
           // Every RSC answer must really have started below the claimed layouts, or the request proves nothing.
           const from = renderStart(res.body);
           if (from !== r.renderFrom) treeMisses.push(`${r.viewer.key} ${r.kind} ${r.path}: rendered from ${from}, expected ${r.renderFrom}`);
+        }
+        const controlKey = `${r.viewer.key} ${r.kind} ${r.path}`;
+        if (controlKeys.has(controlKey)) {
+          const maySee = indexMarkers(facts.markers.filter((m) => m.allowed(r.viewer)));
+          seen.set(controlKey, new Set(scan(res.body, r.path, maySee).map((m) => m.category)));
         }
         const t1 = performance.now();
         const hits = scan(res.body, r.path, indexes.get(r.viewer.key)!);
@@ -295,6 +314,8 @@ describe("leak matrix: no role sees data it may not, whatever the request", () =
     if (lines.length) console.log(`Leaks in ${grouped.size} responses (full list in tests/.artifacts/leak-matrix.txt):\n${lines.join("\n")}`);
 
     expect(requests.length).toBeGreaterThan(500);
+    const blind = controls.filter((c) => ![...(seen.get(`${c.viewer} ${c.kind} ${c.path}`) ?? [])].some((cat) => c.category.test(cat)));
+    expect(blind.map((c) => `${c.viewer} ${c.kind} ${c.path}: ${c.category.source} not found where the role may see it`), "positive controls").toEqual([]);
     expect(treeMisses, "RSC answers that did not start rendering below the claimed layouts").toEqual([]);
     expect(serverErrors, "answers of 500 or no answer").toEqual([]);
     expect(lines, `${grouped.size} responses carry data their role may not see`).toEqual([]);
