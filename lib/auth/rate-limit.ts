@@ -17,7 +17,7 @@ export const MAX_WAIT_MS = 15 * 60_000;
 
 // E-mail sign-in links: a few per address and a few more per client in a quarter of an hour.
 export const LINK_WINDOW_MS = 15 * 60_000;
-export const MAX_LINKS_PER_ADDRESS = 3;
+export const MAX_LINKS_PER_ADDRESS = 5;
 export const MAX_LINKS_PER_CLIENT = 10;
 export const MAX_LINKS_UNKNOWN_CLIENT = 30;
 
