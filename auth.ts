@@ -11,7 +11,7 @@ import { isSessionCurrent, newSessionClaims, revokeSession, SESSION_MAX_AGE_SECO
 import { enqueueEmail } from "@/lib/email/outbox";
 import { kickOutbox } from "@/lib/email/runner";
 import { assertDeploymentConfig, isBuildPhase } from "@/lib/server/deployment-config";
-import { onConfiguredOrigin } from "@/lib/server/urls";
+import { hasConfiguredBaseUrl, safeRedirectTarget, signInLinkOnConfiguredOrigin } from "@/lib/server/urls";
 
 class RateLimited extends CredentialsSignin {
   code = "rate_limited";
@@ -71,13 +71,18 @@ export function authConfig(): NextAuthConfig {
             subject: "Your Hangarline sign-in link",
             template: "magic-link",
             // Rebuilt on the configured address: whatever host the request named never reaches the link.
-            payload: { url: onConfiguredOrigin(url), expiresMinutes: MAGIC_LINK_MINUTES },
+            payload: { url: signInLinkOnConfiguredOrigin(url), expiresMinutes: MAGIC_LINK_MINUTES },
           });
           kickOutbox();
         },
       },
     ],
     callbacks: {
+      // After sign-in, only ever to a path on our own configured address.
+      // (A development server started without any address stays on the host it was opened with.)
+      async redirect({ url, baseUrl }) {
+        return safeRedirectTarget(url, "/clubs", hasConfiguredBaseUrl() ? undefined : new URL(baseUrl).origin);
+      },
       async signIn({ user, email }) {
         if (email?.verificationRequest) return true;
         if (!user.email) return false;

@@ -17,7 +17,7 @@ export class AuthClient {
 
   private keep(response: Response): void {
     for (const line of response.headers.getSetCookie()) {
-      const [pair, ...attrs] = line.split(";");
+      const [pair = "", ...attrs] = line.split(";");
       const eq = pair.indexOf("=");
       const name = pair.slice(0, eq).trim();
       const value = pair.slice(eq + 1).trim();
