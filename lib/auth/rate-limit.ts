@@ -1,6 +1,6 @@
 import { and, count, eq, gte, lt, max, ne } from "drizzle-orm";
 import type { Db } from "@/db/client";
-import { revokedSessions, signInAttempts, signInLinkRequests } from "@/db/schema";
+import { revokedSessions, signInAttempts, signInLinkRequests, verificationTokens } from "@/db/schema";
 import { UNKNOWN_CLIENT } from "./client-key";
 
 // Password guesses: each account and each client may fail a few times freely; after that every
@@ -115,13 +115,17 @@ export function reserveSignInLink(db: Db, emailKey: string, clientKey: string, n
 const PRUNE_EVERY_MS = 10 * 60_000;
 const pruneState = globalThis as unknown as { __hangarlineAuthPrunedAt?: number };
 
-/** Deletes throttling rows older than they can matter and revocations of sessions that have expired. */
+/**
+ * Deletes throttling rows older than they can matter, revocations of sessions that have expired
+ * and sign-in link tokens past their time (Auth.js stores one per request, even for unknown addresses).
+ */
 export function pruneSignInRecords(db: Db, now = new Date()): void {
   const failuresBefore = new Date(now.getTime() - FAILURE_MEMORY_MS);
   const linksBefore = new Date(now.getTime() - Math.max(LINK_WINDOW_MS, FAILURE_MEMORY_MS));
   db.delete(signInAttempts).where(lt(signInAttempts.createdAt, failuresBefore)).run();
   db.delete(signInLinkRequests).where(lt(signInLinkRequests.createdAt, linksBefore)).run();
   db.delete(revokedSessions).where(lt(revokedSessions.expiresAt, now)).run();
+  db.delete(verificationTokens).where(lt(verificationTokens.expires, now)).run();
 }
 
 /** Prunes at most once every ten minutes per process (called on the sign-in path). */

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import { signInAttempts, signInLinkRequests, users } from "@/db/schema";
+import { revokedSessions, signInAttempts, signInLinkRequests, users, verificationTokens } from "@/db/schema";
 import { clientKeyFrom, UNKNOWN_CLIENT } from "@/lib/auth/client-key";
 import { authorizeCredentials, type CredentialsResult } from "@/lib/auth/credentials";
 import { verifyPassword } from "@/lib/auth/password";
@@ -172,7 +172,13 @@ describe("sign-in with e-mail and password", () => {
     const now = new Date(Date.UTC(2026, 5, 20, 12));
     db().insert(signInAttempts).values({ emailKey: "old@example.test", clientKey: UNKNOWN_CLIENT, outcome: "failed", createdAt: new Date(now.getTime() - 25 * 3600_000) }).run();
     db().insert(signInLinkRequests).values({ emailKey: "old@example.test", clientKey: UNKNOWN_CLIENT, createdAt: new Date(now.getTime() - 25 * 3600_000) }).run();
+    const member = db().select().from(users).where(eq(users.email, "member@hangarline.test")).get()!;
+    db().insert(revokedSessions).values({ sessionId: "expired-session", userId: member.id, expiresAt: new Date(now.getTime() - 1000) }).run();
+    db().insert(revokedSessions).values({ sessionId: "live-session", userId: member.id, expiresAt: new Date(now.getTime() + 1000) }).run();
+    db().insert(verificationTokens).values({ identifier: "old@example.test", token: "expired-token", expires: new Date(now.getTime() - 1000) }).run();
     pruneSignInRecords(db(), now);
+    expect(db().select().from(revokedSessions).all().map((r) => r.sessionId)).toEqual(["live-session"]);
+    expect(db().select().from(verificationTokens).where(eq(verificationTokens.token, "expired-token")).all()).toHaveLength(0);
     expect(db().select().from(signInAttempts).where(eq(signInAttempts.emailKey, "old@example.test")).all()).toHaveLength(0);
     expect(db().select().from(signInLinkRequests).where(eq(signInLinkRequests.emailKey, "old@example.test")).all()).toHaveLength(0);
     const plan = db().$client.prepare("EXPLAIN QUERY PLAN SELECT count(*) FROM sign_in_attempts WHERE email_key = ? AND created_at >= ?").all("a", 0) as { detail: string }[];
