@@ -1,9 +1,8 @@
 // `npm run demo`: install if missing, migrate and seed ./data/hangarline.db (or DATABASE_URL),
 // build, then serve the app on :3000 with the local e-mail and payment stand-ins.
 import { spawn, spawnSync } from "node:child_process";
-import { randomBytes } from "node:crypto";
-import fs from "node:fs";
 import path from "node:path";
+import { demoAuthSecret } from "./demo-secret.mjs";
 import { ensureNodeModules } from "./ensure-deps.mjs";
 
 const root = path.resolve(import.meta.dirname, "..");
@@ -15,30 +14,14 @@ const PAYMENTS_PORT = process.env.PAYMENTS_PORT ?? "3200";
 const appUrl = process.env.APP_URL ?? `http://localhost:${PORT}`;
 const databaseUrl = process.env.DATABASE_URL ?? "./data/hangarline.db";
 
-// The demo's own session secret: random, made once, kept beside the database (owner-only) and
-// reused, so sessions survive a restart and no published secret ever signs one.
-function demoAuthSecret() {
-  const dataDir = path.dirname(path.resolve(root, databaseUrl.replace(/^file:/, "")));
-  const file = path.join(dataDir, ".auth-secret");
-  fs.mkdirSync(dataDir, { recursive: true });
-  try {
-    const existing = fs.readFileSync(file, "utf8").trim();
-    if (existing.length >= 32) return existing;
-  } catch {
-    // not made yet
-  }
-  const secret = randomBytes(33).toString("base64url");
-  fs.writeFileSync(file, `${secret}\n`, { mode: 0o600 });
-  fs.chmodSync(file, 0o600);
-  return secret;
-}
 const env = {
   ...process.env,
   DATABASE_URL: databaseUrl,
   UPLOAD_DIR: process.env.UPLOAD_DIR ?? "./data/uploads",
   AUTH_URL: process.env.AUTH_URL ?? appUrl,
   APP_URL: appUrl,
-  AUTH_SECRET: process.env.AUTH_SECRET ?? demoAuthSecret(),
+  // Made once into the data folder (data/.auth-secret, owner-only) and reused.
+  AUTH_SECRET: process.env.AUTH_SECRET ?? demoAuthSecret(path.dirname(path.resolve(root, databaseUrl.replace(/^file:/, "")))),
   RESEND_BASE_URL: process.env.RESEND_BASE_URL ?? `http://127.0.0.1:${EMAIL_PORT}`,
   RESEND_API_KEY: process.env.RESEND_API_KEY ?? "re_local_demo",
   PAYMENTS_HOST: process.env.PAYMENTS_HOST ?? "127.0.0.1",
