@@ -1,4 +1,4 @@
-import { afterEach, beforeAll, describe, expect, it } from "vitest";
+import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { eq } from "drizzle-orm";
 import { signInLinkRequests } from "@/db/schema";
 import { MAX_LINKS_PER_ADDRESS } from "@/lib/auth/rate-limit";
@@ -95,9 +95,16 @@ describe("production refuses to start without AUTH_URL and AUTH_SECRET", () => {
     const { register } = await import("@/instrumentation");
     const runtime = env.NEXT_RUNTIME;
     env.NEXT_RUNTIME = "nodejs";
+    const exit = vi.spyOn(process, "exit").mockImplementation(((code?: number) => {
+      throw new Error(`process.exit(${code})`);
+    }) as never);
+    const logged = vi.spyOn(console, "error").mockImplementation(() => undefined);
     try {
-      await expect(register()).rejects.toThrow(/AUTH_URL is not set/);
+      await expect(register()).rejects.toThrow("process.exit(1)");
+      expect(String(logged.mock.calls[0]?.[0])).toMatch(/will not start in production[\s\S]*AUTH_URL is not set[\s\S]*AUTH_SECRET is not set/);
     } finally {
+      exit.mockRestore();
+      logged.mockRestore();
       if (runtime === undefined) delete env.NEXT_RUNTIME;
       else env.NEXT_RUNTIME = runtime;
     }
