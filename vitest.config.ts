@@ -22,6 +22,9 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           setupFiles: ["tests/integration/setup.ts"],
+          // next-auth imports "next/server" without an extension, which Node's ESM loader refuses;
+          // inlined, it resolves through Vite (the auth tests drive the real Auth.js handlers).
+          server: { deps: { inline: ["next-auth"] } },
           testTimeout: 30000,
           hookTimeout: 30000,
         },

@@ -2,6 +2,7 @@
 // build, then serve the app on :3000 with the local e-mail and payment stand-ins.
 import { spawn, spawnSync } from "node:child_process";
 import path from "node:path";
+import { demoAuthSecret } from "./demo-secret.mjs";
 import { ensureNodeModules } from "./ensure-deps.mjs";
 
 const root = path.resolve(import.meta.dirname, "..");
@@ -11,13 +12,16 @@ const PORT = process.env.PORT ?? "3000";
 const EMAIL_PORT = process.env.EMAIL_PORT ?? "3100";
 const PAYMENTS_PORT = process.env.PAYMENTS_PORT ?? "3200";
 const appUrl = process.env.APP_URL ?? `http://localhost:${PORT}`;
+const databaseUrl = process.env.DATABASE_URL ?? "./data/hangarline.db";
+
 const env = {
   ...process.env,
-  DATABASE_URL: process.env.DATABASE_URL ?? "./data/hangarline.db",
+  DATABASE_URL: databaseUrl,
   UPLOAD_DIR: process.env.UPLOAD_DIR ?? "./data/uploads",
   AUTH_URL: process.env.AUTH_URL ?? appUrl,
   APP_URL: appUrl,
-  AUTH_SECRET: process.env.AUTH_SECRET ?? "hangarline-demo-secret-change-me-in-production",
+  // Made once into the data folder (data/.auth-secret, owner-only) and reused.
+  AUTH_SECRET: process.env.AUTH_SECRET ?? demoAuthSecret(path.dirname(path.resolve(root, databaseUrl.replace(/^file:/, "")))),
   RESEND_BASE_URL: process.env.RESEND_BASE_URL ?? `http://127.0.0.1:${EMAIL_PORT}`,
   RESEND_API_KEY: process.env.RESEND_API_KEY ?? "re_local_demo",
   PAYMENTS_HOST: process.env.PAYMENTS_HOST ?? "127.0.0.1",

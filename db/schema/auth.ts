@@ -1,4 +1,4 @@
-import { integer, primaryKey, sqliteTable, text } from "drizzle-orm/sqlite-core";
+import { index, integer, primaryKey, sqliteTable, text } from "drizzle-orm/sqlite-core";
 import { id, timestamps } from "./columns";
 
 // The four tables Auth.js reads and writes, named our way (plural snake_case) with the column
@@ -13,6 +13,8 @@ export const users = sqliteTable("users", {
   /** "operator" marks an account that may create and administer clubs. */
   platformRole: text("platform_role", { enum: ["operator"] }),
   disabledAt: integer("disabled_at", { mode: "timestamp_ms" }),
+  /** Sessions signed in before this instant are refused (sign-out everywhere, deactivation, role change). */
+  sessionsValidAfter: integer("sessions_valid_after", { mode: "timestamp_ms" }),
   ...timestamps(),
 });
 
@@ -50,14 +52,57 @@ export const verificationTokens = sqliteTable(
   (t) => [primaryKey({ columns: [t.identifier, t.token] })],
 );
 
-/** Every sign-in attempt by password, kept for rate limiting (key = normalised e-mail). */
-export const signInAttempts = sqliteTable("sign_in_attempts", {
-  id: id(),
-  emailKey: text("email_key").notNull(),
-  ip: text("ip"),
-  succeeded: integer("succeeded", { mode: "boolean" }).notNull(),
-  createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
-});
+/**
+ * Password sign-in attempts, kept for throttling only and pruned after a day. A row is reserved
+ * ("pending") before the password is hashed, so parallel guesses count before any is tried.
+ * `email_key` is the normalised e-mail (whether or not an account exists); `client_key` is the
+ * client's address when a trusted proxy names it, else one shared bucket.
+ */
+export const signInAttempts = sqliteTable(
+  "sign_in_attempts",
+  {
+    id: id(),
+    emailKey: text("email_key").notNull(),
+    clientKey: text("client_key").notNull(),
+    outcome: text("outcome", { enum: ["pending", "failed", "succeeded"] }).notNull(),
+    /** Cleared by a successful sign-in to the account: the row no longer slows the account down. */
+    countsForAccount: integer("counts_for_account", { mode: "boolean" }).notNull().default(true),
+    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
+  },
+  (t) => [
+    index("sign_in_attempts_email_key").on(t.emailKey, t.createdAt),
+    index("sign_in_attempts_client_key").on(t.clientKey, t.createdAt),
+    index("sign_in_attempts_created_at").on(t.createdAt),
+  ],
+);
+
+/** E-mail sign-in links sent (one row per e-mail queued), kept for throttling only and pruned after a day. */
+export const signInLinkRequests = sqliteTable(
+  "sign_in_link_requests",
+  {
+    id: id(),
+    emailKey: text("email_key").notNull(),
+    clientKey: text("client_key").notNull(),
+    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
+  },
+  (t) => [
+    index("sign_in_link_requests_email_key").on(t.emailKey, t.createdAt),
+    index("sign_in_link_requests_client_key").on(t.clientKey, t.createdAt),
+    index("sign_in_link_requests_created_at").on(t.createdAt),
+  ],
+);
+
+/** Single sessions ended by signing out; a row lives until the session would have expired anyway. */
+export const revokedSessions = sqliteTable(
+  "revoked_sessions",
+  {
+    sessionId: text("session_id").primaryKey(),
+    userId: text("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
+  },
+  (t) => [index("revoked_sessions_expires_at").on(t.expiresAt), index("revoked_sessions_user_id").on(t.userId)],
+);
 
 export type User = typeof users.$inferSelect;
 export type NewUser = typeof users.$inferInsert;

@@ -39,6 +39,8 @@ function format(r: BenchResult): string {
 async function main() {
   // Measure the production builds of libraries such as React, as `next start` runs them.
   (process.env as Record<string, string | undefined>).NODE_ENV ??= "production";
+  // Links in the e-mails the benchmarks queue are built from the configured address (required in production).
+  (process.env as Record<string, string | undefined>).AUTH_URL ??= "http://bench.test";
   // Query modules import "server-only", which refuses to load outside the framework's server
   // build; here it is an empty module.
   register("data:text/javascript,export async function resolve(s,c,n){ if(s==='server-only') return {url:'data:text/javascript,',shortCircuit:true}; return n(s,c); }");

@@ -1,3 +1,4 @@
+import { randomBytes } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
 import type { TestProject } from "vitest/node";
@@ -38,7 +39,8 @@ export default async function setup(project: TestProject) {
     UPLOAD_DIR: path.join(dir, "uploads"),
     AUTH_URL: baseUrl,
     APP_URL: baseUrl,
-    AUTH_SECRET: "e2e-secret-not-for-production-use-only",
+    // A fresh random secret per run: the production server refuses published ones.
+    AUTH_SECRET: randomBytes(33).toString("base64url"),
     RESEND_BASE_URL: email.url,
     RESEND_API_KEY: "re_e2e_local",
     PAYMENTS_HOST: "127.0.0.1",

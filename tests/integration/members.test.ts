@@ -58,7 +58,7 @@ describe("invitations and roles", () => {
     const to = await expectRedirect(() => acceptInvitation(EMPTY, form({ token, name: "Nova Pilot", password: "correct-horse-hangar" })));
     expect(to).toMatch(/^\/sign-in\?joined=1/);
     expect(membershipOf("new.pilot@example.test", "lakeshore-aero")?.roles).toEqual(["member"]);
-    const signedIn = await authorizeCredentials(db(), { email: "new.pilot@example.test", password: "correct-horse-hangar" }, null);
+    const signedIn = await authorizeCredentials(db(), { email: "new.pilot@example.test", password: "correct-horse-hangar" }, "client:test");
     expect(signedIn.ok).toBe(true);
     // The link works once.
     const again = await acceptInvitation(EMPTY, form({ token, name: "Someone", password: "another-long-pass" }));

@@ -9,6 +9,7 @@ const dir = fs.mkdtempSync(path.join(os.tmpdir(), "hangarline-it-"));
 process.env.DATABASE_URL = path.join(dir, "test.db");
 process.env.OUTBOX_WORKER = "off";
 process.env.APP_URL = "http://app.test";
+process.env.AUTH_URL = "http://app.test";
 process.env.UPLOAD_DIR = path.join(dir, "uploads");
 
 const session = vi.hoisted(() => ({ user: null as null | { id: string; email: string; name: string | null; platformRole: "operator" | null } }));

@@ -7,7 +7,7 @@ import type { ActionState } from "@/lib/actions/action-state";
 import { magicLinkSchema, passwordSignInSchema, safeCallbackUrl } from "@/lib/validation/auth";
 
 const GENERIC = "That e-mail and password do not match an active account.";
-const LIMITED = "Too many failed sign-ins for this address. Wait 15 minutes, or use an e-mail link instead.";
+const LIMITED = "Too many failed sign-ins. Wait a few minutes and try again (each further failure makes the wait longer), or use an e-mail link instead.";
 
 export async function signInWithPassword(_prev: ActionState, formData: FormData): Promise<ActionState> {
   const parsed = passwordSignInSchema.safeParse(Object.fromEntries(formData));

@@ -3,6 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { memberships } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
+import { revokeSessions } from "@/lib/auth/sessions";
 import { writeAudit } from "@/lib/server/audit";
 import { membershipStatusSchema } from "@/lib/validation/members";
 import { assertAnotherActiveAdmin } from "./member-rules";
@@ -20,6 +21,7 @@ export const setMembershipStatus = clubAction({
       .set({ status: input.status, deactivatedAt: input.status === "inactive" ? new Date() : null })
       .where(and(eq(memberships.clubId, club.id), eq(memberships.id, current.id)))
       .run();
+    if (input.status === "inactive") revokeSessions(tx, current.userId); // a deactivated member is signed out
     writeAudit(tx, {
       clubId: club.id,
       actorId: user.id,
