@@ -22,6 +22,8 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           setupFiles: ["tests/integration/setup.ts"],
+          // next-auth imports "next/server" without an extension; inlined, it resolves as in Next.
+          server: { deps: { inline: ["next-auth"] } },
           testTimeout: 30000,
           hookTimeout: 30000,
         },

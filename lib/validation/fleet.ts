@@ -239,7 +239,7 @@ export const liftNoticeSchema = z.object({
 export const logFlightSchema = z
   .object({
     aircraftId: id("an aircraft"),
-    pilotId: optionalText("the pilot", 64),
+    pilotId: z.preprocess((v) => (typeof v === "string" && v.trim() === "" ? undefined : v), id("the pilot").optional()).transform((v) => v ?? null),
     flownOn: isoDateField("the date flown"),
     hobbsOut: hoursField("Hobbs out"),
     hobbsIn: hoursField("Hobbs in"),
