@@ -14,7 +14,7 @@ import type { ActionState } from "@/lib/actions/action-state";
 import { EMPTY, signInAs } from "./helpers";
 import {
   BAD_DATES, BAD_IDS, BAD_MONTHS, BROAD_USER, FUZZ_CLUB, GENERIC_BAD, HUGE, PLAIN_MEMBER, POLLUTION_KEYS, ROOT, changedTables, fingerprint, prototypeIsClean, realIds, rng, seedAllOnce, seedFromEnv, walk, widenAdminRoles,
-  BAD_DATETIMES,
+  BAD_DATETIMES, idsFor,
 } from "./fuzz-helpers";
 
 // The sign-in actions hand a well-formed form to the auth library; here it answers as for a
@@ -65,14 +65,6 @@ function enumValues(schema: unknown, depth = 0): string[] {
 }
 
 const accepts = (schema: z.ZodType, value: unknown) => schema.safeParse(value).success;
-
-/** The table a field's id points into, guessed from its name (aircraftId → aircraft, entryId → journal_entries). */
-function idsFor(field: string, ids: Record<string, string[]>): string[] {
-  if (/user|member|pilot|instructor/i.test(field) && !/membership/i.test(field)) return ids.users ?? [];
-  const stem = field.replace(/Ids?$/, "").replace(/([a-z])([A-Z])/g, "$1_$2").toLowerCase().replace(/y$/, "");
-  const table = Object.keys(ids).find((t) => t === stem || t.startsWith(stem) || t.endsWith(stem) || t.includes(`_${stem}`) || t.includes(stem));
-  return table ? ids[table]! : [];
-}
 
 const PLAIN_TEXT = "A plain description that is long enough for every check";
 const NOT_DATES = [PLAIN_TEXT, "Rowan Pike", "N0123X", "abc", "12", "Cockpit: documents aboard"];

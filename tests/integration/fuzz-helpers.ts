@@ -123,6 +123,14 @@ export function realIds(per = 3): Record<string, string[]> {
   return out;
 }
 
+/** The table a field or parameter's id points into, guessed from its name (aircraftId → aircraft, entryId → journal_entries). */
+export function idsFor(field: string, ids: Record<string, string[]>): string[] {
+  if (/user|member|pilot|instructor/i.test(field) && !/membership/i.test(field)) return ids.users ?? [];
+  const stem = field.replace(/Ids?$/, "").replace(/([a-z])([A-Z])/g, "$1_$2").toLowerCase().replace(/y$/, "");
+  const table = Object.keys(ids).find((t) => t === stem || t.startsWith(stem) || t.endsWith(stem) || t.includes(`_${stem}`) || t.includes(stem));
+  return table ? ids[table]! : [];
+}
+
 export function walk(dir: string, match: (file: string) => boolean): string[] {
   const out: string[] = [];
   for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {

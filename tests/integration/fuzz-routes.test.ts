@@ -2,19 +2,20 @@
 // method): wrong types, huge strings, impossible and out-of-range dates, invalid ids, pollution
 // keys, malformed JSON and empty bodies, as a club admin (who may do most) and as a plain member.
 // No answer may be a 500, and no call may change a row of any table. FUZZ_SEED=<n> reproduces a run.
+import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { POST as remindersRoute } from "@/app/api/clubs/[club]/documents/reminders/route";
 import { signInAs } from "./helpers";
 import {
-  BAD_DATES, BAD_IDS, BAD_MONTHS, BROAD_USER, FUZZ_CLUB, GENERIC_BAD, HUGE, PLAIN_MEMBER, POLLUTION_KEYS, ROOT, changedTables, fingerprint, prototypeIsClean, realIds, rng, seedAllOnce, seedFromEnv, walk, widenAdminRoles,
+  BAD_DATES, BAD_DATETIMES, BAD_IDS, BAD_MONTHS, BROAD_USER, idsFor, FUZZ_CLUB, GENERIC_BAD, HUGE, PLAIN_MEMBER, POLLUTION_KEYS, ROOT, changedTables, fingerprint, prototypeIsClean, realIds, rng, seedAllOnce, seedFromEnv, walk, widenAdminRoles,
   type Rng,
 } from "./fuzz-helpers";
 
 process.env.AUTH_SECRET ??= "fuzz-test-secret-not-used-anywhere-else-0123456789";
 
 const SEED = seedFromEnv(20261202);
-const CASES = 14; // per route method and signed-in person
+const RANDOM_CASES = 8; // per route method and signed-in person, beside the systematic ones
 const CLUB = FUZZ_CLUB;
 const PEOPLE = [BROAD_USER, PLAIN_MEMBER];
 const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
@@ -37,52 +38,111 @@ async function discoverRoutes(): Promise<Route[]> {
 
 const QUERY_KEYS = ["view", "date", "from", "to", "format", "userId", "aircraftId", "status", "flagged", "month", "limit", "page", "q"];
 
-function paramValue(r: Rng, name: string, ids: string[]): string {
-  if (name === "club") return r.chance(0.85) ? CLUB : r.pick(["cottonwood-flyers", "no-such-club", "", HUGE, "../lakeshore-aero", "LAKESHORE-AERO", "%2e%2e"]);
-  if (name === "month") return r.chance(0.3) ? r.pick(["2026-03", "2026-01", "1900-01", "2200-12"]) : r.pick([...BAD_MONTHS, ...GENERIC_BAD]);
-  if (name === "token") return r.pick(["abc.ics", `${"a".repeat(40)}.ics`, HUGE, "", "../../etc/passwd", ...BAD_IDS]);
-  return r.chance(0.35) ? r.pick(ids) : r.pick([...BAD_IDS, ...GENERIC_BAD]);
+/** What each kind of query key or path parameter must survive. */
+function badValuesFor(key: string): string[] {
+  if (/^(date|from|to)$/.test(key)) return BAD_DATES;
+  if (key === "month") return BAD_MONTHS;
+  if (key === "club") return ["cottonwood-flyers", "no-such-club", "", HUGE, "../lakeshore-aero", "LAKESHORE-AERO", "%2e%2e"];
+  if (key === "token") return ["abc.ics", `${"a".repeat(40)}.ics`, HUGE, "", "../../etc/passwd", ...BAD_IDS];
+  if (/Id$/.test(key)) return BAD_IDS;
+  return GENERIC_BAD;
 }
 
-function queryString(r: Rng): string {
-  const q = new URLSearchParams();
-  const n = r.int(5);
-  for (let i = 0; i < n; i++) {
-    const key = r.chance(0.8) ? r.pick(QUERY_KEYS) : r.pick(POLLUTION_KEYS);
-    const value = r.chance(0.2) ? r.pick(["day", "week", "csv", "json", "open", "1", "2026-05-01"]) : r.pick([...BAD_DATES, ...BAD_IDS, ...GENERIC_BAD]);
-    q.append(key, value);
-    if (r.chance(0.15)) q.append(key, r.pick(GENERIC_BAD)); // the same key twice
+type Case = { route: Route; method: string; handler: Handler; person: string; params: Record<string, string | string[]>; query: [string, string][]; body?: string; type?: string; what: string };
+
+/** Real values for every parameter (the club, an id of the matching table, a month), so a case reaches the parsing it targets. */
+function realParams(route: Route, r: Rng, ids: Record<string, string[]>): Record<string, string | string[]> {
+  const params: Record<string, string | string[]> = {};
+  for (const seg of route.segments) {
+    const catchAll = /^\[\.\.\.(\w+)\]$/.exec(seg);
+    const single = /^\[(\w+)\]$/.exec(seg);
+    if (catchAll) params[catchAll[1]!] = [r.pick(["session", "csrf", "providers", "signin", "callback", "signout", "..", "%00"]), ...(r.chance(0.5) ? [r.pick(["credentials", "email", "x"])] : [])];
+    else if (single) {
+      const name = single[1]!;
+      const real = name === "club" ? [CLUB] : name === "month" ? ["2026-03"] : idsFor(name, ids);
+      params[name] = real.length ? r.pick(real) : r.pick(Object.values(ids).flat());
+    }
   }
-  const s = q.toString();
-  return s ? `?${s}` : "";
+  return params;
+}
+
+function urlOf(route: Route, params: Record<string, string | string[]>, query: [string, string][]): string {
+  const path = route.segments
+    .map((seg) => {
+      const name = /^\[(?:\.\.\.)?(\w+)\]$/.exec(seg)?.[1];
+      if (!name) return seg;
+      const v = params[name]!;
+      return Array.isArray(v) ? v.map(encodeURIComponent).join("/") : encodeURIComponent(v);
+    })
+    .join("/");
+  const q = new URLSearchParams(query).toString();
+  return `http://app.test/${path.slice(0, 6000)}${q ? `?${q}` : ""}`;
 }
 
 const BOOKING_FIELDS = ["aircraftId", "memberId", "instructorId", "purpose", "startsAt", "endsAt", "carryingPassengers", "acceptedGuards"];
+const JSON_WRONG: unknown[] = [-1, -1e308, 1e308, 0, 3.5, true, null, [], ["a", "b"], {}, { nested: { deeper: [1] } }, "", HUGE];
 
-function jsonBody(r: Rng, ids: string[]): string {
-  const kind = r.int(9);
-  if (kind === 0) return "";
-  if (kind === 1) return r.pick(["{", "{\"a\":", "nul", "[1,2", "\u0000", "{'single':'quotes'}", "NaN", "undefined"]);
-  if (kind === 2) return r.pick(["null", "[]", "[1,2,3]", "\"text\"", "42", "true", "{}"]);
-  if (kind === 3) return r.pick(['{"__proto__":{"polluted":true}}', '{"constructor":{"prototype":{"polluted":true}}}', '{"aircraftId":{"__proto__":{"polluted":true}}}']);
-  if (kind === 4) return JSON.stringify({ aircraftId: HUGE, purpose: HUGE });
-  const values: unknown[] = [
-    -1, -1e308, 1e308, 0, 3.5, true, false, null, [], [1, 2], {}, { nested: { deeper: [1] } }, "", HUGE,
-    ...BAD_DATES, ...BAD_IDS.slice(0, 5), "0000-01-01T10:00", "9999-12-31T23:59", "2026-02-30T10:00", ...ids.slice(0, 2),
-  ];
-  const body: Record<string, unknown> = {};
-  for (const f of BOOKING_FIELDS) if (r.chance(0.7)) body[f] = r.pick(values);
-  // A plausible booking with one field made wrong: the refusal must come from that field.
-  if (kind >= 7) {
-    Object.assign(body, { aircraftId: r.pick(ids), startsAt: "2026-12-01T10:00", endsAt: "2026-12-01T11:00" });
-    body[r.pick(["startsAt", "endsAt", "aircraftId"])] = r.pick(["0000-01-01T10:00", "9999-12-31T23:59", "2026-02-30T10:00", ...BAD_IDS, -1, null, [], {}]);
+const BROKEN_BODIES = [
+  "", "{", "{\"a\":", "nul", "[1,2", "\u0000", "{'single':'quotes'}", "NaN", "undefined", "null", "[]", "[1,2,3]", "\"text\"", "42", "true", "{}",
+  '{"__proto__":{"polluted":true}}', '{"constructor":{"prototype":{"polluted":true}}}', '{"aircraftId":{"__proto__":{"polluted":true}}}', JSON.stringify({ aircraftId: HUGE, purpose: HUGE }),
+];
+
+/**
+ * The cases: every path parameter with each value it must survive, every query key of a handler
+ * that reads its query with each such value, every field of a JSON body made wrong in turn, then
+ * broken bodies and random mixtures for each person.
+ */
+function buildCases(routes: Route[], ids: Record<string, string[]>, r: Rng): Case[] {
+  const cases: Case[] = [];
+  for (const route of routes) {
+    const source = fs.readFileSync(path.join(ROOT, route.file), "utf8");
+    const readsQuery = /searchParams/.test(source);
+    const readsJson = /\.json\(\)/.test(source);
+    for (const { method, handler } of route.methods) {
+      const base = (person: string) => ({ route, method, handler, person, params: realParams(route, r, ids), query: [] as [string, string][] });
+      for (const name of Object.keys(realParams(route, r, ids))) {
+        if (route.segments.some((s) => s === `[...${name}]`)) continue;
+        for (const v of badValuesFor(name)) {
+          const c = base(BROAD_USER);
+          cases.push({ ...c, params: { ...c.params, [name]: v }, what: `${name} = ${JSON.stringify(v.slice(0, 40))}` });
+        }
+      }
+      if (readsQuery && method === "GET") {
+        for (const key of QUERY_KEYS) {
+          const pool = badValuesFor(key);
+          for (const v of pool === GENERIC_BAD ? Array.from({ length: 4 }, () => r.pick(pool)) : pool) cases.push({ ...base(BROAD_USER), query: [[key, v]], what: `?${key}=${JSON.stringify(v.slice(0, 40))}` });
+        }
+      }
+      if (readsJson && method !== "GET") {
+        const plausible = { aircraftId: r.pick(idsFor("aircraftId", ids)), startsAt: "2026-12-01T10:00", endsAt: "2026-12-01T11:00" };
+        for (const field of BOOKING_FIELDS) {
+          const wrong = [...JSON_WRONG, ...(/At$/.test(field) ? BAD_DATETIMES : []), ...(/Id$/.test(field) ? BAD_IDS : [])];
+          for (const v of wrong) cases.push({ ...base(BROAD_USER), body: JSON.stringify({ ...plausible, [field]: v }), type: "application/json", what: `body.${field} = ${JSON.stringify(v)?.slice(0, 40)}` });
+        }
+        for (const body of BROKEN_BODIES) for (const type of ["application/json", "text/plain", ""]) cases.push({ ...base(BROAD_USER), body, type, what: `body ${JSON.stringify(body.slice(0, 30))} as ${type || "no type"}` });
+      }
+      for (const person of PEOPLE) {
+        for (let i = 0; i < RANDOM_CASES; i++) {
+          const c = base(person);
+          for (const name of Object.keys(c.params)) if (!Array.isArray(c.params[name]) && r.chance(0.3)) c.params[name] = r.pick(badValuesFor(name));
+          const query: [string, string][] = [];
+          for (let k = r.int(4); k > 0; k--) {
+            const key = r.chance(0.8) ? r.pick(QUERY_KEYS) : r.pick(POLLUTION_KEYS);
+            query.push([key, r.pick(badValuesFor(key))]);
+          }
+          const body = method === "GET" ? undefined : r.chance(0.5) ? r.pick(BROKEN_BODIES) : JSON.stringify(Object.fromEntries(BOOKING_FIELDS.filter(() => r.chance(0.6)).map((f) => [f, r.pick([...JSON_WRONG, ...BAD_DATETIMES, ...BAD_IDS])])));
+          const type = method === "GET" ? undefined : r.pick(["application/json", "text/plain", "application/x-www-form-urlencoded", "multipart/form-data; boundary=x", ""]);
+          cases.push({ ...c, query, body, type, what: `random #${i}` });
+        }
+      }
+    }
   }
-  return JSON.stringify(body);
+  return cases;
 }
 
 describe("fuzz: every route handler refuses malformed input without a 500 and without writing", () => {
   let routes: Route[] = [];
-  let ids: string[] = [];
+  let ids: Record<string, string[]> = {};
 
   beforeAll(async () => {
     await seedAllOnce();
@@ -90,7 +150,7 @@ describe("fuzz: every route handler refuses malformed input without a 500 and wi
     routes = await discoverRoutes();
     // The auth library logs every refused request at length; the statuses are what is checked.
     vi.spyOn(console, "error").mockImplementation(() => undefined);
-    ids = Object.values(realIds(2)).flat();
+    ids = realIds(3);
     // Queuing the reminders that are due is the one write a request without input makes (it is
     // idempotent): done once here, so every fuzzed call after it must leave the tables as they are.
     signInAs(BROAD_USER);
@@ -108,58 +168,28 @@ describe("fuzz: every route handler refuses malformed input without a 500 and wi
 
   it("answers no malformed request with a 500 and writes nothing", async () => {
     const r = rng(SEED);
+    const cases = buildCases(routes, ids, r);
     const failures: string[] = [];
-    let calls = 0;
-    for (const route of routes) {
-      for (const { method, handler } of route.methods) {
-        for (const person of PEOPLE) {
-          signInAs(person);
-          for (let i = 0; i < CASES; i++) {
-            const params: Record<string, string | string[]> = {};
-            let url = "";
-            for (const seg of route.segments) {
-              const catchAll = /^\[\.\.\.(\w+)\]$/.exec(seg);
-              const single = /^\[(\w+)\]$/.exec(seg);
-              if (catchAll) {
-                const parts = [r.pick(["session", "csrf", "providers", "signin", "callback", "signout", HUGE.slice(0, 300), "..", "%00"]), ...(r.chance(0.5) ? [r.pick(["credentials", "email", "nodemailer", "x"])] : [])];
-                params[catchAll[1]!] = parts;
-                url += `/${parts.map(encodeURIComponent).join("/")}`;
-              } else if (single) {
-                const v = paramValue(r, single[1]!, ids);
-                params[single[1]!] = v;
-                url += `/${encodeURIComponent(v)}`;
-              } else url += `/${seg}`;
-            }
-            const full = `http://app.test${url.slice(0, 4000)}${queryString(r)}`;
-            const init: RequestInit = { method, headers: {} as Record<string, string> };
-            if (method !== "GET") {
-              const body = jsonBody(r, ids);
-              const type = r.pick(["application/json", "application/json", "text/plain", "application/x-www-form-urlencoded", "multipart/form-data; boundary=x", ""]);
-              if (type) (init.headers as Record<string, string>)["content-type"] = type;
-              if (r.chance(0.3)) (init.headers as Record<string, string>)["stripe-signature"] = r.pick(["t=1,v1=deadbeef", "", HUGE.slice(0, 5000), "t=abc"]);
-              init.body = body;
-            }
-            const label = `${method} ${route.url} #${i} as ${person} (seed ${SEED}): ${full.slice(0, 160)}`;
-            const before = fingerprint();
-            let status = 0;
-            try {
-              const res = await handler(new Request(full, init), { params: Promise.resolve(params) });
-              status = res.status;
-              await res.arrayBuffer();
-            } catch (error) {
-              failures.push(`${label} threw ${(error as Error).message?.slice(0, 200)}`);
-              continue;
-            } finally {
-              calls++;
-            }
-            if (status >= 500) failures.push(`${label} answered ${status}`);
-            const changed = changedTables(before, fingerprint());
-            if (changed.length) failures.push(`${label} wrote to ${changed.join(", ")}`);
-          }
-        }
+    for (const c of cases) {
+      signInAs(c.person);
+      const url = urlOf(c.route, c.params, c.query);
+      const headers: Record<string, string> = {};
+      if (c.type) headers["content-type"] = c.type;
+      if (c.method !== "GET" && r.chance(0.3)) headers["stripe-signature"] = r.pick(["t=1,v1=deadbeef", "", HUGE.slice(0, 5000), "t=abc"]);
+      const label = `${c.method} ${c.route.url} as ${c.person} (seed ${SEED}): ${c.what}`;
+      const before = fingerprint();
+      try {
+        const res = await c.handler(new Request(url, { method: c.method, headers, body: c.method === "GET" ? undefined : (c.body ?? "") }), { params: Promise.resolve(c.params) });
+        await res.arrayBuffer();
+        if (res.status >= 500) failures.push(`${label} answered ${res.status}`);
+      } catch (error) {
+        failures.push(`${label} threw ${(error as Error).message?.slice(0, 200)}`);
       }
+      const changed = changedTables(before, fingerprint());
+      if (changed.length) failures.push(`${label} wrote to ${changed.join(", ")}`);
     }
-    console.info(`[fuzz-routes] seed ${SEED}: ${routes.length} route files, ${routes.flatMap((x) => x.methods).length} methods × ${PEOPLE.length} people × ${CASES} cases = ${calls} calls`);
+    const methods = routes.flatMap((x) => x.methods).length;
+    console.info(`[fuzz-routes] seed ${SEED}: ${routes.length} route files, ${methods} methods, ${cases.length} calls (${(cases.length / methods).toFixed(0)} per method on average)`);
     expect(failures.slice(0, 25)).toEqual([]);
     expect(prototypeIsClean()).toBe(true);
   }, 120_000);
