@@ -18,7 +18,7 @@ const optionalText = (max: number) =>
 
 export const isoDateField = (label: string) => calendarDate(label, `Enter ${label} as a calendar date, like 2026-05-01.`);
 
-export const monthField = calendarMonth("Choose the month, like 2026-05 (years 1900 to 2200).");
+export const monthField = calendarMonth("Choose the month, like 2026-05.");
 
 /** A positive amount in major units, at most two decimals. */
 export const amountField = (label: string) =>

@@ -47,8 +47,15 @@ export function isMonthInRange(v: string): boolean {
   return /^\d{4}-(0[1-9]|1[0-2])$/.test(v) && isIsoDateInRange(`${v}-01`);
 }
 
-export function calendarMonth(message: string) {
-  return z.string({ error: message }).trim().refine(isMonthInRange, { error: message });
+/** A month "YYYY-MM" within the product's years; `formatMessage` for anything that is not a month. */
+export function calendarMonth(formatMessage: string) {
+  return z
+    .string({ error: formatMessage })
+    .trim()
+    .superRefine((v, ctx) => {
+      if (!/^\d{4}-(0[1-9]|1[0-2])$/.test(v)) ctx.addIssue({ code: "custom", message: formatMessage });
+      else if (!isMonthInRange(v)) ctx.addIssue({ code: "custom", message: `Choose a month between ${DATE_YEARS}.` });
+    });
 }
 
 /** Record ids are generated (UUIDs); anything else that reaches a lookup is at least short and plain. */
@@ -60,5 +67,5 @@ export function isRecordId(v: unknown): v is string {
 
 /** A required record id; every problem (missing, too long, odd characters) has the field's one message. */
 export function recordId(message: string) {
-  return z.string({ error: message }).trim().min(1, { error: message }).regex(RECORD_ID, { error: message });
+  return z.string({ error: message }).trim().regex(RECORD_ID, { error: message });
 }
