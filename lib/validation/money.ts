@@ -149,7 +149,7 @@ export const manualMatchSchema = z.object({
     .transform((v) => (Array.isArray(v) ? v : [v]).filter(Boolean))
     .refine((v) => v.length > 0, { error: "Choose at least one item from the books." })
     .refine((v) => v.length <= 200, { error: "Choose at most 200 items from the books at once." })
-    .pipe(z.array(recordId("Choose items from the books."))),
+    .pipe(z.array(z.string().regex(/^(line|payout|pay|ref):[A-Za-z0-9][A-Za-z0-9_-]{0,63}$/, { error: "Choose items from the books." }))),
 });
 
 export const BOOK_ACCOUNTS = ["bank-fees", "processor-fees", "late-fee-income", "dues-income", "flight-income", "member-credits", "retained-funds"] as const;

@@ -198,7 +198,8 @@ describe("fuzz: every server action refuses malformed input specifically and wri
             if (r.chance(0.15) && f.kind !== "file" && !accepts(f.schema, [f.baseline ?? "", value])) value = [f.baseline ?? "", value];
             if (r.chance(0.1) && !accepts(f.schema, undefined)) value = undefined;
             form[f.name] = value;
-            if (r.chance(0.3)) for (const k of POLLUTION_KEYS) form[k] = r.pick(['{"polluted":true}', "polluted", HUGE.slice(0, 100)]);
+            // Prototype-pollution keys, once or twice (twice makes the form reader build an array).
+            if (r.chance(0.3)) for (const k of POLLUTION_KEYS) form[k] = r.chance(0.5) ? ['{"polluted":true}', "polluted"] : r.pick(['{"polluted":true}', "polluted", HUGE.slice(0, 100)]);
             what = `${f.name} = ${value instanceof File ? `file "${value.name}"` : JSON.stringify(value)?.slice(0, 60) ?? "(missing)"}`;
           }
           const label = `${a.name} (${a.file}) #${i} as ${person} (seed ${SEED}): ${what}`;
