@@ -83,6 +83,6 @@ describe("grounding notices", () => {
     const entry = await statusOf("N0534L");
     expect(entry.status).not.toBe("grounded");
     // 08:00 in America/Chicago on 1 June is 13:00 UTC (CDT, UTC−5)
-    expect(entry.reasons.find((r) => r.code === "notice-pending")?.text).toBe("Grounding notice takes effect 2999-06-01T13:00:00.000Z: Ramp closed for resurfacing");
+    expect(entry.reasons.find((r) => r.code === "notice-pending")?.text).toBe("Grounding notice takes effect 2199-06-01T13:00:00.000Z: Ramp closed for resurfacing");
   });
 });
