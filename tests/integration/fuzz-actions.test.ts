@@ -38,7 +38,7 @@ const GENERIC_FAILURE = /something went wrong/i;
 
 type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
 type Field = { name: string; schema: z.ZodType; baseline?: string; kind: "date" | "datetime" | "month" | "id" | "file" | "other" };
-type Found = { file: string; name: string; action: Action; fields: Field[] };
+type Found = { file: string; name: string; action: Action; fields: Field[]; schema?: z.ZodType };
 
 type Def = { type?: string; in?: Node; out?: Node; innerType?: Node; options?: Node[]; entries?: Record<string, string> };
 type Node = { shape?: Record<string, z.ZodType>; _zod?: { def: Def } };
@@ -66,6 +66,10 @@ function enumValues(schema: unknown, depth = 0): string[] {
 
 const accepts = (schema: z.ZodType, value: unknown) => schema.safeParse(value).success;
 
+/** Where one field's valid value depends on another's (an end after its start, weights in order). */
+const BASELINE_BY_NAME: Record<string, string> = {
+  endsAt: "2026-12-01T11:00", confirmPreflight: "on", birthDate: "1980-04-02", timeZone: "America/Chicago", emptyWeight: "1500", maxTakeoffWeight: "2300",
+};
 const PLAIN_TEXT = "A plain description that is long enough for every check";
 const NOT_DATES = [PLAIN_TEXT, "Rowan Pike", "N0123X", "abc", "12", "Cockpit: documents aboard"];
 const TEXT_CANDIDATES = [
@@ -77,7 +81,7 @@ const TEXT_CANDIDATES = [
 function buildFields(schema: unknown, ids: Record<string, string[]>): Field[] {
   return Object.entries(shapeOf(schema)).map(([name, fieldSchema]) => {
     const fromIds = /Ids?$/.test(name) ? idsFor(name, ids) : [];
-    const candidates = [...fromIds, ...enumValues(fieldSchema), ...TEXT_CANDIDATES];
+    const candidates = [...(BASELINE_BY_NAME[name] ? [BASELINE_BY_NAME[name]] : []), ...fromIds, ...enumValues(fieldSchema), ...TEXT_CANDIDATES];
     const baseline = candidates.find((c) => accepts(fieldSchema, c));
     // A field is a date (or a month, a date and time) when it takes one and refuses plain words.
     const only = (example: string) => accepts(fieldSchema, example) && !NOT_DATES.some((v) => accepts(fieldSchema, v));
@@ -116,7 +120,7 @@ async function discoverActions(): Promise<Found[]> {
       const own = new RegExp(`export const ${name}\\s*=\\s*(?:clubAction|userAction)\\(\\{[\\s\\S]*?schema:\\s*(\\w+)`).exec(source)?.[1];
       const schemaNames = own ? [own] : named;
       const fields = schemaNames.flatMap((n) => (schemas.has(n) ? buildFields(schemas.get(n), ids) : []));
-      found.push({ file: path.relative(ROOT, file), name, action: value as Action, fields });
+      found.push({ file: path.relative(ROOT, file), name, action: value as Action, fields, schema: own ? (schemas.get(own) as z.ZodType | undefined) : undefined });
     }
   }
   return found;
@@ -158,6 +162,15 @@ describe("fuzz: every server action refuses malformed input specifically and wri
     // Only actions without input (an empty schema, or none) have no fields to make wrong.
     const withoutFields = actions.filter((a) => a.fields.length === 0).map((a) => a.name).sort();
     expect(withoutFields).toEqual(["sendDocumentReminders", "sendReminders", "signOutAction", "startCardPayment"]);
+  });
+
+  it("builds a valid form for nearly every action, so that each refusal comes from the one field made wrong", () => {
+    const invalid = actions
+      .filter((a) => a.schema)
+      .filter((a) => !a.schema!.safeParse(Object.fromEntries(a.fields.filter((f) => f.baseline !== undefined).map((f) => [f.name, f.baseline]))).success)
+      .map((a) => a.name);
+    // Bank-match items carry prefixed ids ("line:…") that no table holds as such.
+    expect(invalid).toEqual(["matchBankLine"]);
   });
 
   it("every date, month and id field refuses impossible and out-of-range values", () => {
