@@ -126,12 +126,15 @@ async function discoverActions(): Promise<Found[]> {
   return found;
 }
 
-/** Values this field must refuse: by its kind, else those of the generic ones its own schema refuses.
- *  A file is refused by its content after parsing, so every bad file counts. */
+/** Values this field must refuse: every bad date, month, id or file for a field of that kind
+ *  (whatever its schema says), else the generic ones its own schema refuses. */
 function badValuesFor(f: Field): unknown[] {
   if (f.kind === "file") return badFiles();
-  const pool = f.kind === "date" ? BAD_DATES : f.kind === "datetime" ? BAD_DATETIMES : f.kind === "month" ? BAD_MONTHS : f.kind === "id" ? BAD_IDS : GENERIC_BAD;
-  return pool.filter((v) => !accepts(f.schema, v));
+  if (f.kind === "date") return BAD_DATES;
+  if (f.kind === "datetime") return BAD_DATETIMES;
+  if (f.kind === "month") return BAD_MONTHS;
+  if (f.kind === "id") return BAD_IDS;
+  return GENERIC_BAD.filter((v) => !accepts(f.schema, v));
 }
 
 function toForm(values: Record<string, unknown>): FormData {
