@@ -1,3 +1,4 @@
+import "server-only";
 import sharp from "sharp";
 import type { AllowedMime } from "./sniff";
 
