@@ -10,11 +10,15 @@ import { ActionError, type ActionState } from "./action-state";
 
 type Schema = z.ZodType<unknown, unknown>;
 
+/** Form keys that would reach an object's prototype rather than a field; no schema has them. */
+const PROTOTYPE_KEYS = new Set(["__proto__", "constructor", "prototype"]);
+
 export function formDataToObject(formData: FormData): Record<string, unknown> {
   const out: Record<string, unknown> = {};
   for (const key of new Set(formData.keys())) {
     const all = formData.getAll(key);
     const k = key.endsWith("[]") ? key.slice(0, -2) : key;
+    if (PROTOTYPE_KEYS.has(k)) continue;
     out[k] = key.endsWith("[]") || all.length > 1 ? all : all[0];
   }
   return out;

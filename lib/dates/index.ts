@@ -15,6 +15,21 @@ export function isIsoDate(value: string): boolean {
   return mo >= 1 && mo <= 12 && d >= 1 && d <= lastDayOfMonth(y, mo);
 }
 
+/**
+ * The calendar years any date typed into the product may fall in. Wider than any club's real
+ * records (a 1903 aircraft, a member born in 1930, a policy ending in 2150) and narrow enough
+ * that date arithmetic and instants never leave the range JavaScript dates represent.
+ */
+export const MIN_CALENDAR_YEAR = 1900;
+export const MAX_CALENDAR_YEAR = 2200;
+
+/** An ISO calendar date whose year lies within MIN_CALENDAR_YEAR..MAX_CALENDAR_YEAR. */
+export function isIsoDateInRange(value: string): boolean {
+  if (!isIsoDate(value)) return false;
+  const year = Number(value.slice(0, 4));
+  return year >= MIN_CALENDAR_YEAR && year <= MAX_CALENDAR_YEAR;
+}
+
 export function parseIsoDate(value: string): { year: number; month: number; day: number } {
   if (!isIsoDate(value)) throw new RangeError(`Not an ISO calendar date: "${value}"`);
   const [y, m, d] = value.split("-").map(Number) as [number, number, number];

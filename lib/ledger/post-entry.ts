@@ -1,7 +1,7 @@
 import { and, eq, inArray, max } from "drizzle-orm";
 import { clubs, journalEntries, journalLines, ledgerAccounts, reconciliationPeriods, type EntryKind } from "@/db/schema";
 import { newId } from "@/db/schema/columns";
-import { isIsoDate, type IsoDate } from "@/lib/dates";
+import { MAX_CALENDAR_YEAR, MIN_CALENDAR_YEAR, isIsoDateInRange, type IsoDate } from "@/lib/dates";
 import { assertBalanced, reversalOf } from "@/lib/money";
 import type { DbLike } from "./accounts";
 import { LedgerError, PeriodLockedError } from "./errors";
@@ -75,8 +75,9 @@ export function postEntries(tx: DbLike, clubId: string, entries: readonly PostEn
       continue;
     }
     assertBalanced(entry.lines);
-    if (!isIsoDate(entry.date)) throw new LedgerError(`"${entry.date}" is not a calendar date.`, "invalid", "date");
-    if (entry.dueOn && !isIsoDate(entry.dueOn)) throw new LedgerError(`"${entry.dueOn}" is not a calendar date.`, "invalid", "dueOn");
+    // The journal is dated within the product's years (MIN_CALENDAR_YEAR..MAX_CALENDAR_YEAR), whoever posts.
+    if (!isIsoDateInRange(entry.date)) throw new LedgerError(`"${entry.date}" is not a calendar date between ${MIN_CALENDAR_YEAR} and ${MAX_CALENDAR_YEAR}.`, "invalid", "date");
+    if (entry.dueOn && !isIsoDateInRange(entry.dueOn)) throw new LedgerError(`"${entry.dueOn}" is not a calendar date between ${MIN_CALENDAR_YEAR} and ${MAX_CALENDAR_YEAR}.`, "invalid", "dueOn");
     const id = newId();
     if (entry.sourceKey) existing.set(entry.sourceKey, id);
     fresh.push({ entry, id });

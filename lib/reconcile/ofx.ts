@@ -1,4 +1,4 @@
-import { formatIsoDate, isIsoDate } from "@/lib/dates";
+import { formatIsoDate, isIsoDateInRange } from "@/lib/dates";
 import { currencyExponent } from "@/lib/money/format";
 import { ReconcileParseError } from "./errors";
 import { childOf, findAll, parseOfxTree, valueAt, type OfxNode } from "./ofx-tree";
@@ -40,7 +40,7 @@ const OFX_DATE = /^(\d{4})(\d{2})(\d{2})(?:\d{4}(?:\d{2}(?:[.,]\d{1,3})?)?)?\s*(
 export function parseOfxDate(text: string): string {
   const m = OFX_DATE.exec(text.trim());
   const iso = m ? formatIsoDate(Number(m[1]), Number(m[2]), Number(m[3])) : "";
-  if (!m || !isIsoDate(iso)) throw new Error(`"${text}" is not an OFX date (YYYYMMDD[HHMMSS[.XXX]][[offset:TZ]])`);
+  if (!m || !isIsoDateInRange(iso)) throw new Error(`"${text}" is not an OFX date (YYYYMMDD[HHMMSS[.XXX]][[offset:TZ]])`);
   return iso;
 }
 

@@ -1,4 +1,4 @@
-import { formatIsoDate, isIsoDate } from "@/lib/dates";
+import { formatIsoDate, isIsoDateInRange } from "@/lib/dates";
 
 export type AmountOptions = {
   /** European style: "1.234,56" (a comma before the cents, dots or spaces between thousands). */
@@ -90,6 +90,6 @@ export function parseDateText(text: string, format: DateFormat = "ISO"): string 
   if (!m) throw new Error(`"${text.trim()}" is not a ${format} date`);
   const [y, mo, d] = pattern.order.map((i) => Number(m[i])) as [number, number, number];
   const iso = formatIsoDate(y, mo, d);
-  if (!isIsoDate(iso)) throw new Error(`"${text.trim()}" is not a calendar date`);
+  if (!isIsoDateInRange(iso)) throw new Error(`"${text.trim()}" is not a calendar date between 1900 and 2200`);
   return iso;
 }

@@ -26,3 +26,13 @@ export function canReadUpload(ability: AppAbility, upload: Pick<Upload, "subject
       return false;
   }
 }
+
+/**
+ * Files every member of the club may open (aircraft and squawk photos, inspection paperwork)
+ * may sit in the browser's private cache for a few minutes; every other kind (a member's
+ * documents and medical, reports, receipts, statements, bulletin attachments that may have a
+ * narrower audience) is "no-store": never kept by the browser or anything in between.
+ */
+export function isClubWideUpload(upload: Pick<Upload, "subjectType">): boolean {
+  return upload.subjectType === "Squawk" || upload.subjectType === "Aircraft" || upload.subjectType === "InspectionCompletion";
+}

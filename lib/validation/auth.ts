@@ -4,12 +4,13 @@ export const emailSchema = z
   .string({ error: "Enter your e-mail address." })
   .trim()
   .toLowerCase()
+  .max(254, { error: "Enter a valid e-mail address, like name@example.com." })
   .pipe(z.email({ error: "Enter a valid e-mail address, like name@example.com." }));
 
 export const passwordSignInSchema = z.object({
   email: emailSchema,
   password: z.string({ error: "Enter your password." }).min(1, { error: "Enter your password." }).max(200),
-  callbackUrl: z.string().optional(),
+  callbackUrl: z.string().max(2000).optional(),
 });
 
 export const newPasswordSchema = z
@@ -17,7 +18,7 @@ export const newPasswordSchema = z
   .min(10, { error: "Use at least 10 characters for your password." })
   .max(200, { error: "Use at most 200 characters." });
 
-export const magicLinkSchema = z.object({ email: emailSchema, callbackUrl: z.string().optional() });
+export const magicLinkSchema = z.object({ email: emailSchema, callbackUrl: z.string().max(2000).optional() });
 
 export const acceptInvitationSchema = z.object({
   token: z.string().min(20).max(200),

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { isIsoDate } from "@/lib/dates";
+import { calendarDate, isRecordId, localDateTimeField, recordId } from "./primitives";
 import { checkbox, hoursField } from "./fleet";
 
 // Bookings, dispatch and check-in. Times are typed in the club's time zone as "YYYY-MM-DDTHH:MM"
@@ -7,7 +7,7 @@ import { checkbox, hoursField } from "./fleet";
 
 const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "medicalExpired", "inArrears", "statusUnknown"] as const;
 
-const id = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, { error: `Choose ${what}.` }).max(64, { error: `Choose ${what}.` });
+const id = (what: string) => recordId(`Choose ${what}.`);
 
 const blankToUndefined = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
 
@@ -15,16 +15,10 @@ function optionalText(label: string, max: number) {
   return z.preprocess(blankToUndefined, z.string().trim().max(max, { error: `Keep ${label} to ${max} characters.` }).optional()).transform((v) => v ?? null);
 }
 
-const optionalId = z.preprocess(blankToUndefined, z.string().trim().max(64).optional()).transform((v) => v ?? null);
+const optionalId = z.preprocess(blankToUndefined, z.string().trim().refine(isRecordId, { error: "Choose someone from the list." }).optional()).transform((v) => v ?? null);
 
 export function localDateTime(label: string) {
-  return z
-    .string({ error: `Enter ${label}.` })
-    .trim()
-    .min(1, { error: `Enter ${label}.` })
-    .refine((v) => /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/.test(v) && isIsoDate(v.slice(0, 10)) && Number(v.slice(11, 13)) < 24 && Number(v.slice(14, 16)) < 60, {
-      error: `Enter ${label} as a date and time.`,
-    });
+  return localDateTimeField(label, `Enter ${label} as a date and time.`);
 }
 
 const acceptedGuards = z
@@ -127,11 +121,7 @@ export const feedTokenSchema = z.object({ intent: z.enum(["create", "revoke"], {
 /** Query of the fleet views and the JSON list: a day or a week around a date. */
 export const bookingRangeSchema = z.object({
   view: z.enum(["day", "week"]).default("week"),
-  date: z
-    .string()
-    .trim()
-    .refine((v) => isIsoDate(v), { error: "Give the date as YYYY-MM-DD." })
-    .optional(),
+  date: calendarDate("the date", "Give the date as YYYY-MM-DD.").optional(),
 });
 
 export type CreateBookingInput = z.output<typeof createBookingSchema>;

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { isValidTimeZone } from "@/lib/dates";
 import { emailSchema } from "./auth";
+import { recordId } from "./primitives";
 
 export const CURRENCIES = ["USD", "EUR", "CAD", "GBP", "AUD", "NZD", "CHF"] as const;
 
@@ -22,4 +23,4 @@ export const createClubSchema = z.object({
   adminEmail: emailSchema,
 });
 
-export const assignAdminSchema = z.object({ clubId: z.string().min(1), adminEmail: emailSchema });
+export const assignAdminSchema = z.object({ clubId: recordId("Choose a club."), adminEmail: emailSchema });

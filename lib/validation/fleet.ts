@@ -1,11 +1,11 @@
 import { z } from "zod";
-import { isIsoDate } from "@/lib/dates";
+import { calendarDate, localDateTimeField, recordId } from "./primitives";
 
 // Shared by the fleet actions, handlers and tests. Every field says what is wrong in words.
 
 const MAX_HOURS = 99_999.9;
 
-const id = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, { error: `Choose ${what}.` }).max(64);
+const id = (what: string) => recordId(`Choose ${what}.`);
 
 function text(label: string, min: number, max: number) {
   return z
@@ -25,11 +25,7 @@ function optionalText(label: string, max: number) {
 
 export const checkbox = z.preprocess((v) => v === "on" || v === "true" || v === true || v === "1", z.boolean());
 
-export const isoDateField = (label: string) =>
-  z
-    .string({ error: `Enter ${label}.` })
-    .trim()
-    .refine((v) => isIsoDate(v), { error: `Enter ${label} as a date (YYYY-MM-DD).` });
+export const isoDateField = (label: string) => calendarDate(label, `Enter ${label} as a date (YYYY-MM-DD).`);
 
 const optionalIsoDate = (label: string) =>
   z.preprocess((v) => (typeof v === "string" && v.trim() === "" ? undefined : v), isoDateField(label).optional()).transform((v) => v ?? null);
@@ -227,11 +223,7 @@ export const issueNoticeSchema = z.object({
   /** Local date and time in the club's time zone ("2026-05-01T14:00"); empty = now. */
   effectiveAt: z.preprocess(
     (v) => (typeof v === "string" && v.trim() === "" ? undefined : v),
-    z
-      .string()
-      .trim()
-      .refine((v) => /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/.test(v) && isIsoDate(v.slice(0, 10)), { error: "Enter the effective time as a date and time." })
-      .optional(),
+    localDateTimeField("the effective time", "Enter the effective time as a date and time.").optional(),
   ),
 });
 
@@ -247,7 +239,7 @@ export const liftNoticeSchema = z.object({
 export const logFlightSchema = z
   .object({
     aircraftId: id("an aircraft"),
-    pilotId: optionalText("the pilot", 64),
+    pilotId: z.preprocess((v) => (typeof v === "string" && v.trim() === "" ? undefined : v), id("the pilot").optional()).transform((v) => v ?? null),
     flownOn: isoDateField("the date flown"),
     hobbsOut: hoursField("Hobbs out"),
     hobbsIn: hoursField("Hobbs in"),

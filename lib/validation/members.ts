@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { ROLES } from "@/permissions/roles";
 import { emailSchema } from "./auth";
+import { recordId } from "./primitives";
 
 export const roleSchema = z.enum(ROLES, { error: "Choose a role from the list." });
 
@@ -14,11 +15,11 @@ const rolesField = z
 
 export const inviteMemberSchema = z.object({ email: emailSchema, roles: rolesField });
 
-export const changeRolesSchema = z.object({ membershipId: z.string().min(1), roles: rolesField });
+export const changeRolesSchema = z.object({ membershipId: recordId("Choose a member."), roles: rolesField });
 
 export const membershipStatusSchema = z.object({
-  membershipId: z.string().min(1),
-  status: z.enum(["active", "inactive"]),
+  membershipId: recordId("Choose a member."),
+  status: z.enum(["active", "inactive"], { error: "Choose active or inactive." }),
 });
 
-export const revokeInvitationSchema = z.object({ invitationId: z.string().min(1) });
+export const revokeInvitationSchema = z.object({ invitationId: recordId("Choose an invitation.") });

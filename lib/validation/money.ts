@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { isIsoDate } from "@/lib/dates";
+import { calendarDate, calendarMonth, recordId } from "./primitives";
 import { DUES_PERIODS, MEMBER_CATEGORIES } from "@/db/schema/money";
 
 // Amounts are typed in major units ("95", "95.50") and turned into minor units of the club's
@@ -16,16 +16,9 @@ const optionalText = (max: number) =>
     .optional()
     .transform((v) => (v ? v : undefined));
 
-export const isoDateField = (label: string) =>
-  z
-    .string({ error: `Enter ${label}.` })
-    .trim()
-    .refine((v) => isIsoDate(v), { error: `Enter ${label} as a calendar date, like 2026-05-01.` });
+export const isoDateField = (label: string) => calendarDate(label, `Enter ${label} as a calendar date, like 2026-05-01.`);
 
-export const monthField = z
-  .string({ error: "Choose the month, like 2026-05." })
-  .trim()
-  .regex(/^\d{4}-(0[1-9]|1[0-2])$/, { error: "Choose the month, like 2026-05." });
+export const monthField = calendarMonth("Choose the month, like 2026-05.");
 
 /** A positive amount in major units, at most two decimals. */
 export const amountField = (label: string) =>
@@ -52,7 +45,7 @@ export const signedAmountField = (label: string) =>
     .transform((v) => v.replace(/[,\s]/g, "").replace(/^\((.*)\)$/, "-$1"))
     .pipe(z.string().regex(/^-?\d{1,10}(\.\d{1,2})?$/, { error: `Enter ${label} as printed on the statement, like 4210.55 or -12.00.` }));
 
-const id = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, { error: `Choose ${what}.` }).max(100);
+const id = (what: string) => recordId(`Choose ${what}.`);
 
 const checkbox = z
   .union([z.literal("on"), z.literal("true"), z.literal("false"), z.literal("")])
@@ -62,7 +55,7 @@ const checkbox = z
 export const billingRunSchema = z.object({ month: monthField });
 
 export const duesPlanSchema = z.object({
-  planId: z.string().trim().max(100).optional().transform((v) => v || undefined),
+  planId: z.string().trim().max(64).optional().transform((v) => v || undefined).pipe(recordId("Choose a plan.").optional()),
   name: text("a name for the plan", 80),
   period: z.enum(DUES_PERIODS, { error: "Choose monthly, quarterly or annual." }),
   category: z.enum(MEMBER_CATEGORIES, { error: "Choose the member category the plan is for." }),
@@ -72,7 +65,7 @@ export const duesPlanSchema = z.object({
 
 export const assignDuesSchema = z.object({
   memberUserId: id("a member"),
-  planId: z.string().trim().max(100).optional().transform((v) => v || undefined),
+  planId: z.string().trim().max(64).optional().transform((v) => v || undefined).pipe(recordId("Choose a plan.").optional()),
   startsOn: isoDateField("the date the plan starts"),
 });
 
@@ -108,7 +101,7 @@ export const reverseEntrySchema = z.object({
     .trim()
     .optional()
     .transform((v) => v || undefined)
-    .refine((v) => v === undefined || isIsoDate(v), { error: "Enter the date as a calendar date, like 2026-05-01." }),
+    .pipe(isoDateField("the date").optional()),
 });
 
 export const DATE_FORMATS = ["ISO", "MM/DD/YYYY", "DD/MM/YYYY", "DD.MM.YYYY"] as const;
@@ -124,8 +117,8 @@ export const bankImportSchema = z
       .optional()
       .transform((v) => v || undefined)
       .pipe(signedAmountField("the closing balance").optional()),
-    periodStart: z.string().trim().optional().transform((v) => v || undefined).refine((v) => v === undefined || isIsoDate(v), { error: "Enter the first day as a date, like 2026-04-01." }),
-    periodEnd: z.string().trim().optional().transform((v) => v || undefined).refine((v) => v === undefined || isIsoDate(v), { error: "Enter the last day as a date, like 2026-04-30." }),
+    periodStart: z.string().trim().optional().transform((v) => v || undefined).pipe(calendarDate("the first day", "Enter the first day as a date, like 2026-04-01.").optional()),
+    periodEnd: z.string().trim().optional().transform((v) => v || undefined).pipe(calendarDate("the last day", "Enter the last day as a date, like 2026-04-30.").optional()),
     dateColumn: column,
     amountColumn: column,
     debitColumn: column,
@@ -154,7 +147,9 @@ export const manualMatchSchema = z.object({
   bookIds: z
     .union([z.string(), z.array(z.string())], { error: "Choose at least one item from the books." })
     .transform((v) => (Array.isArray(v) ? v : [v]).filter(Boolean))
-    .refine((v) => v.length > 0, { error: "Choose at least one item from the books." }),
+    .refine((v) => v.length > 0, { error: "Choose at least one item from the books." })
+    .refine((v) => v.length <= 200, { error: "Choose at most 200 items from the books at once." })
+    .pipe(z.array(z.string().regex(/^(line|payout|pay|ref):[A-Za-z0-9][A-Za-z0-9_-]{0,63}$/, { error: "Choose items from the books." }))),
 });
 
 export const BOOK_ACCOUNTS = ["bank-fees", "processor-fees", "late-fee-income", "dues-income", "flight-income", "member-credits", "retained-funds"] as const;

@@ -1,22 +1,19 @@
 import { z } from "zod";
 import { BULLETIN_AUDIENCES, BULLETIN_URGENCIES, DOCUMENT_KINDS, REPORT_STATUSES } from "@/db/schema/safety";
 import { isIsoDate } from "@/lib/dates";
+import { calendarDate, recordId } from "./primitives";
 import { CONTRIBUTING_FACTORS } from "@/lib/safety/labels";
 
 // Form fields arrive as strings; an empty text box means "not given".
 const blankToUndefined = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
 
-export const isoDateField = (what: string) =>
-  z
-    .string({ error: `Enter ${what}.` })
-    .trim()
-    .refine(isIsoDate, { error: `Enter ${what} as a date (YYYY-MM-DD).` });
+export const isoDateField = (what: string) => calendarDate(what, `Enter ${what} as a date (YYYY-MM-DD).`);
 
 const optionalDate = (what: string) => z.preprocess(blankToUndefined, isoDateField(what).optional());
 
 const optionalText = (max: number, tooLong: string) => z.preprocess(blankToUndefined, z.string().trim().max(max, { error: tooLong }).optional());
 
-const idField = z.string({ error: "Missing record id." }).trim().min(1, { error: "Missing record id." });
+const idField = recordId("Missing record id.");
 
 const checkbox = z.preprocess((v) => v === "on" || v === "true" || v === "1" || v === true, z.boolean());
 
@@ -98,7 +95,7 @@ export const reportNoteSchema = z.object({
 
 export const groundFromReportSchema = z.object({
   reportId: idField,
-  aircraftId: z.string({ error: "Choose the aircraft to ground." }).trim().min(1, { error: "Choose the aircraft to ground." }),
+  aircraftId: recordId("Choose the aircraft to ground."),
   reason: z.string({ error: "Say why the aircraft is grounded." }).trim().min(10, { error: "Say why the aircraft is grounded (10 characters or more)." }).max(1000, { error: "Keep the reason to 1,000 characters." }),
 });
 
@@ -145,7 +142,7 @@ export const outsideFlightSchema = z.object({
 });
 
 export const recordCheckoutSchema = z.object({
-  userId: z.string({ error: "Choose the member." }).trim().min(1, { error: "Choose the member." }),
+  userId: recordId("Choose the member."),
   typeGroup: typeGroupText,
   checkedOutOn: isoDateField("the checkout date"),
   instructorCertificateNumber: z

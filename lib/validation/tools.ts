@@ -1,10 +1,15 @@
 import { z } from "zod";
 import { checkbox, filesField } from "./fleet";
+import { recordId } from "./primitives";
 
 // Pilot tools and the preflight record. Lists that a club edits (stations, tanks, envelope
 // corners, checklist items) are typed one per line; each line's problem is named by its number.
 
-const id = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, { error: `Choose ${what}.` }).max(64, { error: `Choose ${what}.` });
+const id = (what: string) => recordId(`Choose ${what}.`);
+
+/** A typed list (one item per line) is at most this long, whatever its lines say. */
+const MAX_LIST_CHARS = 20_000;
+const listText = (what: string) => z.string({ error: `Enter ${what}.` }).max(MAX_LIST_CHARS, { error: `Keep ${what} under ${MAX_LIST_CHARS.toLocaleString("en-US")} characters.` });
 const blank = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
 
 export function decimal(label: string, opts: { min?: number; max: number; allowZero?: boolean }) {
@@ -13,7 +18,7 @@ export function decimal(label: string, opts: { min?: number; max: number; allowZ
     .string({ error: `Enter ${label}.` })
     .trim()
     .min(1, { error: `Enter ${label}.` })
-    .refine((v) => /^-?\d+(\.\d+)?$/.test(v), { error: `Enter ${label} as a number, like 12.5.` })
+    .refine((v) => v.length <= 32 && /^-?\d+(\.\d+)?$/.test(v), { error: `Enter ${label} as a number, like 12.5.` })
     .transform(Number)
     .refine((v) => v >= min && v <= opts.max, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be between ${min} and ${opts.max}.` })
     .refine((v) => opts.allowZero !== false || v !== 0, { error: `${label[0]!.toUpperCase()}${label.slice(1)} cannot be zero.` });
@@ -37,7 +42,7 @@ function slug(name: string, index: number): string {
 }
 
 /** "Front seats | 37 | 400" → a station; the limit may be left off ("Front seats | 37"). */
-const stationsField = z.string({ error: "Enter the stations." }).transform((v, ctx) => {
+const stationsField = listText("the stations").transform((v, ctx) => {
   const out: { key: string; name: string; arm: number; maxWeight: number | null }[] = [];
   let bad = false;
   lines(v).forEach((line, i) => {
@@ -55,7 +60,7 @@ const stationsField = z.string({ error: "Enter the stations." }).transform((v, c
 });
 
 /** "Left wing tank | 48 | 20" → a tank with its arm and usable capacity. */
-const tanksField = z.string({ error: "Enter the fuel tanks." }).transform((v, ctx) => {
+const tanksField = listText("the fuel tanks").transform((v, ctx) => {
   const out: { key: string; name: string; arm: number; usableCapacity: number }[] = [];
   lines(v).forEach((line, i) => {
     const [name, arm, capacity] = line.split("|").map((p) => p.trim());
@@ -72,7 +77,7 @@ const tanksField = z.string({ error: "Enter the fuel tanks." }).transform((v, ct
 function envelopeField(required: boolean) {
   return z.preprocess(
     (v) => (v === undefined ? "" : v),
-    z.string().transform((v, ctx) => {
+    listText("the envelope").transform((v, ctx) => {
       const corners: [number, number][] = [];
       const all = lines(v);
       if (all.length === 0) {
@@ -111,8 +116,8 @@ export const weightBalanceProfileSchema = z
   });
 
 const weightList = (label: string, max: number) =>
-  z.preprocess((v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]), z.array(zeroIfBlank(label, max)));
-const keyList = z.preprocess((v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]), z.array(z.string().trim().min(1).max(80)));
+  z.preprocess((v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]), z.array(zeroIfBlank(label, max)).max(50, { error: "At most 50 entries." }));
+const keyList = z.preprocess((v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]), z.array(z.string().trim().min(1).max(80)).max(50, { error: "At most 50 entries." }));
 
 const loadingFields = {
   category: z.enum(["normal", "utility"], { error: "Choose the category." }).default("normal"),
@@ -154,7 +159,7 @@ export const densityToolMetricSchema = z.object({
 });
 
 /** Checklist lines: "Section: item". Documents are one per line. */
-const checklistField = z.string({ error: "Enter the checklist." }).transform((v, ctx) => {
+const checklistField = listText("the checklist").transform((v, ctx) => {
   const out: { section: string; label: string }[] = [];
   lines(v).forEach((line, i) => {
     const at = line.indexOf(":");
@@ -170,7 +175,7 @@ const checklistField = z.string({ error: "Enter the checklist." }).transform((v,
 const listField = (what: string, max: number, required?: string) =>
   z.preprocess(
     (v) => (v === undefined ? "" : v),
-    z.string().transform((v, ctx) => {
+    listText(`the ${what} list`).transform((v, ctx) => {
       const all = lines(v);
       all.forEach((l, i) => l.length > max && ctx.addIssue({ code: "custom", message: `Line ${i + 1}: keep each ${what} to ${max} characters.` }));
       if (required && all.length === 0) ctx.addIssue({ code: "custom", message: required });
@@ -224,8 +229,8 @@ export const preflightRecordSchema = z.preprocess(
   gatherItems,
   z.object({
     bookingId: id("a booking"),
-    items: z.record(z.string().max(64), itemSchema),
-    sumps: z.array(z.object({ point: z.string().trim().min(1).max(80), result: z.enum(["clear", "contaminated"], { error: "Choose clear, or water or sediment found." }) })),
+    items: z.record(z.string().max(64), itemSchema).refine((v) => Object.keys(v).length <= 200, { error: "At most 200 checklist items." }),
+    sumps: z.array(z.object({ point: z.string().trim().min(1).max(80), result: z.enum(["clear", "contaminated"], { error: "Choose clear, or water or sediment found." }) })).max(50, { error: "At most 50 drain points." }),
     fuelTank: keyList,
     fuelQuantity: weightList("the fuel", 5_000),
     oilQuantity: decimal("the oil quantity", { max: 50 }),

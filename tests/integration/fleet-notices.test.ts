@@ -78,11 +78,11 @@ describe("grounding notices", () => {
   it("a notice that takes effect later does not ground yet, and says when it will", async () => {
     signInAs("maintenance@hangarline.test");
     const plane = planeByRegistration(CLUB, "N0534L");
-    const state = await issueGroundingNotice(EMPTY, form({ club: CLUB, aircraftId: plane.id, category: "safety", reason: "Ramp closed for resurfacing", effectiveAt: "2999-06-01T08:00" }));
+    const state = await issueGroundingNotice(EMPTY, form({ club: CLUB, aircraftId: plane.id, category: "safety", reason: "Ramp closed for resurfacing", effectiveAt: "2199-06-01T08:00" }));
     expect(state.ok).toBe(true);
     const entry = await statusOf("N0534L");
     expect(entry.status).not.toBe("grounded");
     // 08:00 in America/Chicago on 1 June is 13:00 UTC (CDT, UTC−5)
-    expect(entry.reasons.find((r) => r.code === "notice-pending")?.text).toBe("Grounding notice takes effect 2999-06-01T13:00:00.000Z: Ramp closed for resurfacing");
+    expect(entry.reasons.find((r) => r.code === "notice-pending")?.text).toBe("Grounding notice takes effect 2199-06-01T13:00:00.000Z: Ramp closed for resurfacing");
   });
 });

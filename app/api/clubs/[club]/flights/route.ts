@@ -3,11 +3,12 @@ import { z } from "zod";
 import { getAircraft } from "@/db/queries/fleet";
 import { listFlights } from "@/db/queries/fleet-flights";
 import { apiError, withClub, zodToFields } from "@/lib/server/api";
+import { recordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
 const query = z.object({
-  aircraftId: z.string().min(1).max(64).optional(),
+  aircraftId: recordId("aircraftId must be an aircraft's id").optional(),
   flagged: z.enum(["1"], { error: "flagged must be 1 when given" }).optional(),
 });
 

@@ -3,11 +3,12 @@ import { z } from "zod";
 import { getAircraft } from "@/db/queries/fleet";
 import { listSquawks } from "@/db/queries/fleet-squawks";
 import { apiError, withClub, zodToFields } from "@/lib/server/api";
+import { recordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
 const query = z.object({
-  aircraftId: z.string().min(1).max(64).optional(),
+  aircraftId: recordId("aircraftId must be an aircraft's id").optional(),
   status: z.enum(["open", "closed"], { error: "status must be open or closed" }).optional(),
 });
 

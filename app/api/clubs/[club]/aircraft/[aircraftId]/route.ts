@@ -6,6 +6,7 @@ import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
 import { listSquawks } from "@/db/queries/fleet-squawks";
 import { apiError, withClub } from "@/lib/server/api";
 import { can } from "@/permissions";
+import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
@@ -13,6 +14,7 @@ export const dynamic = "force-dynamic";
 export async function GET(_req: Request, { params }: { params: Promise<{ club: string; aircraftId: string }> }) {
   const { club, aircraftId } = await params;
   return withClub(club, ["read", "Aircraft"], (ctx) => {
+    if (!isRecordId(aircraftId)) return apiError("not_found", "Not found.");
     const plane = getAircraft(ctx.db, ctx.club.id, aircraftId);
     const entry = plane ? getAircraftStatusEntry(ctx.db, ctx.club, plane.id) : undefined;
     if (!plane || !entry) return apiError("not_found", "Not found.");

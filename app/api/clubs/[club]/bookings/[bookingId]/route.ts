@@ -2,12 +2,14 @@ import { NextResponse } from "next/server";
 import { getBooking } from "@/db/queries/bookings";
 import { visibleBookingWarnings } from "@/lib/bookings/warning-access";
 import { apiError, withClub } from "@/lib/server/api";
+import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
 export async function GET(_request: Request, { params }: { params: Promise<{ club: string; bookingId: string }> }) {
   const { club: slug, bookingId } = await params;
   return withClub(slug, ["read", "Booking"], (ctx) => {
+    if (!isRecordId(bookingId)) return apiError("not_found", "Not found.");
     const b = getBooking(ctx.db, ctx.club.id, bookingId);
     if (!b) return apiError("not_found", "Not found.");
     return NextResponse.json({

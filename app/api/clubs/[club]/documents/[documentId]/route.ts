@@ -4,6 +4,7 @@ import { isoDateInTimeZone } from "@/lib/dates";
 import { apiError, withClub } from "@/lib/server/api";
 import { documentJson } from "@/lib/safety/document-json";
 import { canOn } from "@/permissions";
+import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
@@ -11,6 +12,7 @@ export const dynamic = "force-dynamic";
 export async function GET(_req: Request, { params }: { params: Promise<{ club: string; documentId: string }> }) {
   const { club, documentId } = await params;
   return withClub(club, null, (ctx) => {
+    if (!isRecordId(documentId)) return apiError("not_found", "Not found.");
     const doc = getMemberDocument(ctx.db, ctx.club.id, documentId);
     if (!doc || !canOn(ctx.ability, "read", "MemberDocument", { userId: doc.userId })) return apiError("not_found", "Not found.");
     const today = isoDateInTimeZone(new Date(), ctx.club.timeZone);

@@ -21,7 +21,9 @@ export async function GET(req: Request, { params }: { params: Promise<{ club: st
       if (!parsed.success) return apiError("invalid", "Dates are YYYY-MM-DD.", { [key]: parsed.error.issues.map((i) => i.message) });
       range[key] = parsed.data;
     }
-    if (url.searchParams.get("format") !== "csv") return NextResponse.json({ currency: ctx.club.currency, entries: listJournal(ctx.db, ctx.club.id, range) });
+    const format = url.searchParams.get("format") ?? "json";
+    if (format !== "json" && format !== "csv") return apiError("invalid", "Check the query.", { format: ["format is json or csv."] });
+    if (format !== "csv") return NextResponse.json({ currency: ctx.club.currency, entries: listJournal(ctx.db, ctx.club.id, range) });
     if (!can(ctx.ability, "export", "Ledger")) return apiError("forbidden", "Only a treasurer or club admin can export the journal.");
     const exp = currencyExponent(ctx.club.currency);
     const rows = journalLinesForExport(ctx.db, ctx.club.id, range);

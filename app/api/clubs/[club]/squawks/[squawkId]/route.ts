@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { listUploadsFor } from "@/db/queries/fleet";
 import { getSquawk, listSquawkEvents } from "@/db/queries/fleet-squawks";
 import { apiError, withClub } from "@/lib/server/api";
+import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
@@ -9,6 +10,7 @@ export const dynamic = "force-dynamic";
 export async function GET(_req: Request, { params }: { params: Promise<{ club: string; squawkId: string }> }) {
   const { club, squawkId } = await params;
   return withClub(club, ["read", "Squawk"], (ctx) => {
+    if (!isRecordId(squawkId)) return apiError("not_found", "Not found.");
     const squawk = getSquawk(ctx.db, ctx.club.id, squawkId);
     if (!squawk) return apiError("not_found", "Not found.");
     const { reportedById: _r, closedById: _c, ...rest } = squawk;

@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { getCurrentMedical, getOwnBirthDate } from "@/db/queries/safety-documents";
 import { apiError, withClub } from "@/lib/server/api";
 import { medicalViewFor } from "@/lib/safety/medical-view";
+import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
@@ -13,6 +14,7 @@ export const dynamic = "force-dynamic";
 export async function GET(_req: Request, { params }: { params: Promise<{ club: string; userId: string }> }) {
   const { club, userId } = await params;
   return withClub(club, null, (ctx) => {
+    if (!isRecordId(userId)) return apiError("not_found", "Not found.");
     const medical = getCurrentMedical(ctx.db, ctx.club.id, userId);
     const view = medical ? medicalViewFor(ctx.ability, userId, medical) : null;
     if (!medical || !view) return apiError("not_found", "Not found.");

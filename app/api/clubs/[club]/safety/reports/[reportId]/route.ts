@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { getReport, getReporterName, listReportEvents } from "@/db/queries/safety-reports";
 import { apiError, withClub } from "@/lib/server/api";
 import { canReadReport, canTriageReports } from "@/lib/safety/report-access";
+import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
@@ -13,6 +14,7 @@ export const dynamic = "force-dynamic";
 export async function GET(_req: Request, { params }: { params: Promise<{ club: string; reportId: string }> }) {
   const { club, reportId } = await params;
   return withClub(club, null, (ctx) => {
+    if (!isRecordId(reportId)) return apiError("not_found", "Not found.");
     const report = getReport(ctx.db, ctx.club.id, reportId);
     if (!report || !canReadReport(ctx.ability, report)) return apiError("not_found", "Not found.");
     const officer = canTriageReports(ctx.ability);

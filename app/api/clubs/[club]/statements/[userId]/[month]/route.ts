@@ -6,6 +6,7 @@ import { statementFor } from "@/lib/ledger/statements";
 import { apiError, withClub } from "@/lib/server/api";
 import { monthField } from "@/lib/validation/money";
 import { canOn } from "@/permissions";
+import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
@@ -13,6 +14,7 @@ export const dynamic = "force-dynamic";
 export async function GET(_req: Request, { params }: { params: Promise<{ club: string; userId: string; month: string }> }) {
   const { club, userId, month } = await params;
   return withClub(club, null, async (ctx) => {
+    if (!isRecordId(userId)) return apiError("not_found", "Not found.");
     // Someone else's statement is answered like a missing one.
     if (!canOn(ctx.ability, "read", "Account", { userId: userId })) return apiError("not_found", "Not found.");
     const parsed = monthField.safeParse(month);

@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { bulletinAckStats, getBulletin } from "@/db/queries/safety-bulletins";
 import { apiError, withClub } from "@/lib/server/api";
+import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
 
@@ -8,6 +9,7 @@ export const dynamic = "force-dynamic";
 export async function GET(_req: Request, { params }: { params: Promise<{ club: string; bulletinId: string }> }) {
   const { club, bulletinId } = await params;
   return withClub(club, ["readAcknowledgements", "Bulletin"], (ctx) => {
+    if (!isRecordId(bulletinId)) return apiError("not_found", "Not found.");
     const bulletin = getBulletin(ctx.db, ctx.club.id, bulletinId);
     if (!bulletin || bulletin.status !== "published") return apiError("not_found", "Not found.");
     const stats = bulletinAckStats(ctx.db, ctx.club.id, bulletin);
