@@ -2,6 +2,7 @@
 // method): wrong types, huge strings, impossible and out-of-range dates, invalid ids, pollution
 // keys, malformed JSON and empty bodies, as a club admin (who may do most) and as a plain member.
 // No answer may be a 500, and no call may change a row of any table. FUZZ_SEED=<n> reproduces a run.
+import { NextRequest } from "next/server";
 import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
@@ -179,7 +180,7 @@ describe("fuzz: every route handler refuses malformed input without a 500 and wi
       const label = `${c.method} ${c.route.url} as ${c.person} (seed ${SEED}): ${c.what}`;
       const before = fingerprint();
       try {
-        const res = await c.handler(new Request(url, { method: c.method, headers, body: c.method === "GET" ? undefined : (c.body ?? "") }), { params: Promise.resolve(c.params) });
+        const res = await c.handler(new NextRequest(url, { method: c.method, headers, body: c.method === "GET" ? undefined : (c.body ?? "") }), { params: Promise.resolve(c.params) });
         await res.arrayBuffer();
         if (res.status >= 500) failures.push(`${label} answered ${res.status}`);
       } catch (error) {
