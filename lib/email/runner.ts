@@ -2,6 +2,7 @@ import { AsyncResource } from "node:async_hooks";
 import { getDb } from "@/db/client";
 import { createEmailProvider, type EmailProvider } from "./provider";
 import { drainOutbox } from "./worker";
+import { logError } from "@/lib/server/log";
 
 // The in-process worker: started once by instrumentation.ts, and nudged right after a message is
 // queued so that a sign-in link does not wait for the next tick.
@@ -27,7 +28,7 @@ function drainNow(): void {
   }
   s.running = drainOutbox(getDb(), s.provider)
     .then(() => undefined)
-    .catch((error) => console.error("[outbox] drain failed", error))
+    .catch((error) => logError("outbox", "drain failed", error))
     .finally(() => {
       s.running = null;
       if (s.again) {
