@@ -7,7 +7,7 @@ import { inspect } from "node:util";
 
 const MAX_MESSAGE = 300;
 const STACK_FRAMES = 6;
-const EMAIL = /[\w.!#$%&'*+/=?^`{|}~-]+@[\w-]+(?:\.[\w-]+)*/g;
+const EMAIL = /[\w.+-]+@[\w-]+(?:\.[\w-]+)+/g;
 const LONG_DIGITS = /\d{9,}/g; // card, phone and account numbers
 const SQL_START = /^(failed query:|select |insert |update |delete |replace |with |pragma )/i;
 
@@ -22,8 +22,15 @@ export function scrubText(text: string): string {
   return out.length > MAX_MESSAGE ? `${out.slice(0, MAX_MESSAGE)}…` : out;
 }
 
+/** The error's class when its `name` is the generic one (drizzle's query error keeps "Error"). */
+function nameOf(e: ErrorLike): string {
+  const ctor = (e as { constructor?: { name?: unknown } }).constructor?.name;
+  if (typeof e.name === "string" && e.name !== "Error") return e.name;
+  return typeof ctor === "string" && ctor !== "Object" && ctor !== "" ? ctor : "Error";
+}
+
 function isQueryError(e: ErrorLike): boolean {
-  return e.name === "DrizzleQueryError" || (typeof e.message === "string" && /^Failed query:/.test(e.message)) || "params" in (e as object);
+  return nameOf(e) === "DrizzleQueryError" || (typeof e.message === "string" && /^Failed query:/.test(e.message)) || "params" in (e as object);
 }
 
 function messageOf(e: ErrorLike): string {
@@ -46,7 +53,7 @@ export function describeError(error: unknown, withFrames = true): string {
   const parts: string[] = [];
   let current: ErrorLike | undefined = error as ErrorLike;
   for (let depth = 0; current && depth < 4; depth++) {
-    const name = typeof current.name === "string" ? current.name : "Error";
+    const name = nameOf(current);
     const code = typeof current.code === "string" || typeof current.code === "number" ? ` [${current.code}]` : "";
     parts.push(`${name}${code}: ${messageOf(current)}`);
     current = current.cause && typeof current.cause === "object" ? (current.cause as ErrorLike) : undefined;
@@ -66,23 +73,27 @@ function format(scope: string, message: string, error: unknown, details?: Record
   return `[${scope}] ${scrubText(message)}${extra}${error === undefined ? "" : ` — ${describeError(error)}`}`;
 }
 
-// Kept before installConsoleScrubber() replaces the console methods, so the helper never loops.
-const original = { error: console.error.bind(console), warn: console.warn.bind(console), info: console.info.bind(console) };
+type Sink = Pick<Console, "error" | "warn" | "info">;
+// The console methods as they were before installConsoleScrubber() replaced them (so the helper
+// never loops); until then, the console itself.
+// Kept on globalThis: the server bundles this module more than once (instrumentation, routes).
+const shared = globalThis as unknown as { __hangarlineRawConsole?: Sink | null };
+const out = (): Sink => shared.__hangarlineRawConsole ?? console;
 
 /**
  * An unexpected failure. `details` are identifiers only (an event id, a row id), never names or
  * addresses; they are scrubbed all the same.
  */
 export function logError(scope: string, message: string, error?: unknown, details?: Record<string, Detail>): void {
-  original.error(format(scope, message, error, details));
+  out().error(format(scope, message, error, details));
 }
 
 export function logWarn(scope: string, message: string, error?: unknown, details?: Record<string, Detail>): void {
-  original.warn(format(scope, message, error, details));
+  out().warn(format(scope, message, error, details));
 }
 
 export function logInfo(scope: string, message: string, details?: Record<string, Detail>): void {
-  original.info(format(scope, message, undefined, details));
+  out().info(format(scope, message, undefined, details));
 }
 
 function scrubArg(arg: unknown): unknown {
@@ -94,12 +105,19 @@ function scrubArg(arg: unknown): unknown {
 
 /**
  * The framework logs what a page or route handler throws (with the error's message) on its own;
- * this makes those lines pass the same scrubbing. Installed once per server process.
+ * this makes those lines pass the same scrubbing. Installed once per server process; returns
+ * the undo (for tests).
  */
-export function installConsoleScrubber(): void {
-  const flag = globalThis as unknown as { __hangarlineConsoleScrubbed?: boolean };
-  if (flag.__hangarlineConsoleScrubbed) return;
-  flag.__hangarlineConsoleScrubbed = true;
-  console.error = (...args: unknown[]) => original.error(...args.map(scrubArg));
-  console.warn = (...args: unknown[]) => original.warn(...args.map(scrubArg));
+export function installConsoleScrubber(): () => void {
+  if (shared.__hangarlineRawConsole) return () => undefined;
+  const before: Sink = { error: console.error, warn: console.warn, info: console.info };
+  const raw: Sink = { error: before.error.bind(console), warn: before.warn.bind(console), info: before.info.bind(console) };
+  shared.__hangarlineRawConsole = raw;
+  console.error = (...args: unknown[]) => raw.error(...args.map(scrubArg));
+  console.warn = (...args: unknown[]) => raw.warn(...args.map(scrubArg));
+  return () => {
+    console.error = before.error;
+    console.warn = before.warn;
+    shared.__hangarlineRawConsole = null;
+  };
 }
