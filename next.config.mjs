@@ -4,7 +4,7 @@
 // get the strict one here.
 const permissionsPolicy = [
   // Photos are taken through file inputs, which need no permission; nothing else is used.
-  "accelerometer=()", "autoplay=()", "bluetooth=()", "camera=()", "display-capture=()", "encrypted-media=()",
+  "accelerometer=()", "autoplay=()", "camera=()", "display-capture=()", "encrypted-media=()",
   "fullscreen=()", "geolocation=()", "gyroscope=()", "hid=()", "idle-detection=()", "magnetometer=()",
   "microphone=()", "midi=()", "payment=()", "picture-in-picture=()", "publickey-credentials-get=()",
   "screen-wake-lock=()", "serial=()", "usb=()", "xr-spatial-tracking=()", "browsing-topics=()",
