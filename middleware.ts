@@ -41,7 +41,8 @@ export function pageCsp(nonce: string, opts: { dev?: boolean; https?: boolean } 
     // <style>/<link> need the nonce or to be ours; style="…" attributes (charts, layout widths)
     // are allowed on their own: they cannot run code and every load they could start is 'self'.
     `style-src 'self' 'nonce-${nonce}'`,
-    `style-src-elem 'self' 'nonce-${nonce}'${opts.dev ? " 'unsafe-inline'" : ""}`,
+    // Dev injects <style> elements from script without a nonce ('unsafe-inline' counts only without one).
+    opts.dev ? "style-src-elem 'self' 'unsafe-inline'" : `style-src-elem 'self' 'nonce-${nonce}'`,
     "style-src-attr 'unsafe-inline'",
     "img-src 'self' blob: data:",
     "font-src 'self'",

@@ -55,7 +55,9 @@ export function describeError(error: unknown, withFrames = true): string {
   for (let depth = 0; current && depth < 4; depth++) {
     const name = nameOf(current);
     const code = typeof current.code === "string" || typeof current.code === "number" ? ` [${current.code}]` : "";
-    parts.push(`${name}${code}: ${messageOf(current)}`);
+    // The digest is what the error page shows the person: it ties their report to this line.
+    const digest = typeof (current as { digest?: unknown }).digest === "string" ? ` (digest ${(current as { digest: string }).digest})` : "";
+    parts.push(`${name}${code}: ${messageOf(current)}${digest}`);
     current = current.cause && typeof current.cause === "object" ? (current.cause as ErrorLike) : undefined;
   }
   return parts.join(" ← caused by ") + (withFrames ? framesOf(error as ErrorLike) : "");

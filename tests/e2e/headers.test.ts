@@ -151,9 +151,10 @@ describe("pages with charts and forms work under the policy", () => {
     await chart.locator(".recharts-line-curve").nth(1).waitFor();
     expect(await chart.locator(".recharts-line-curve").count()).toBe(2);
     // The chart's own positioning is inline style, applied and measured (not blocked): it has a size.
-    const box = await chart.locator("svg.recharts-surface").first().boundingBox();
-    expect(box?.width ?? 0).toBeGreaterThan(100);
-    expect(box?.height ?? 0).toBeGreaterThan(100);
+    const sizes = await chart.locator("svg.recharts-surface").evaluateAll((svgs) => svgs.map((s) => s.getBoundingClientRect()).map((r) => [r.width, r.height]));
+    const [width, height] = sizes.sort((a, b) => b[0]! * b[1]! - a[0]! * a[1]!)[0] ?? [0, 0];
+    expect(width).toBeGreaterThan(200);
+    expect(height).toBeGreaterThan(150);
     // The stylesheet applied and the shipped fonts loaded from our own origin.
     expect(await page.evaluate(() => getComputedStyle(document.body).fontFamily)).toMatch(/sans/i);
     await expect.poll(() => page.evaluate(async () => (await document.fonts.ready, [...document.fonts].filter((f) => f.status === "loaded").length))).toBeGreaterThan(0);

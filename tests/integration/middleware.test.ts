@@ -5,7 +5,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { NextRequest } from "next/server";
 import { afterEach, describe, expect, it } from "vitest";
-import { API_CSP, CALLER_CHECKED_ELSEWHERE, MULTIPART_ROUTES, OWN_CSP_ROUTES, middleware } from "@/middleware";
+import { API_CSP, CALLER_CHECKED_ELSEWHERE, MULTIPART_ROUTES, OWN_CSP_ROUTES, middleware, pageCsp } from "@/middleware";
 
 const APP = "http://app.test";
 const ORIGINAL_AUTH_URL = process.env.AUTH_URL;
@@ -68,6 +68,16 @@ describe("the page Content-Security-Policy", () => {
     expect(csp).not.toMatch(/script-src[^;]*'unsafe-(inline|eval)'/);
     expect(csp).not.toMatch(/https?:\/\//); // nothing is loaded from another host
     expect(d.has("upgrade-insecure-requests")).toBe(false);
+  });
+
+  it("next dev gets what its fast refresh needs; production never does", () => {
+    const dev = directives(pageCsp("abc", { dev: true }));
+    expect(dev.get("script-src")).toBe("'self' 'nonce-abc' 'strict-dynamic' 'unsafe-eval'");
+    expect(dev.get("style-src-elem")).toBe("'self' 'unsafe-inline'");
+    const prod = directives(pageCsp("abc"));
+    expect(prod.get("script-src")).toBe("'self' 'nonce-abc' 'strict-dynamic'");
+    expect(prod.get("style-src-elem")).toBe("'self' 'nonce-abc'");
+    expect(prod.get("style-src-attr")).toBe("'unsafe-inline'"); // chart and width styles; attributes cannot run code
   });
 
   it("asks for https subresources only when the request came over https", () => {
