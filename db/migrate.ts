@@ -2,6 +2,7 @@ import { migrate } from "drizzle-orm/better-sqlite3/migrator";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { databaseFile, openDatabase, type Db } from "./client";
+import { logInfo } from "../lib/server/log";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 export const MIGRATIONS_FOLDER = path.join(here, "migrations");
@@ -14,5 +15,5 @@ if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.a
   const db = openDatabase();
   migrateDatabase(db);
   db.$client.close();
-  console.log(`Migrated ${databaseFile()}`);
+  logInfo("migrate", `Migrated ${databaseFile()}`);
 }

@@ -9,6 +9,7 @@ import { seedFleet } from "./fleet";
 import { seedSafety } from "./safety";
 import { seedMoney } from "./money";
 import { seedBookings } from "./bookings";
+import { logInfo } from "@/lib/server/log";
 
 export async function seedDemo(db: Db): Promise<void> {
   const foundation = await seedFoundation(db);
@@ -23,10 +24,10 @@ if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.a
   migrateDatabase(db);
   const existing = db.select({ n: count() }).from(clubs).get()?.n ?? 0;
   if (existing > 0 && !process.argv.includes("--force")) {
-    console.log(`${databaseFile()} already holds ${existing} clubs; not seeding again (delete the file to start over).`);
+    logInfo("seed", `${databaseFile()} already holds ${existing} clubs; not seeding again (delete the file to start over).`);
   } else {
     await seedDemo(db);
-    console.log(`Seeded the demo scenario into ${databaseFile()}`);
+    logInfo("seed", `Seeded the demo scenario into ${databaseFile()}`);
   }
   db.$client.close();
 }

@@ -7,6 +7,7 @@ import { resolveClubContext, type ClubContext } from "@/lib/server/club-context"
 import { getSessionUser, type SessionUser } from "@/lib/server/session";
 import { allows, explainDenied, type AppAbility, type Permission as Grant } from "@/permissions";
 import { ActionError, type ActionState } from "./action-state";
+import { logError } from "@/lib/server/log";
 
 type Schema = z.ZodType<unknown, unknown>;
 
@@ -45,7 +46,7 @@ async function settle<R>(work: () => Promise<Outcome<R>>, successMessage: string
     outcome = await work();
   } catch (error) {
     if (error instanceof ActionError) return fail(error.message, error.fieldErrors);
-    console.error("[action] unexpected failure", error);
+    logError("action", "unexpected failure", error);
     return fail("Something went wrong and nothing was saved. Try again; if it keeps failing, tell a club admin.");
   }
   // Framework control flow stays outside the try/catch above.

@@ -3,6 +3,7 @@ import { getDb } from "@/db/client";
 import { createEmailProvider, type EmailProvider } from "./provider";
 import { composeSafetyDigests, type DigestTickResult } from "./safety-digest";
 import { drainOutbox } from "./worker";
+import { logError } from "@/lib/server/log";
 
 // The in-process worker: started once by instrumentation.ts, and nudged right after a message is
 // queued so that a sign-in link does not wait for the next tick.
@@ -28,7 +29,7 @@ function drainNow(): void {
   }
   s.running = drainOutbox(getDb(), s.provider)
     .then(() => undefined)
-    .catch((error) => console.error("[outbox] drain failed", error))
+    .catch((error) => logError("outbox", "drain failed", error))
     .finally(() => {
       s.running = null;
       if (s.again) {
@@ -47,7 +48,7 @@ export function runScheduledTick(now = new Date()): DigestTickResult {
   try {
     result = composeSafetyDigests(getDb(), now);
   } catch (error) {
-    console.error("[outbox] scheduled tick failed", error instanceof Error ? error.message : "unknown error");
+    logError("outbox", "scheduled tick failed", error);
   }
   if (result.messages > 0) kickOutbox();
   return result;

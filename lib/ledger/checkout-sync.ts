@@ -3,6 +3,7 @@ import { recordCardPayment } from "./card-payments";
 import { snapshotOfIntent } from "./card-events";
 import { isLedgerError } from "./errors";
 import { getPaymentsClient } from "./payments-client";
+import { logError } from "@/lib/server/log";
 
 /**
  * Asks the provider about one checkout session and posts it if it was paid: for the return
@@ -18,6 +19,6 @@ export async function syncCheckoutSession(db: Db, clubId: string, sessionId: str
     db.transaction((tx) => recordCardPayment(tx, snapshot));
   } catch (error) {
     // The webhook remains the way in; this page only tries to be early.
-    if (!isLedgerError(error)) console.error("[payments] return-page check failed", error);
+    if (!isLedgerError(error)) logError("payments", "return-page check failed", error);
   }
 }

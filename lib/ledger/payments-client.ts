@@ -10,11 +10,3 @@ export function getPaymentsClient(): Stripe {
   if (!holder.__paymentsClient || holder.__paymentsClient.key !== key) holder.__paymentsClient = { key, client: createPaymentsClient() };
   return holder.__paymentsClient.client;
 }
-
-/** Matches the local fake's default (fake-services/payments/server.ts), for development and tests. */
-export const LOCAL_WEBHOOK_SECRET = "whsec_fake_local_secret";
-
-/** The secret webhooks are signed with; the local fake's default when none is configured. */
-export function webhookSecret(): string {
-  return process.env.PAYMENTS_WEBHOOK_SECRET || process.env.STRIPE_WEBHOOK_SECRET || LOCAL_WEBHOOK_SECRET;
-}

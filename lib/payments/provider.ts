@@ -42,6 +42,25 @@ export function createPaymentsClient(opts: PaymentsClientOptions = {}): Stripe {
   });
 }
 
+/** The local stand-in's signing secret (fake-services/payments/server.ts uses the same default). */
+export const LOCAL_STANDIN_WEBHOOK_SECRET = "whsec_fake_local_secret";
+
+const LOOPBACK_HOSTS = /^(localhost|127(?:\.\d{1,3}){3}|::1|\[::1\])$/i;
+
+/**
+ * The secret webhooks must be signed with, or "" when there is none: a configured
+ * PAYMENTS_WEBHOOK_SECRET (or STRIPE_WEBHOOK_SECRET); otherwise the stand-in's well-known secret,
+ * but only while the SDK is pointed at the stand-in on this machine (PAYMENTS_HOST is a loopback
+ * address). Against the hosted provider an unset secret means every delivery is refused, never
+ * checked against a secret anyone can read in this repository.
+ */
+export function webhookSigningSecret(env: Record<string, string | undefined> = process.env): string {
+  const configured = env.PAYMENTS_WEBHOOK_SECRET || env.STRIPE_WEBHOOK_SECRET;
+  if (configured) return configured;
+  const host = env.PAYMENTS_HOST?.trim();
+  return host && LOOPBACK_HOSTS.test(host) ? LOCAL_STANDIN_WEBHOOK_SECRET : "";
+}
+
 export type WebhookVerification = { ok: true; event: Stripe.Event } | { ok: false; error: string };
 
 /**

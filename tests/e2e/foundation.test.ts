@@ -1,7 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { expectNoHorizontalOverflow, linksIn, newPage, screenshot, signIn, waitForEmail } from "./harness";
+import { baseUrl, expectNoHorizontalOverflow, linksIn, newPage, screenshot, signIn, waitForEmail } from "./harness";
 
 async function navLabels(page: import("playwright-core").Page): Promise<string[]> {
   const nav = page.locator("aside").getByRole("navigation", { name: "Club sections" });
@@ -157,7 +157,8 @@ describe("tenant isolation", () => {
     for (const route of apis) {
       const url = fill(route, "cottonwood-flyers");
       for (const method of ["GET", "POST"] as const) {
-        const res = await page.request.fetch(url, { method, maxRedirects: 0, data: method === "POST" ? "{}" : undefined, headers: { "content-type": "application/json" } });
+        // Same-origin JSON, as the app's own pages send it: anything else is refused (403/415) before any handler.
+        const res = await page.request.fetch(url, { method, maxRedirects: 0, data: method === "POST" ? "{}" : undefined, headers: { "content-type": "application/json", origin: baseUrl } });
         // 405 means the route has no such method at all, which leaks nothing.
         if (res.status() !== 404 && res.status() !== 405) failures.push(`${method} ${url} → ${res.status()}`);
       }

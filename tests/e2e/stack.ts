@@ -5,7 +5,8 @@ import os from "node:os";
 import path from "node:path";
 
 export const ROOT = path.resolve(import.meta.dirname, "../..");
-export const E2E_DIST = ".next-e2e";
+// E2E_DIST_DIR lets a parallel worker keep its own build (default .next-e2e).
+export const E2E_DIST = process.env.E2E_DIST_DIR ?? ".next-e2e";
 
 export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {

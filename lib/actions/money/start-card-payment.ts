@@ -9,6 +9,7 @@ import { formatMoney } from "@/lib/money";
 import { appUrl } from "@/lib/server/urls";
 import { emptySchema } from "@/lib/validation/money";
 import { canOn } from "@/permissions";
+import { logError } from "@/lib/server/log";
 
 // The provider's smallest charge is about half a major unit (from memory of its documentation).
 const MIN_CARD_MINOR = 50;
@@ -47,7 +48,7 @@ export const startCardPayment = clubAction({
       return { paymentId, balance, sessionId: session.id, url: session.url };
     } catch (error) {
       if (error instanceof ActionError) throw error;
-      console.error("[payments] checkout session failed", error);
+      logError("payments", "checkout session failed", error);
       throw new ActionError("The payment provider could not be reached; nothing was charged. Try again in a minute.");
     }
   },

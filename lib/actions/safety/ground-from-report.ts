@@ -10,6 +10,7 @@ import { canTriageReports } from "@/lib/safety/report-access";
 import { groundFromReportSchema } from "@/lib/validation/safety";
 import { revalidatePath } from "next/cache";
 import { can } from "@/permissions";
+import { logError } from "@/lib/server/log";
 
 /**
  * Grounds an aircraft from a safety report through the fleet's own grounding action (which
@@ -46,7 +47,7 @@ export async function groundFromReport(_prev: ActionState, formData: FormData): 
       writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "safety_report.grounding", subjectType: "SafetyReport", subjectId: report.id, after: { groundingNoticeId: noticeId, aircraftId: parsed.data.aircraftId } });
     });
   } catch (error) {
-    console.error("[safety] grounding issued but not linked to the report", error);
+    logError("safety", "grounding issued but not linked to the report", error);
     return { ok: true, message: "The aircraft is grounded and members are being told, but the link to this report could not be saved.", fieldErrors: {} };
   }
   revalidatePath(`/clubs/${ctx.club.slug}/safety/reports/${report.id}`);

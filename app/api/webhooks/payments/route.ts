@@ -1,8 +1,9 @@
 import { NextResponse } from "next/server";
 import { getDb } from "@/db/client";
 import { processPaymentEvent } from "@/lib/ledger/card-events";
-import { getPaymentsClient, webhookSecret } from "@/lib/ledger/payments-client";
-import { verifyWebhook } from "@/lib/payments/provider";
+import { getPaymentsClient } from "@/lib/ledger/payments-client";
+import { verifyWebhook, webhookSigningSecret } from "@/lib/payments/provider";
+import { logError, logWarn } from "@/lib/server/log";
 
 export const dynamic = "force-dynamic";
 
@@ -10,10 +11,17 @@ export const dynamic = "force-dynamic";
  * The payment provider's signed webhook. The signature is checked on the raw bytes before the
  * body is read as data; a bad one is a 400 and nothing is written. The club comes from the
  * payment's own metadata and must exist. Replays and late events post nothing twice.
+ * Without a signing secret nothing can be checked, so every delivery is refused (503: the
+ * provider delivers it again once the secret is configured).
  */
 export async function POST(request: Request): Promise<Response> {
+  const secret = webhookSigningSecret();
+  if (!secret) {
+    logWarn("payments", "webhook refused: no signing secret configured (PAYMENTS_WEBHOOK_SECRET)");
+    return NextResponse.json({ error: { code: "not_configured", message: "Payment webhooks are not set up on this server; nothing was recorded." } }, { status: 503 });
+  }
   const payload = await request.text();
-  const verified = verifyWebhook(payload, request.headers.get("stripe-signature"), webhookSecret());
+  const verified = verifyWebhook(payload, request.headers.get("stripe-signature"), secret);
   if (!verified.ok) {
     return NextResponse.json({ error: { code: "invalid", message: `Webhook signature check failed: ${verified.error}` } }, { status: 400 });
   }
@@ -22,7 +30,7 @@ export async function POST(request: Request): Promise<Response> {
     return NextResponse.json({ received: true, eventId: verified.event.id, ...result });
   } catch (error) {
     // Not stored: the provider delivers the event again and it is processed then.
-    console.error("[payments] webhook processing failed", verified.event.id, error);
+    logError("payments", "webhook processing failed", error, { eventId: verified.event.id });
     return NextResponse.json({ error: { code: "unprocessable", message: "The event could not be processed now; deliver it again." } }, { status: 500 });
   }
 }
