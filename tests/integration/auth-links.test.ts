@@ -98,7 +98,7 @@ describe("production refuses to start without AUTH_URL and AUTH_SECRET", () => {
     const exit = vi.spyOn(process, "exit").mockImplementation(((code?: number) => {
       throw new Error(`process.exit(${code})`);
     }) as never);
-    const logged = vi.spyOn(console, "error").mockImplementation(() => undefined);
+    const logged = vi.spyOn(process.stderr, "write").mockImplementation(() => true);
     try {
       await expect(register()).rejects.toThrow("process.exit(1)");
       expect(String(logged.mock.calls[0]?.[0])).toMatch(/will not start in production[\s\S]*AUTH_URL is not set[\s\S]*AUTH_SECRET is not set/);

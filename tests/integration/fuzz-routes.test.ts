@@ -148,6 +148,9 @@ describe("fuzz: every route handler refuses malformed input without a 500 and wi
   beforeAll(async () => {
     await seedAllOnce();
     widenAdminRoles();
+    // With a signing secret configured the webhook reads (and must refuse) the malformed bodies;
+    // without one it refuses every request before reading (tests/integration/webhook-secret.test.ts).
+    process.env.PAYMENTS_WEBHOOK_SECRET ??= "whsec_fuzz_only_not_a_real_secret";
     routes = await discoverRoutes();
     // The auth library logs every refused request at length; the statuses are what is checked.
     vi.spyOn(console, "error").mockImplementation(() => undefined);
