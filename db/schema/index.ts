@@ -7,3 +7,4 @@ export * from "./fleet";
 export * from "./safety";
 export * from "./money";
 export * from "./bookings";
+export * from "./idempotency";
