@@ -5,11 +5,13 @@ import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { acceptInvitation } from "@/lib/actions/invitations/accept-invitation";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function AcceptInvitationForm({ token, needsAccount }: { token: string; needsAccount: boolean }) {
   const [state, action] = useActionState(acceptInvitation, initialActionState);
   return (
     <form action={action} noValidate aria-label="Accept invitation">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="token" value={token} />
       {needsAccount ? (

@@ -11,6 +11,7 @@ import { dispatchBooking } from "@/lib/actions/bookings/dispatch-booking";
 import { GuardNotes } from "./guard-notes";
 import { PendingButton } from "./pending-button";
 import { useKeptForm } from "./use-kept-form";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Choice = { id: string; label: string };
 
@@ -21,6 +22,7 @@ export function ChangeBookingForm({ slug, bookingId, defaults, instructors, late
   const e = state.fieldErrors;
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Change the booking">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <GuardNotes state={state} />
       <input type="hidden" name="club" value={slug} />
@@ -43,6 +45,7 @@ export function CancelBookingForm({ slug, bookingId, lateNote }: { slug: string;
   const [state, action] = useActionState(cancelBooking, initialActionState);
   return (
     <form action={action} noValidate aria-label="Cancel the booking">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
@@ -58,6 +61,7 @@ export function DispatchForm({ slug, bookingId, records }: { slug: string; booki
   const e = state.fieldErrors;
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Dispatch">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />

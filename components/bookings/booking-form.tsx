@@ -9,6 +9,7 @@ import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { GuardNotes } from "./guard-notes";
 import { PendingButton } from "./pending-button";
 import { useKeptForm } from "./use-kept-form";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Choice = { id: string; label: string };
 
@@ -24,6 +25,7 @@ export function BookingForm({ slug, aircraft, instructors, members, defaults }: 
   const e = state.fieldErrors;
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Book an aircraft">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <GuardNotes state={state} />
       <input type="hidden" name="club" value={slug} />

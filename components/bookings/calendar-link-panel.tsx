@@ -4,6 +4,7 @@ import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { manageCalendarLink } from "@/lib/actions/bookings/calendar-link";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function CalendarLinkPanel({ slug, hasLink }: { slug: string; hasLink: boolean }) {
   const [state, action] = useActionState(manageCalendarLink, initialActionState);
@@ -21,12 +22,14 @@ export function CalendarLinkPanel({ slug, hasLink }: { slug: string; hasLink: bo
       <p className="mb-3 text-sm text-ink-700">{live ? "You have a working calendar link. Making a new one stops the old one." : "You have no calendar link yet."}</p>
       <div className="flex flex-wrap gap-2">
         <form action={action}>
+          <IdempotencyKeyField answer={state} />
           <input type="hidden" name="club" value={slug} />
           <input type="hidden" name="intent" value="create" />
           <SubmitButton pendingText="Making…">{live ? "Make a new link" : "Make my calendar link"}</SubmitButton>
         </form>
         {live ? (
           <form action={action}>
+            <IdempotencyKeyField answer={state} />
             <input type="hidden" name="club" value={slug} />
             <input type="hidden" name="intent" value="revoke" />
             <SubmitButton variant="danger" pendingText="Turning off…">Turn the link off</SubmitButton>

@@ -6,6 +6,7 @@ import { initialActionState } from "@/lib/actions/action-state";
 import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
 import { PendingButton } from "./pending-button";
 import { useKeptForm } from "./use-kept-form";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, checkedIn }: { slug: string; bookingId: string; hobbs: number | null; tach: number | null; metric: boolean; rateText: string; checkedIn: boolean }) {
   const { state, onSubmit, pending } = useKeptForm(checkInBooking, initialActionState);
@@ -17,6 +18,7 @@ export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, ch
   if (checkedIn) return <p role="status">✓ This booking is checked in; the flight is in the log.</p>;
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Check in">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />

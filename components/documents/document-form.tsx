@@ -8,6 +8,7 @@ import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-fo
 import { recordDocument } from "@/lib/actions/documents/record-document";
 import { DOCUMENT_KINDS, type DocumentKind } from "@/db/schema/safety";
 import { DOCUMENT_KIND_LABELS } from "@/lib/safety/labels";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 const COPY: Record<DocumentKind, { issued: string; reference: string; details: string; expires: string | null }> = {
   pilot_certificate: { issued: "Date issued", reference: "Certificate number", details: "Certificate level and ratings", expires: null },
@@ -24,6 +25,7 @@ export function DocumentForm({ slug, today }: { slug: string; today: string }) {
   const e = state.fieldErrors;
   return (
     <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Record a document">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <SelectField label="Document" name="kind" value={kind} onChange={(ev) => setKind(ev.target.value as DocumentKind)} errors={e.kind}>

@@ -6,6 +6,7 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordMedical } from "@/lib/actions/documents/record-medical";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function MedicalForm({ slug, today, hasBirthDate }: { slug: string; today: string; hasBirthDate: boolean }) {
   const [state, action, pending] = useActionState(recordMedical, initialActionState);
@@ -14,6 +15,7 @@ export function MedicalForm({ slug, today, hasBirthDate }: { slug: string; today
   const e = state.fieldErrors;
   return (
     <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Record a medical">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-2">

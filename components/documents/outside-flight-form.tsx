@@ -6,6 +6,7 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordOutsideFlight } from "@/lib/actions/documents/record-outside-flight";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function OutsideFlightForm({ slug, today, typeGroups }: { slug: string; today: string; typeGroups: string[] }) {
   const [state, action, pending] = useActionState(recordOutsideFlight, initialActionState);
@@ -13,6 +14,7 @@ export function OutsideFlightForm({ slug, today, typeGroups }: { slug: string; t
   const e = state.fieldErrors;
   return (
     <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Add a flight from elsewhere">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-2">

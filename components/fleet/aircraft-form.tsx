@@ -7,6 +7,7 @@ import { initialActionState } from "@/lib/actions/action-state";
 import { createAircraft } from "@/lib/actions/fleet/create-aircraft";
 import { updateAircraft } from "@/lib/actions/fleet/update-aircraft";
 import { CheckboxField, FileField, TextAreaField } from "./form-bits";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export type AircraftFormValues = {
   id: string;
@@ -39,6 +40,7 @@ export function AircraftForm({ slug, currency, values }: { slug: string; currenc
   const v = values;
   return (
     <form action={action} noValidate aria-label={v ? `Edit ${v.registration}` : "Add an aircraft"}>
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       {v ? <input type="hidden" name="aircraftId" value={v.id} /> : null}

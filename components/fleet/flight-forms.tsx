@@ -7,6 +7,7 @@ import { initialActionState } from "@/lib/actions/action-state";
 import { logFlight } from "@/lib/actions/fleet/log-flight";
 import { reviewMeterFlag } from "@/lib/actions/fleet/review-meter-flag";
 import { TextAreaField } from "./form-bits";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type PlaneChoice = { id: string; registration: string; hobbs: number | null; tach: number | null };
 
@@ -16,6 +17,7 @@ export function LogFlightForm({ slug, aircraft, today, metric, fixedAircraftId }
   const e = state.fieldErrors;
   return (
     <form action={action} noValidate aria-label="Log a flight" key={state.ok ? `${state.message}-${Date.now()}` : "log"}>
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       {fixed ? (
@@ -50,6 +52,7 @@ export function ReviewMeterFlagForm({ slug, flightId }: { slug: string; flightId
   const [state, action] = useActionState(reviewMeterFlag, initialActionState);
   return (
     <form action={action} noValidate aria-label="Review meter flag">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="flightId" value={flightId} />

@@ -8,6 +8,7 @@ import { createInspectionItem } from "@/lib/actions/fleet/create-inspection-item
 import { recordCompletion } from "@/lib/actions/fleet/record-completion";
 import { updateInspectionItem } from "@/lib/actions/fleet/update-inspection-item";
 import { CheckboxField, FileField, TextAreaField } from "./form-bits";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function RecordCompletionForm({ slug, itemId, itemName, today, hoursBased, fixedDate, meterName, meterNow }: { slug: string; itemId: string; itemName: string; today: string; hoursBased: boolean; fixedDate: boolean; meterName: string; meterNow: number | null }) {
   const [state, action] = useActionState(recordCompletion, initialActionState);
@@ -15,6 +16,7 @@ export function RecordCompletionForm({ slug, itemId, itemName, today, hoursBased
   const p = `c-${itemId}`;
   return (
     <form action={action} noValidate aria-label={`Record ${itemName}`} key={state.ok ? `${state.message}-${Date.now()}` : "complete"}>
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="itemId" value={itemId} />
@@ -38,6 +40,7 @@ export function CreateItemForm({ slug, aircraftId }: { slug: string; aircraftId:
   const hours = kind === "hours" || kind === "months-or-hours";
   return (
     <form action={action} noValidate aria-label="Add an inspection item" key={state.ok ? `${state.message}-${Date.now()}` : "item"}>
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />
@@ -72,6 +75,7 @@ export function UpdateItemForm({ slug, itemId, hasUsage, canRetire }: { slug: st
   const p = `u-${itemId}`;
   return (
     <form action={action} noValidate aria-label="Update inspection item">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="itemId" value={itemId} />

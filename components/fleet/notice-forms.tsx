@@ -7,11 +7,13 @@ import { initialActionState } from "@/lib/actions/action-state";
 import { issueGroundingNotice } from "@/lib/actions/fleet/issue-grounding-notice";
 import { liftGroundingNotice } from "@/lib/actions/fleet/lift-grounding-notice";
 import { TextAreaField } from "./form-bits";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function IssueNoticeForm({ slug, aircraftId, registration, defaultCategory }: { slug: string; aircraftId: string; registration: string; defaultCategory: "safety" | "maintenance" }) {
   const [state, action] = useActionState(issueGroundingNotice, initialActionState);
   return (
     <form action={action} noValidate aria-label={`Ground ${registration}`} key={state.ok ? `${state.message}-${Date.now()}` : "issue"}>
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />
@@ -31,6 +33,7 @@ export function LiftNoticeForm({ slug, noticeId, category }: { slug: string; not
   const rts = category === "maintenance";
   return (
     <form action={action} noValidate aria-label="Lift grounding notice">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="noticeId" value={noticeId} />

@@ -8,11 +8,13 @@ import { closeSquawk } from "@/lib/actions/fleet/close-squawk";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
 import { triageSquawk } from "@/lib/actions/fleet/triage-squawk";
 import { CheckboxField, FileField, TextAreaField } from "./form-bits";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function ReportSquawkForm({ slug, aircraftId, registration }: { slug: string; aircraftId: string; registration: string }) {
   const [state, action] = useActionState(reportSquawk, initialActionState);
   return (
     <form action={action} noValidate aria-label={`Report a squawk on ${registration}`} key={state.ok ? `${state.message}-${Date.now()}` : "report"}>
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />
@@ -34,6 +36,7 @@ export function TriageSquawkForm({ slug, squawkId, current, limitation, determin
   const [choice, setChoice] = useState(current === "untriaged" ? "grounding" : current);
   return (
     <form action={action} noValidate aria-label="Triage squawk">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="squawkId" value={squawkId} />
@@ -59,6 +62,7 @@ export function CloseSquawkForm({ slug, squawkId, today, needsMechanic }: { slug
   const [state, action] = useActionState(closeSquawk, initialActionState);
   return (
     <form action={action} noValidate aria-label="Close squawk with return to service">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="squawkId" value={squawkId} />

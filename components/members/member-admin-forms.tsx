@@ -8,11 +8,13 @@ import { revokeInvitation } from "@/lib/actions/members/revoke-invitation";
 import { setMembershipStatus } from "@/lib/actions/members/set-membership-status";
 import type { Role } from "@/permissions/roles";
 import { RoleCheckboxes } from "./role-checkboxes";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function ChangeRolesForm({ slug, membershipId, roles }: { slug: string; membershipId: string; roles: Role[] }) {
   const [state, action] = useActionState(changeRoles, initialActionState);
   return (
     <form action={action} aria-label="Change roles">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="membershipId" value={membershipId} />
@@ -27,6 +29,7 @@ export function MembershipStatusForm({ slug, membershipId, status }: { slug: str
   const next = status === "active" ? "inactive" : "active";
   return (
     <form action={action} aria-label="Membership status">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="membershipId" value={membershipId} />
@@ -40,6 +43,7 @@ export function RevokeInvitationButton({ slug, invitationId }: { slug: string; i
   const [state, action] = useActionState(revokeInvitation, initialActionState);
   return (
     <form action={action} className="inline">
+      <IdempotencyKeyField answer={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="invitationId" value={invitationId} />
       <SubmitButton variant="secondary" pendingText="Withdrawing…">Withdraw</SubmitButton>

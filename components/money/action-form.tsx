@@ -4,6 +4,7 @@ import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState, type ActionState } from "@/lib/actions/action-state";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export type ServerAction = (prev: ActionState, formData: FormData) => Promise<ActionState>;
 
@@ -74,6 +75,7 @@ export function ActionForm({ action, slug, fields, hidden = {}, submitLabel, pen
   const hiddenErrors = Object.entries(state.fieldErrors).filter(([k]) => !fields.some((f) => f.name === k)).flatMap(([, v]) => v);
   return (
     <form action={formAction} noValidate aria-label={label} key={state.ok ? `${state.message}-done` : "form"}>
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       {hiddenErrors.length && !state.ok ? <p className="field-error mb-3">{hiddenErrors.join(" ")}</p> : null}
       <input type="hidden" name="club" value={slug} />
@@ -111,6 +113,7 @@ export function ActionButton({ action, slug, hidden = {}, label, pendingText, va
         if (confirm && !window.confirm(confirm)) e.preventDefault();
       }}
     >
+      <IdempotencyKeyField answer={state} />
       <input type="hidden" name="club" value={slug} />
       {Object.entries(hidden).map(([k, v]) => (
         <input key={k} type="hidden" name={k} value={v} />

@@ -6,6 +6,7 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { saveRateProfile } from "@/lib/actions/money/save-rates";
 import { currencyExponent, formatMoney, hourlyRate, minorToDecimalString, rateTable, toMinorUnits } from "@/lib/money";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export type RateInputs = {
   name: string;
@@ -62,6 +63,7 @@ export function RateCalculator({ slug, currency, unit, profiles, canSave }: { sl
   return (
     <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
       <form action={action} className="card" aria-label="Hourly-rate calculator" noValidate>
+        <IdempotencyKeyField answer={state} />
         <FormMessage state={state} />
         <input type="hidden" name="club" value={slug} />
         {profiles.length > 1 ? (

@@ -10,6 +10,7 @@ import { daysBetween } from "@/lib/dates";
 import { formatMoney } from "@/lib/money";
 import { ActionButton } from "./action-form";
 import { PeriodReportPanel } from "./period-report";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Data = ReconciliationWorkspace;
 const KIND_WORDS: Record<string, string> = { exact: "same amount and date", reference: "same reference", payout: "card payout", manual: "matched by hand", booked: "posted from the statement" };
@@ -25,6 +26,7 @@ function MatchForm({ slug, line, data, currency }: { slug: string; line: Workspa
     .slice(0, 15);
   return (
     <form action={action} aria-label={`Match line ${line.lineNo}`} className="mt-2">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bankLineId" value={line.id} />
@@ -49,6 +51,7 @@ function BookForm({ slug, line }: { slug: string; line: WorkspaceLine }) {
   const [state, action] = useActionState(bookLine, initialActionState);
   return (
     <form action={action} aria-label={`Book line ${line.lineNo}`} className="mt-2 grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
+      <IdempotencyKeyField answer={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bankLineId" value={line.id} />
       <label className="text-sm"><span className="field-label">Account</span>

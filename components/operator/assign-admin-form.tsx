@@ -4,11 +4,13 @@ import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { assignClubAdmin } from "@/lib/actions/operator/assign-admin";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function AssignAdminForm({ clubId, clubName }: { clubId: string; clubName: string }) {
   const [state, action] = useActionState(assignClubAdmin, initialActionState);
   return (
     <form action={action} noValidate aria-label={`Appoint an admin for ${clubName}`} className="mt-3">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="clubId" value={clubId} />
       <label className="field-label" htmlFor={`admin-${clubId}`}>Invite an admin (e-mail)</label>

@@ -7,6 +7,7 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState, type ActionState } from "@/lib/actions/action-state";
 import { createClub } from "@/lib/actions/operator/create-club";
 import { CURRENCIES } from "@/lib/validation/clubs";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 const ZONES = ["America/New_York", "America/Chicago", "America/Denver", "America/Phoenix", "America/Los_Angeles", "America/Anchorage", "Pacific/Honolulu", "Europe/London", "Europe/Berlin", "Europe/Paris", "Europe/Madrid", "Australia/Sydney", "Pacific/Auckland", "UTC"];
 
@@ -15,6 +16,7 @@ export function CreateClubForm() {
   const f = state.fieldErrors;
   return (
     <form action={action} noValidate aria-label="Create a club">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       {state.ok && state.data ? <p className="mb-4"><Link href={`/clubs/${state.data.slug}`}>Open the new club</Link> (you see it once you hold a role in it)</p> : null}
       <Field label="Club name" name="name" required errors={f.name} />

@@ -7,6 +7,7 @@ import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { initialActionState } from "@/lib/actions/action-state";
 import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Item = { id: string; section: string; label: string; kind: "check" | "document" };
 
@@ -27,6 +28,7 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
   if (state.ok) return <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">✓ {state.message}</p>;
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Preflight record">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       {e._form ? <p role="alert" className="field-error mb-3">{e._form.join(" ")}</p> : null}
       <input type="hidden" name="club" value={slug} />

@@ -6,12 +6,14 @@ import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { savePreflightTemplateAction } from "@/lib/actions/preflight/save-template";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function TemplateForm({ slug, aircraftId, defaults, oilUnit }: { slug: string; aircraftId: string; defaults: { documents: string; checklist: string; sumpPoints: string; oilMinimum: string; oilMaximum: string }; oilUnit: string }) {
   const [state, action] = useActionState(savePreflightTemplateAction, initialActionState);
   const e = state.fieldErrors;
   return (
     <form action={action} noValidate aria-label="Preflight checklist">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />

@@ -4,12 +4,14 @@ import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { acknowledgeBulletin } from "@/lib/actions/safety/acknowledge-bulletin";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function AcknowledgeForm({ slug, bulletinId }: { slug: string; bulletinId: string }) {
   const [state, action] = useActionState(acknowledgeBulletin, initialActionState);
   if (state.ok) return <FormMessage state={state} />;
   return (
     <form action={action} aria-label="Acknowledge bulletin">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bulletinId" value={bulletinId} />

@@ -9,6 +9,7 @@ import { createBulletin } from "@/lib/actions/safety/create-bulletin";
 import { updateDraft } from "@/lib/actions/safety/update-draft";
 import { BULLETIN_URGENCIES, type BulletinAudience, type BulletinUrgency } from "@/db/schema/safety";
 import { URGENCY_HINTS, URGENCY_LABELS } from "@/lib/safety/labels";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export type BulletinFormValues = {
   title: string;
@@ -52,6 +53,7 @@ export function BulletinForm({ slug, typeGroups, canPublish, initial = {}, bulle
   const errors = state.fieldErrors;
   return (
     <form action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label={bulletinId ? "Edit draft bulletin" : supersedesId ? "Revise bulletin" : "New bulletin"} className="max-w-3xl">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       {bulletinId ? <input type="hidden" name="bulletinId" value={bulletinId} /> : null}

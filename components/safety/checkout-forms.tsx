@@ -7,6 +7,7 @@ import { initialActionState } from "@/lib/actions/action-state";
 import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordCheckout } from "@/lib/actions/checkouts/record-checkout";
 import { revokeCheckout } from "@/lib/actions/checkouts/revoke-checkout";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function RecordCheckoutForm({ slug, members, typeGroups, today }: { slug: string; members: { userId: string; label: string }[]; typeGroups: string[]; today: string }) {
   const [state, action, pending] = useActionState(recordCheckout, initialActionState);
@@ -14,6 +15,7 @@ export function RecordCheckoutForm({ slug, members, typeGroups, today }: { slug:
   const e = state.fieldErrors;
   return (
     <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Record a checkout">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-2">
@@ -45,6 +47,7 @@ export function RevokeCheckoutForm({ slug, checkoutId, label }: { slug: string; 
     <details className="mt-1">
       <summary className="cursor-pointer text-sm font-bold text-stop-800">Revoke…</summary>
       <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label={`Revoke checkout: ${label}`} className="mt-2">
+        <IdempotencyKeyField answer={state} />
         <FormMessage state={state} />
         <input type="hidden" name="club" value={slug} />
         <input type="hidden" name="checkoutId" value={checkoutId} />

@@ -5,11 +5,13 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { publishBulletin } from "@/lib/actions/safety/publish-bulletin";
 import { remindBulletin } from "@/lib/actions/safety/remind-bulletin";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function PublishDraftForm({ slug, bulletinId }: { slug: string; bulletinId: string }) {
   const [state, action] = useActionState(publishBulletin, initialActionState);
   return (
     <form action={action} aria-label="Publish draft">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bulletinId" value={bulletinId} />
@@ -22,6 +24,7 @@ export function RemindForm({ slug, bulletinId, outstanding }: { slug: string; bu
   const [state, action] = useActionState(remindBulletin, initialActionState);
   return (
     <form action={action} aria-label="Send reminders">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bulletinId" value={bulletinId} />

@@ -7,6 +7,7 @@ import { initialActionState } from "@/lib/actions/action-state";
 import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { fileReport } from "@/lib/actions/safety/file-report";
 import { CONTRIBUTING_FACTORS, FACTOR_LABELS } from "@/lib/safety/labels";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function ReportForm({ slug, aircraft, today }: { slug: string; aircraft: { id: string; label: string }[]; today: string }) {
   const [state, action, pending] = useActionState(fileReport, initialActionState);
@@ -14,6 +15,7 @@ export function ReportForm({ slug, aircraft, today }: { slug: string; aircraft: 
   const e = state.fieldErrors;
   return (
     <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="File a safety report" className="max-w-3xl">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-3">

@@ -9,12 +9,14 @@ import { groundFromReport } from "@/lib/actions/safety/ground-from-report";
 import { triageReport } from "@/lib/actions/safety/triage-report";
 import type { ReportStatus } from "@/db/schema/safety";
 import { REPORT_STATUS_LABELS } from "@/lib/safety/labels";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function TriageForm({ slug, reportId, next }: { slug: string; reportId: string; next: readonly ReportStatus[] }) {
   const [state, action, pending] = useActionState(triageReport, initialActionState);
   const formRef = useResetOnSuccess(state);
   return (
     <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Change report state">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="reportId" value={reportId} />
@@ -34,6 +36,7 @@ export function GroundFromReportForm({ slug, reportId, aircraft, preselected }: 
   const formRef = useResetOnSuccess(state);
   return (
     <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Ground an aircraft">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="reportId" value={reportId} />

@@ -5,6 +5,7 @@ import { FormMessage } from "@/components/ui/form-message";
 import { initialActionState } from "@/lib/actions/action-state";
 import { saveLoading } from "@/lib/actions/tools/save-loading";
 import { LoadingFields } from "./loading-fields";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Props = Omit<Parameters<typeof LoadingFields>[0], "errors"> & { slug: string; bookingId: string };
 
@@ -12,6 +13,7 @@ export function LoadingForm({ slug, bookingId, ...fields }: Props) {
   const { state, onSubmit, pending } = useKeptForm(saveLoading, initialActionState);
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Weight and balance">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />

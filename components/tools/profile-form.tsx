@@ -6,6 +6,7 @@ import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { saveWeightBalanceProfileAction } from "@/lib/actions/tools/save-weight-balance-profile";
+import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export type ProfileDefaults = {
   emptyWeight: string; emptyArm: string; maxTakeoffWeight: string; maxLandingWeight: string; fuelKind: string; burnPerHour: string;
@@ -17,6 +18,7 @@ export function ProfileForm({ slug, aircraftId, defaults, units }: { slug: strin
   const e = state.fieldErrors;
   return (
     <form action={action} noValidate aria-label="Weight and balance figures">
+      <IdempotencyKeyField answer={state} />
       <FormMessage state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />

@@ -8,6 +8,7 @@ import { getSessionUser, type SessionUser } from "@/lib/server/session";
 import { allows, explainDenied, type AppAbility, type Permission as Grant } from "@/permissions";
 import { ActionError, type ActionState } from "./action-state";
 import { logError } from "@/lib/server/log";
+import { IDEMPOTENCY_FIELD, NO_CLUB_SCOPE, onceInTx, peekIdempotentAnswer, readIdempotencyKey, type Claim, type KeyRead } from "@/lib/server/idempotency";
 
 type Schema = z.ZodType<unknown, unknown>;
 
@@ -76,9 +77,16 @@ export function clubAction<S extends Schema, P = undefined, R = unknown>(def: {
   /** After commit: nudges (outbox), never data changes. */
   after?: (ctx: ClubContext, input: z.output<S>) => void;
   success: string;
+  /** Names the action for its idempotency keys; derived from permission, success and fields when absent. */
+  name?: string;
+  /** True for a write that must not be linked to its author (an anonymous report): its key row keeps no actor. */
+  anonymous?: (input: z.output<S>) => boolean;
 }) {
+  const name = def.name ?? actionName(def.permission, def.success, def.schema);
   return async (_prev: ActionState, formData: FormData): Promise<ActionState<R>> => {
     const raw = formDataToObject(formData);
+    const key = takeIdempotencyKey(raw);
+    if (!key.ok) return fail(key.message, { [IDEMPOTENCY_FIELD]: [key.message] });
     const slug = typeof raw.club === "string" ? raw.club : "";
     const resolved = await resolveClubContext(slug);
     if (!resolved.ok) {
@@ -92,12 +100,17 @@ export function clubAction<S extends Schema, P = undefined, R = unknown>(def: {
     if (!allowed) {
       return fail(typeof def.permission === "function" ? "You do not have permission to do this." : explainDenied(def.permission[0], def.permission[1]));
     }
-    return settle(async () => {
-      const prepared = (def.prepare ? await def.prepare(ctx, input) : undefined) as P;
-      const outcome = ctx.db.transaction((tx) => def.run(tx, ctx, input, prepared)) ?? {};
-      def.after?.(ctx, input);
-      return outcome;
-    }, def.success);
+    const unlinked = def.anonymous?.(input) ?? false;
+    const claim = claimFor(key, ctx.club.id, name, unlinked ? null : ctx.user.id, unlinked);
+    return settle(
+      () =>
+        writeOnce(ctx.db, claim, def.success, {
+          prepare: async () => (def.prepare ? await def.prepare(ctx, input) : undefined) as P,
+          run: (tx, prepared) => def.run(tx, ctx, input, prepared),
+          after: () => def.after?.(ctx, input),
+        }),
+      def.success,
+    );
   };
 }
 
@@ -110,20 +123,76 @@ export function userAction<S extends Schema, P = undefined, R = unknown>(def: {
   run: (tx: Tx, user: SessionUser | null, input: z.output<S>, prepared: P) => Outcome<R> | void;
   after?: () => void;
   success: string;
+  /** Names the action for its idempotency keys; derived from success and fields when absent. */
+  name?: string;
 }) {
+  const name = def.name ?? actionName(null, def.success, def.schema);
   return async (_prev: ActionState, formData: FormData): Promise<ActionState<R>> => {
     const user = await getSessionUser();
     if (def.requireUser && !user) return fail("Your session has ended. Sign in again.");
-    const parsed = def.schema.safeParse(formDataToObject(formData));
+    const raw = formDataToObject(formData);
+    const key = takeIdempotencyKey(raw);
+    if (!key.ok) return fail(key.message, { [IDEMPOTENCY_FIELD]: [key.message] });
+    const parsed = def.schema.safeParse(raw);
     if (!parsed.success) return fail("Some fields need attention; nothing was saved.", zodFieldErrors(parsed.error));
     const input = parsed.data as z.output<S>;
     const db = getDb();
     if (def.permission && !def.permission(user, input, db)) return fail("You do not have permission to do this.");
-    return settle(async () => {
-      const prepared = (def.prepare ? await def.prepare(user, input, db) : undefined) as P;
-      const outcome = db.transaction((tx) => def.run(tx, user, input, prepared)) ?? {};
-      def.after?.();
-      return outcome;
-    }, def.success);
+    const claim = claimFor(key, NO_CLUB_SCOPE, name, user?.id ?? null, false);
+    return settle(
+      () =>
+        writeOnce(db, claim, def.success, {
+          prepare: async () => (def.prepare ? await def.prepare(user, input, db) : undefined) as P,
+          run: (tx, prepared) => def.run(tx, user, input, prepared),
+          after: () => def.after?.(),
+        }),
+      def.success,
+    );
   };
+}
+
+// ---------------------------------------------------------------------------------------------
+// Exactly once (lib/server/idempotency.ts). Kept apart from the answer handling above: the
+// wrapper only swaps its "prepare → transaction → after" step for writeOnce.
+
+/** Takes the form's idempotency key out of the fields (no schema sees it) and checks its shape. */
+function takeIdempotencyKey(raw: Record<string, unknown>): KeyRead {
+  const value = raw[IDEMPOTENCY_FIELD];
+  delete raw[IDEMPOTENCY_FIELD];
+  return readIdempotencyKey(value);
+}
+
+function claimFor(key: KeyRead, scope: string, actionName: string, actorUserId: string | null, unlinked: boolean): Claim | null {
+  return key.ok && key.key ? { scope, key: key.key, actionName, actorUserId, unlinked } : null;
+}
+
+/** A stable name per action (the same in every process): its permission, success text and field names. */
+function actionName(permission: unknown, success: string, schema: Schema): string {
+  const grant = Array.isArray(permission) ? permission.join(" ") : permission ? "custom" : "user";
+  const shape = (schema as { shape?: Record<string, unknown> }).shape;
+  const fields = shape && typeof shape === "object" ? Object.keys(shape).sort().join(",") : "";
+  return `${grant}|${success}|${fields}`;
+}
+
+/**
+ * prepare → one transaction (write lock first) → after, once per key: a key already used for this
+ * action by this person returns the first answer before any prepare work (no second upload check or
+ * payment session), and again inside the transaction for a duplicate that raced this one; `after`
+ * runs only for the write that happened. Without a key, the same steps run as they always did.
+ */
+async function writeOnce<P, R>(
+  db: Db,
+  claim: Claim | null,
+  successMessage: string,
+  steps: { prepare: () => Promise<P>; run: (tx: Tx, prepared: P) => Outcome<R> | void; after: () => void },
+): Promise<Outcome<R>> {
+  const earlier = peekIdempotentAnswer<Outcome<R>>(db, claim);
+  if (earlier) return earlier;
+  const prepared = await steps.prepare();
+  const { answer, replayed } = onceInTx(db, claim, (tx) => {
+    const outcome = steps.run(tx, prepared) ?? {};
+    return { ...outcome, message: outcome.message ?? successMessage };
+  });
+  if (!replayed) steps.after();
+  return answer;
 }

@@ -25,6 +25,8 @@ export const fileReport = clubAction({
   schema: fileReportSchema,
   permission: ["create", "SafetyReport"],
   success: REPORT_FILED_MESSAGE,
+  // An anonymous report's idempotency key row keeps no actor and only the day (lib/server/idempotency.ts).
+  anonymous: (input) => input.anonymous,
   run(tx, ctx, input) {
     const { club, user } = ctx;
     if (compareIsoDates(input.occurredOn, clubToday(ctx)) > 0) throw new ActionError("Some fields need attention; nothing was saved.", { occurredOn: ["The date cannot be in the future."] });

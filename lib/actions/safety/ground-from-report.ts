@@ -1,4 +1,5 @@
 "use server";
+import { and, eq } from "drizzle-orm";
 import { safetyReportEvents } from "@/db/schema";
 import { getReport } from "@/db/queries/safety-reports";
 import { initialActionState, type ActionState } from "@/lib/actions/action-state";
@@ -37,12 +38,18 @@ export async function groundFromReport(_prev: ActionState, formData: FormData): 
   notice.set("aircraftId", parsed.data.aircraftId);
   notice.set("category", "safety");
   notice.set("reason", parsed.data.reason);
+  // The form's idempotency key goes to the grounding action, which writes the notice once per key;
+  // a replay gets the same notice back and the link below is not written twice.
+  if (typeof raw.idempotencyKey === "string") notice.set("idempotencyKey", raw.idempotencyKey);
   const issued = (await issueGroundingNotice(initialActionState, notice)) as ActionState<{ noticeId: string; recipients: number }>;
   if (!issued.ok || !issued.data) return { ...issued, fieldErrors: issued.fieldErrors ?? {} };
   const noticeId = issued.data.noticeId;
 
   try {
     ctx.db.transaction((tx) => {
+      const linked = tx.select({ id: safetyReportEvents.id }).from(safetyReportEvents)
+        .where(and(eq(safetyReportEvents.clubId, ctx.club.id), eq(safetyReportEvents.reportId, report.id), eq(safetyReportEvents.groundingNoticeId, noticeId))).get();
+      if (linked) return;
       tx.insert(safetyReportEvents).values({ clubId: ctx.club.id, reportId: report.id, actorId: ctx.user.id, kind: "grounding", groundingNoticeId: noticeId, note: parsed.data.reason }).run();
       writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "safety_report.grounding", subjectType: "SafetyReport", subjectId: report.id, after: { groundingNoticeId: noticeId, aircraftId: parsed.data.aircraftId } });
     });

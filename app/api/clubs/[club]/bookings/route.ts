@@ -5,6 +5,7 @@ import { createBookingInTx } from "@/lib/actions/bookings/booking-core";
 import { viewRange } from "@/lib/actions/bookings/range";
 import { writeAudit } from "@/lib/server/audit";
 import { apiError, withClub, zodToFields } from "@/lib/server/api";
+import { idempotentJson } from "@/lib/server/idempotency";
 import { bookingRangeSchema, createBookingSchema } from "@/lib/validation/bookings";
 
 export const dynamic = "force-dynamic";
@@ -44,12 +45,12 @@ export async function POST(request: Request, { params }: { params: Promise<{ clu
     const parsed = createBookingSchema.safeParse(body);
     if (!parsed.success) return apiError("invalid", "Some fields need attention; nothing was saved.", zodToFields(parsed.error));
     try {
-      const made = ctx.db.transaction((tx) => {
-        const result = createBookingInTx(tx, ctx, parsed.data);
-        writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "booking.create", subjectType: "Booking", subjectId: result.bookingId, after: { via: "api", startsAt: result.window.startsAt.toISOString(), endsAt: result.window.endsAt.toISOString() } });
-        return result;
+      // Once per Idempotency-Key header (optional): a retry answers the first 201 and writes nothing.
+      return idempotentJson(request, { scope: ctx.club.id, actionName: "api:booking.create", actorUserId: ctx.user.id }, ctx.db, (tx) => {
+        const made = createBookingInTx(tx, ctx, parsed.data);
+        writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "booking.create", subjectType: "Booking", subjectId: made.bookingId, after: { via: "api", startsAt: made.window.startsAt.toISOString(), endsAt: made.window.endsAt.toISOString() } });
+        return { status: 201, body: { data: { id: made.bookingId, warningsAccepted: made.acceptedWarnings } } };
       });
-      return NextResponse.json({ data: { id: made.bookingId, warningsAccepted: made.acceptedWarnings } }, { status: 201 });
     } catch (error) {
       if (!(error instanceof ActionError)) throw error;
       if (error.code === "not_found") return apiError("not_found", error.message, error.fieldErrors);
