@@ -4,7 +4,7 @@
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { POST as createBookingRoute } from "@/app/api/clubs/[club]/bookings/route";
-import { aircraft, bookings, bulletinAcknowledgements, flights, groundingNotices, idempotentWrites, journalEntries, payments, safetyReports, squawkEvents, squawks, users } from "@/db/schema";
+import { aircraft, bookings, bulletinAcknowledgements, flights, groundingNotices, idempotentWrites, journalEntries, payments, safetyReportEvents, safetyReports, squawkEvents, squawks, users } from "@/db/schema";
 import type { ActionState } from "@/lib/actions/action-state";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { issueGroundingNotice } from "@/lib/actions/fleet/issue-grounding-notice";
@@ -15,6 +15,7 @@ import { recordManualPayment } from "@/lib/actions/money/record-manual-payment";
 import { acknowledgeBulletin } from "@/lib/actions/safety/acknowledge-bulletin";
 import { createBulletin } from "@/lib/actions/safety/create-bulletin";
 import { fileReport } from "@/lib/actions/safety/file-report";
+import { groundFromReport } from "@/lib/actions/safety/ground-from-report";
 import { clubToday } from "@/lib/actions/safety/bulletin-publishing";
 import { IDEMPOTENCY_TTL_MS, KEY_REUSED_MESSAGE, MALFORMED_KEY_MESSAGE, pruneIdempotentWrites } from "@/lib/server/idempotency";
 import { EMPTY, clubBySlug, db, expectRedirect, form, signInAs } from "./helpers";
@@ -229,6 +230,19 @@ describe("exactly once: forms", () => {
     const row = db().select().from(idempotentWrites).where(eq(idempotentWrites.key, k)).get()!;
     expect(row.actorUserId).toBeNull();
     expect(row.createdAt.getUTCHours() + row.createdAt.getUTCMinutes() + row.createdAt.getUTCSeconds() + row.createdAt.getUTCMilliseconds()).toBe(0);
+  });
+
+  it("grounding from a safety report replayed: one notice, one link on the report, the same answer", async () => {
+    signInAs(MEMBER);
+    await expectRedirect(() => fileReport(EMPTY, form({ club: CLUB, occurredOn: "2026-01-11", location: "Runway 27 hold", whatHappened: "The left brake faded during the run-up and the aircraft crept past the hold line.", contributingFactors: ["aircraft_equipment"] })));
+    const report = db().select().from(safetyReports).all().at(-1)!;
+    signInAs("safety@hangarline.test");
+    const plane = planeId(CLUB, "N0534L");
+    const notices = () => db().select().from(groundingNotices).where(eq(groundingNotices.aircraftId, plane)).all().length;
+    const before = notices();
+    await onceThenReplay(groundFromReport as Action, { club: CLUB, reportId: report.id, aircraftId: plane, reason: "Brake fade reported on the run-up" });
+    expect(notices()).toBe(before + 1);
+    expect(db().select().from(safetyReportEvents).where(and(eq(safetyReportEvents.reportId, report.id), eq(safetyReportEvents.kind, "grounding"))).all()).toHaveLength(1);
   });
 
   it("actions called without a key write as before", async () => {
