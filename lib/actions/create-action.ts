@@ -81,6 +81,8 @@ export function clubAction<S extends Schema, P = undefined, R = unknown>(def: {
   name?: string;
   /** True for a write that must not be linked to its author (an anonymous report): its key row keeps no actor. */
   anonymous?: (input: z.output<S>) => boolean;
+  /** Undoes `prepare`'s side effects (stored files) when a racing duplicate turns out to be a replay. */
+  discard?: (prepared: P) => void;
 }) {
   const name = def.name ?? actionName(def.permission, def.success, def.schema);
   return async (_prev: ActionState, formData: FormData): Promise<ActionState<R>> => {
@@ -108,6 +110,7 @@ export function clubAction<S extends Schema, P = undefined, R = unknown>(def: {
           prepare: async () => (def.prepare ? await def.prepare(ctx, input) : undefined) as P,
           run: (tx, prepared) => def.run(tx, ctx, input, prepared),
           after: () => def.after?.(ctx, input),
+          discard: def.discard,
         }),
       def.success,
     );
@@ -177,14 +180,14 @@ function actionName(permission: unknown, success: string, schema: Schema): strin
 /**
  * prepare → one transaction (write lock first) → after, once per key: a key already used for this
  * action by this person returns the first answer before any prepare work (no second upload check or
- * payment session), and again inside the transaction for a duplicate that raced this one; `after`
- * runs only for the write that happened. Without a key, the same steps run as they always did.
+ * payment session), and again inside the transaction for a duplicate that raced this one (whose
+ * prepared files are then discarded); `after` runs only for the write that happened. Without a key, the same steps run as they always did.
  */
 async function writeOnce<P, R>(
   db: Db,
   claim: Claim | null,
   successMessage: string,
-  steps: { prepare: () => Promise<P>; run: (tx: Tx, prepared: P) => Outcome<R> | void; after: () => void },
+  steps: { prepare: () => Promise<P>; run: (tx: Tx, prepared: P) => Outcome<R> | void; after: () => void; discard?: (prepared: P) => void },
 ): Promise<Outcome<R>> {
   const earlier = peekIdempotentAnswer<Outcome<R>>(db, claim);
   if (earlier) return earlier;
@@ -193,6 +196,7 @@ async function writeOnce<P, R>(
     const outcome = steps.run(tx, prepared) ?? {};
     return { ...outcome, message: outcome.message ?? successMessage };
   });
-  if (!replayed) steps.after();
+  if (replayed) steps.discard?.(prepared);
+  else steps.after();
   return answer;
 }

@@ -1,10 +1,11 @@
 // Exactly once: a form's idempotency key (and the API's Idempotency-Key header) makes a second
 // press, a retry or a replay return the first answer and write nothing — no row, no audit row,
 // no outbox e-mail, no journal entry. Checked against every table's row count.
+import fs from "node:fs";
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { POST as createBookingRoute } from "@/app/api/clubs/[club]/bookings/route";
-import { aircraft, bookings, bulletinAcknowledgements, flights, groundingNotices, idempotentWrites, journalEntries, payments, safetyReportEvents, safetyReports, squawkEvents, squawks, users } from "@/db/schema";
+import { aircraft, bookings, bulletinAcknowledgements, flights, groundingNotices, idempotentWrites, journalEntries, payments, safetyReportEvents, safetyReports, uploads, squawkEvents, squawks, users } from "@/db/schema";
 import type { ActionState } from "@/lib/actions/action-state";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { issueGroundingNotice } from "@/lib/actions/fleet/issue-grounding-notice";
@@ -19,6 +20,7 @@ import { groundFromReport } from "@/lib/actions/safety/ground-from-report";
 import { clubToday } from "@/lib/actions/safety/bulletin-publishing";
 import { IDEMPOTENCY_TTL_MS, KEY_REUSED_MESSAGE, MALFORMED_KEY_MESSAGE, pruneIdempotentWrites } from "@/lib/server/idempotency";
 import { EMPTY, clubBySlug, db, expectRedirect, form, signInAs } from "./helpers";
+import { pngFile } from "./fleet-helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
 const CLUB = "lakeshore-aero";
@@ -86,6 +88,20 @@ describe("exactly once: forms", () => {
     expect(b).toEqual(a);
     expect(c).toEqual(a);
     expect(db().select().from(squawks).all().length).toBe(before + 1);
+  });
+
+  it("a double tap with a photo keeps one photo on disk: the duplicate's stored file is discarded", async () => {
+    signInAs(MEMBER);
+    const plane = planeId(CLUB, "N0556L");
+    const filesOnDisk = () => (fs.existsSync(process.env.UPLOAD_DIR!) ? fs.readdirSync(process.env.UPLOAD_DIR!, { recursive: true, withFileTypes: true }).filter((e) => e.isFile()).length : 0);
+    const before = filesOnDisk();
+    const k = key();
+    const send = () => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane, description: "Cracked fairing", foundDuring: "preflight", idempotencyKey: k, photos: pngFile() })).catch((e: Error) => e.message);
+    const [a, b] = await Promise.all([send(), send()]);
+    expect(a).toMatch(/^redirect:/);
+    expect(b).toBe(a);
+    expect(filesOnDisk()).toBe(before + 1);
+    expect(db().select().from(uploads).all().length).toBeGreaterThan(0);
   });
 
   it("a different key is a different submission: a second squawk", async () => {

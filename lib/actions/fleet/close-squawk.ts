@@ -8,7 +8,7 @@ import { isoDateInTimeZone } from "@/lib/dates";
 import { writeAudit } from "@/lib/server/audit";
 import { DOCUMENT_TYPES } from "@/lib/storage";
 import { closeSquawkSchema } from "@/lib/validation/fleet";
-import { checkFiles, insertUploadRows, storeFiles, withStoredFiles } from "./files";
+import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
 import { fleetPaths } from "./paths";
 
 // Closing is the return to service: anything other than a plain note needs the mechanic's name
@@ -21,6 +21,7 @@ export const closeSquawk = clubAction({
     if (!getSquawk(db, club.id, input.squawkId)) throw new ActionError("That squawk was not found in this club.", {}, "not_found");
     return storeFiles(await checkFiles(input.document, DOCUMENT_TYPES, "document"));
   },
+  discard: discardStored,
   run(tx, { club, user }, input, stored) {
     return withStoredFiles(stored, () => {
       const current = getSquawk(tx, club.id, input.squawkId);

@@ -9,7 +9,7 @@ import { maintenanceHours } from "@/lib/fleet/status-input";
 import { writeAudit } from "@/lib/server/audit";
 import { DOCUMENT_TYPES } from "@/lib/storage";
 import { recordCompletionSchema } from "@/lib/validation/fleet";
-import { checkFiles, insertUploadRows, storeFiles, withStoredFiles } from "./files";
+import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
 import { fleetPaths } from "./paths";
 
 const HOURS_RULES = new Set(["hours", "months-or-hours"]);
@@ -22,6 +22,7 @@ export const recordCompletion = clubAction({
     if (!getItem(db, club.id, input.itemId)) throw new ActionError("That inspection item was not found in this club.", {}, "not_found");
     return storeFiles(await checkFiles(input.document, DOCUMENT_TYPES, "document"));
   },
+  discard: discardStored,
   run(tx, { club, user }, input, stored) {
     return withStoredFiles(stored, () => {
       const item = getItem(tx, club.id, input.itemId);

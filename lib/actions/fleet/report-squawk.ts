@@ -6,7 +6,7 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { IMAGE_TYPES } from "@/lib/storage";
 import { reportSquawkSchema } from "@/lib/validation/fleet";
-import { checkFiles, insertUploadRows, storeFiles, withStoredFiles } from "./files";
+import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
 import { fleetPaths } from "./paths";
 
 // Any member may report; the squawk weighs on the status at once (untriaged is never flyable
@@ -19,6 +19,7 @@ export const reportSquawk = clubAction({
     if (!getAircraft(db, club.id, input.aircraftId)) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
     return storeFiles(await checkFiles(input.photos, IMAGE_TYPES, "photos"));
   },
+  discard: discardStored,
   run(tx, { club, user }, input, stored) {
     return withStoredFiles(stored, () => {
       const plane = getAircraft(tx, club.id, input.aircraftId);

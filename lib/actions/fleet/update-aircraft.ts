@@ -8,7 +8,7 @@ import { writeAudit } from "@/lib/server/audit";
 import { IMAGE_TYPES } from "@/lib/storage";
 import { updateAircraftSchema } from "@/lib/validation/fleet";
 import { aircraftValues } from "./aircraft-values";
-import { checkFiles, insertUploadRows, storeFiles, withStoredFiles } from "./files";
+import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
 import { fleetPaths } from "./paths";
 
 // Meter corrections go through here too, with the before/after in the audit log; the flight
@@ -21,6 +21,7 @@ export const updateAircraft = clubAction({
     if (!getAircraft(db, club.id, input.aircraftId)) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
     return storeFiles(await checkFiles(input.photo, IMAGE_TYPES, "photo"));
   },
+  discard: discardStored,
   run(tx, { club, user }, input, stored) {
     return withStoredFiles(stored, () => {
       const current = getAircraft(tx, club.id, input.aircraftId);

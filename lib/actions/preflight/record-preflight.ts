@@ -36,6 +36,7 @@ export const recordPreflight = clubAction({
     }
     return stored;
   },
+  discard: (stored) => discardStored([...stored.values()].flat()),
   run(tx, ctx, input, stored) {
     const all = [...stored.values()].flat();
     return withStoredFiles(all, () => {
