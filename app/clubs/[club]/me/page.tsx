@@ -43,7 +43,7 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
               <li key={c.id} className="py-2">
                 <span className="font-bold">{c.typeGroup}</span> · since {c.checkedOutOn} · {c.instructorName ?? "instructor"}
                 {c.conditions ? <span className="block text-sm text-ink-700">Conditions: {c.conditions}</span> : null}
-                {c.revokedAt ? <span className="block text-sm font-bold text-stop-800">Revoked {c.revokedAt.toISOString().slice(0, 10)}: {c.revokeReason}</span> : null}
+                {c.revokedAt ? <span className="block text-sm font-bold text-stop-800">Revoked {isoDateInTimeZone(c.revokedAt, club.timeZone)}: {c.revokeReason}</span> : null}
               </li>
             ))}
           </ul>

@@ -43,7 +43,7 @@ export default async function CheckoutsPage({ params, searchParams }: { params: 
                 <td className="px-3 py-2">{c.conditions ?? "None"}</td>
                 <td className="px-3 py-2">
                   {c.revokedAt ? (
-                    <span className="text-stop-800"><strong>Revoked</strong> {c.revokedAt.toISOString().slice(0, 10)} by {c.revokedByName ?? "an instructor"}: {c.revokeReason}</span>
+                    <span className="text-stop-800"><strong>Revoked</strong> {isoDateInTimeZone(c.revokedAt, club.timeZone)} by {c.revokedByName ?? "an instructor"}: {c.revokeReason}</span>
                   ) : (
                     <>
                       <span className="font-bold text-go-800">Standing</span>

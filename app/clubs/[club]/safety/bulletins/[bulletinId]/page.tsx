@@ -53,7 +53,7 @@ export default async function BulletinPage({ params, searchParams }: { params: P
         <h1 className="text-2xl font-bold sm:text-3xl">{bulletin.title}</h1>
         <p className="mb-4 mt-1 flex flex-wrap gap-x-4 gap-y-1 text-sm text-ink-700">
           <span>For: {audienceLabel(bulletin.audience, bulletin.audienceTypeGroup)}</span>
-          {bulletin.publishedAt ? <span>Published {bulletin.publishedAt.toISOString().slice(0, 10)}</span> : null}
+          {bulletin.publishedAt ? <span>Published {isoDateInTimeZone(bulletin.publishedAt, club.timeZone)}</span> : null}
           {bulletin.acknowledgeBy ? (
             <span className={deadline === "overdue" ? "inline-flex items-center gap-1 font-bold text-stop-800" : ""}>
               {deadline === "overdue" ? <ShapeIcon shape="octagon" /> : null}Acknowledge by {bulletin.acknowledgeBy}{deadline === "overdue" ? " (passed)" : ""}
@@ -67,7 +67,7 @@ export default async function BulletinPage({ params, searchParams }: { params: P
         {published ? (
           <div className="mt-5 border-t border-sand-200 pt-4">
             {mine ? (
-              <p className="inline-flex items-center gap-2 font-bold text-go-800"><ShapeIcon shape="check" />You acknowledged this on {mine.acknowledgedAt.toISOString().slice(0, 10)}.</p>
+              <p className="inline-flex items-center gap-2 font-bold text-go-800"><ShapeIcon shape="check" />You acknowledged this on {isoDateInTimeZone(mine.acknowledgedAt, club.timeZone)}.</p>
             ) : !current ? (
               <p className="text-ink-700">This version has been replaced; acknowledge the newest version instead.</p>
             ) : inAudience && can(ability, "acknowledge", "Bulletin") ? (
@@ -106,7 +106,7 @@ export default async function BulletinPage({ params, searchParams }: { params: P
             {versions.map((v) => (
               <li key={v.id}>
                 {v.id === bulletin.id ? <strong>Version {v.version} (this page)</strong> : <Link href={`${base}/bulletins/${v.id}`}>Version {v.version}</Link>}
-                <span className="text-sm text-ink-500"> · {v.status === "draft" ? "draft" : v.supersededAt ? `published ${v.publishedAt?.toISOString().slice(0, 10)}, replaced ${v.supersededAt.toISOString().slice(0, 10)}` : `published ${v.publishedAt?.toISOString().slice(0, 10)}, current`}</span>
+                <span className="text-sm text-ink-500"> · {v.status === "draft" ? "draft" : v.supersededAt ? `published ${(v.publishedAt ? isoDateInTimeZone(v.publishedAt, club.timeZone) : "")}, replaced ${isoDateInTimeZone(v.supersededAt, club.timeZone)}` : `published ${(v.publishedAt ? isoDateInTimeZone(v.publishedAt, club.timeZone) : "")}, current`}</span>
               </li>
             ))}
           </ol>
