@@ -1,3 +1,5 @@
+// Source: the intervals these records satisfy are cited in the tests that use them (14 CFR 91.409, 91.207,
+// 91.411, 91.413); the records themselves are invented, and the oil-change item is common practice.
 // Invented records for one invented aircraft, all current on TODAY unless a test changes them.
 
 import { defaultInspectionItems } from "@/lib/airworthiness";

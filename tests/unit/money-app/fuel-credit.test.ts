@@ -1,3 +1,4 @@
+// Source: common practice (flying clubs credit members' fuel receipts up to a club price); no published rule is cited.
 // Fuel credits: quantity × the lower of the price paid and the club's cap per unit, rounded half
 // away from zero to the cent (the club's own rule; figures are our own arithmetic).
 import { describe, expect, it } from "vitest";

@@ -1,3 +1,4 @@
+// Source: common practice (account statement arithmetic); no published rule is cited.
 // A statement: opening + charges − credits = closing (standard account statement arithmetic;
 // figures are our own).
 import { describe, expect, it } from "vitest";

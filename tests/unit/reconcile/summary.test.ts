@@ -1,3 +1,4 @@
+// Source: common practice (standard bank reconciliation, from memory of accounting textbooks).
 import { describe, expect, it } from "vitest";
 import { reconciliationSummary } from "@/lib/reconcile";
 
