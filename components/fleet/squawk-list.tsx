@@ -1,17 +1,20 @@
 import type { SquawkEventView, SquawkListRow } from "@/db/queries/fleet-squawks";
 import type { UploadLink } from "@/db/queries/fleet";
 import { FOUND_DURING_WORDS, TRIAGE_WORDS } from "@/lib/fleet/status-words";
+import { formatLocalTime } from "@/lib/fleet/time";
 import { CloseSquawkForm, TriageSquawkForm } from "./squawk-forms";
 
 const EVENT_WORDS = { reported: "Reported", triaged: "Triaged", closed: "Closed" } as const;
 
-function stamp(d: Date): string {
-  return d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
+/** When something happened, on the club's clock (every reader is at or near the home field). */
+function stamp(d: Date, timeZone: string): string {
+  return formatLocalTime(d, timeZone);
 }
 
 /** Squawks with their whole history (who and when) and files; maintenance controls where allowed. */
-export function SquawkList({ slug, rows, events, files, today, canTriage, canClose, showAircraft = false, empty = "No squawks on record." }: {
+export function SquawkList({ slug, timeZone, rows, events, files, today, canTriage, canClose, showAircraft = false, empty = "No squawks on record." }: {
   slug: string;
+  timeZone: string;
   rows: SquawkListRow[];
   events: SquawkEventView[];
   files: UploadLink[];
@@ -60,7 +63,7 @@ export function SquawkList({ slug, rows, events, files, today, canTriage, canClo
               <ol className="mt-1 space-y-1 border-l-2 border-sand-300 pl-3">
                 {history.map((e) => (
                   <li key={e.id}>
-                    <span className="font-mono tabular text-xs">{stamp(e.at)}</span> {EVENT_WORDS[e.kind]}
+                    <span className="font-mono tabular text-xs">{stamp(e.at, timeZone)}</span> {EVENT_WORDS[e.kind]}
                     {e.kind === "triaged" ? ` as ${TRIAGE_WORDS[e.toTriage as keyof typeof TRIAGE_WORDS] ?? e.toTriage}` : ""} by {e.actorName ?? "someone"}
                     {e.note ? <span className="block text-ink-700">{e.note}</span> : null}
                   </li>

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { isoDateInTimeZone } from "@/lib/dates";
 import type { PaymentRow } from "@/db/schema";
 import type { AccountActivityRow } from "@/db/queries/money-accounts";
 import { monthLabel } from "@/lib/ledger/months";
@@ -19,7 +20,7 @@ const STATUS_WORDS: Record<string, string> = { pending: "Waiting for the card", 
 const METHOD_WORDS: Record<string, string> = { card: "Card", cheque: "Cheque", cash: "Cash", transfer: "Bank transfer" };
 
 /** A member's account, for the member themself and for the treasurer looking at it. */
-export function AccountView({ data, currency, slug, userId, statementHref, payButton }: { data: AccountViewData; currency: string; slug: string; userId: string; statementHref: (month: string) => string; payButton?: React.ReactNode }) {
+export function AccountView({ data, currency, timeZone, slug, userId, statementHref, payButton }: { data: AccountViewData; currency: string; timeZone: string; slug: string; userId: string; statementHref: (month: string) => string; payButton?: React.ReactNode }) {
   return (
     <div className="grid grid-cols-1 gap-6">
       <section className="card" aria-labelledby="balance-h">
@@ -38,7 +39,7 @@ export function AccountView({ data, currency, slug, userId, statementHref, payBu
               <li key={s.month} className="flex flex-wrap items-center justify-between gap-2 py-2">
                 <Link href={statementHref(s.month)}>{monthLabel(s.month)}</Link>
                 <span className="flex flex-wrap items-center gap-3 text-sm text-ink-700">
-                  {s.issuedAt ? `issued ${s.issuedAt.toISOString().slice(0, 10)}` : "month to date"}
+                  {s.issuedAt ? `issued ${isoDateInTimeZone(s.issuedAt, timeZone)}` : "month to date"}
                   <a href={`/api/clubs/${slug}/statements/${userId}/${s.month}`}>PDF<span className="sr-only"> for {monthLabel(s.month)}</span></a>
                 </span>
               </li>
@@ -71,7 +72,7 @@ export function AccountView({ data, currency, slug, userId, statementHref, payBu
           <ul className="card divide-y divide-sand-200 text-sm">
             {data.payments.map((p) => (
               <li key={p.id} className="flex flex-wrap justify-between gap-2 py-2">
-                <span>{p.receivedOn ?? p.createdAt.toISOString().slice(0, 10)} · {METHOD_WORDS[p.method]}{p.reference ? ` ${p.reference}` : ""}</span>
+                <span>{p.receivedOn ?? isoDateInTimeZone(p.createdAt, timeZone)} · {METHOD_WORDS[p.method]}{p.reference ? ` ${p.reference}` : ""}</span>
                 <span><Money minor={p.amountMinor} currency={currency} /> · {STATUS_WORDS[p.status] ?? p.status}{p.refundedMinor ? <> (<Money minor={p.refundedMinor} currency={currency} /> refunded)</> : null}</span>
               </li>
             ))}

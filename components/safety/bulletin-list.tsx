@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { isoDateInTimeZone } from "@/lib/dates";
 import type { BulletinListRow } from "@/db/queries/safety-bulletins";
 import { deadlineState } from "@/lib/safety/acknowledgements";
 import { audienceLabel } from "@/lib/safety/labels";
@@ -14,7 +15,7 @@ function Deadline({ by, today }: { by: string | null; today: string }) {
   return <span>Acknowledge by {by}</span>;
 }
 
-export function BulletinList({ slug, rows, today }: { slug: string; rows: Row[]; today: string }) {
+export function BulletinList({ slug, timeZone, rows, today }: { slug: string; timeZone: string; rows: Row[]; today: string }) {
   return (
     <ul className="flex flex-col gap-3">
       {rows.map((b) => (
@@ -27,7 +28,7 @@ export function BulletinList({ slug, rows, today }: { slug: string; rows: Row[];
           <h3 className="mt-2 text-lg font-bold"><Link href={`/clubs/${slug}/safety/bulletins/${b.id}`}>{b.title}</Link></h3>
           <p className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-sm text-ink-700">
             <span>{audienceLabel(b.audience, b.audienceTypeGroup)}</span>
-            <span>{b.publishedAt ? `Published ${b.publishedAt.toISOString().slice(0, 10)}` : `Draft by ${b.authorName ?? "the safety officer"}`}</span>
+            <span>{b.publishedAt ? `Published ${isoDateInTimeZone(b.publishedAt, timeZone)}` : `Draft by ${b.authorName ?? "the safety officer"}`}</span>
             <Deadline by={b.acknowledgeBy} today={today} />
             {b.stats ? <span className="tabular">{b.stats.acknowledged} of {b.stats.audience} acknowledged</span> : null}
           </p>

@@ -1,10 +1,11 @@
 import Link from "next/link";
-import type { ReactNode } from "react";
+import { Suspense, type ReactNode } from "react";
 import type { ClubLink } from "@/db/queries/clubs";
 import { ROLE_LABELS, type Role } from "@/permissions";
 import { ClubSwitcher } from "./club-switcher";
 import type { NavItem } from "./nav-items";
 import { NavLinks } from "./nav-links";
+import { PhoneMenu } from "./phone-menu";
 import { SignOutButton } from "./sign-out-button";
 
 type Props = {
@@ -47,15 +48,9 @@ export function ClubShell({ club, clubs, nav, user, roles, isOperator, children 
   return (
     <div className="min-h-dvh lg:grid lg:grid-cols-[16rem_1fr]">
       <header className="bg-fin-700 lg:hidden">
-        <details className="group">
-          <summary className="flex cursor-pointer list-none items-center justify-between px-4 py-3">
-            <Brand />
-            <span className="rounded border border-sand-300 px-2 py-1 text-sm text-white">
-              <span className="group-open:hidden">Menu</span><span className="hidden group-open:inline">Close</span>
-            </span>
-          </summary>
-          <div className="px-4 pb-4">{sidebar}</div>
-        </details>
+        <Suspense fallback={<div className="px-4 py-3"><Brand /></div>}>
+          <PhoneMenu brand={<Brand />}>{sidebar}</PhoneMenu>
+        </Suspense>
         <p className="truncate px-4 pb-2 text-sm text-sand-200">{club.name}</p>
       </header>
       <aside className="hidden bg-fin-700 p-4 lg:block">

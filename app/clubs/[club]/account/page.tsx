@@ -22,7 +22,7 @@ export default async function MyAccountPage({ params }: { params: Promise<{ club
       <Suspense fallback={<div className="h-64 animate-pulse rounded bg-sand-200" />}>
         <AccountView
           data={data}
-          currency={club.currency}
+          currency={club.currency} timeZone={club.timeZone}
           slug={club.slug}
           userId={user.id}
           statementHref={(m) => `/clubs/${club.slug}/account/statements/${m}`}

@@ -53,12 +53,12 @@ export default async function MaintenancePage({ params }: { params: Promise<{ cl
 
       <section aria-labelledby="triage-h" className="mt-8">
         <h2 id="triage-h" className="mb-3 text-xl font-bold">Squawks awaiting triage</h2>
-        <SquawkList slug={club.slug} rows={untriaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="Nothing waiting for triage." />
+        <SquawkList slug={club.slug} timeZone={club.timeZone} rows={untriaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="Nothing waiting for triage." />
       </section>
 
       <section aria-labelledby="open-h" className="mt-8">
         <h2 id="open-h" className="mb-3 text-xl font-bold">Open squawks</h2>
-        <SquawkList slug={club.slug} rows={triaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="No other open squawks." />
+        <SquawkList slug={club.slug} timeZone={club.timeZone} rows={triaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="No other open squawks." />
       </section>
 
       <section aria-labelledby="due-h" className="mt-8">

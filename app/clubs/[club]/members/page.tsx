@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { isoDateInTimeZone } from "@/lib/dates";
 import { Suspense } from "react";
 import { InviteForm } from "@/components/members/invite-form";
 import { RevokeInvitationButton } from "@/components/members/member-admin-forms";
@@ -34,7 +35,7 @@ export default async function MembersPage({ params }: { params: Promise<{ club: 
             <ul className="divide-y divide-sand-200">
               {invitations.map((inv) => (
                 <li key={inv.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
-                  <span className="min-w-0 break-all"><strong>{inv.email}</strong><span className="block text-sm text-ink-500">{inv.roles.map((r) => ROLE_LABELS[r]).join(", ")} · until {inv.expiresAt.toISOString().slice(0, 10)}</span></span>
+                  <span className="min-w-0 break-all"><strong>{inv.email}</strong><span className="block text-sm text-ink-500">{inv.roles.map((r) => ROLE_LABELS[r]).join(", ")} · until {isoDateInTimeZone(inv.expiresAt, club.timeZone)}</span></span>
                   <RevokeInvitationButton slug={club.slug} invitationId={inv.id} />
                 </li>
               ))}

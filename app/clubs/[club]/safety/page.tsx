@@ -40,12 +40,12 @@ export default async function SafetyPage({ params }: { params: Promise<{ club: s
       {writer && drafts.length ? (
         <section aria-labelledby="drafts-h" className="mb-6">
           <h2 id="drafts-h" className="mb-2 text-lg font-bold">Drafts (not sent)</h2>
-          <BulletinList slug={club.slug} rows={drafts} today={today} />
+          <BulletinList slug={club.slug} timeZone={club.timeZone} rows={drafts} today={today} />
         </section>
       ) : null}
       <section aria-labelledby="bulletins-h">
         <h2 id="bulletins-h" className="mb-2 text-lg font-bold">Current bulletins</h2>
-        {published.length ? <BulletinList slug={club.slug} rows={published} today={today} /> : <p className="card text-ink-500">No bulletins yet.</p>}
+        {published.length ? <BulletinList slug={club.slug} timeZone={club.timeZone} rows={published} today={today} /> : <p className="card text-ink-500">No bulletins yet.</p>}
       </section>
     </div>
   );

@@ -124,11 +124,11 @@ export default async function AircraftPage({ params, searchParams }: { params: P
       </Section>
 
       <Section id="squawks" title={`Squawks (${open.length} open)`}>
-        <SquawkList slug={club.slug} rows={open} events={events} files={squawkFiles} today={entry.today} canTriage={may.triage} canClose={may.close} />
+        <SquawkList slug={club.slug} timeZone={club.timeZone} rows={open} events={events} files={squawkFiles} today={entry.today} canTriage={may.triage} canClose={may.close} />
         {closed.length ? (
           <details className="mt-3">
             <summary className="cursor-pointer font-bold text-fin-600">Closed squawks ({closed.length})</summary>
-            <div className="mt-2"><SquawkList slug={club.slug} rows={closed} events={events} files={squawkFiles} today={entry.today} canTriage={false} canClose={false} /></div>
+            <div className="mt-2"><SquawkList slug={club.slug} timeZone={club.timeZone} rows={closed} events={events} files={squawkFiles} today={entry.today} canTriage={false} canClose={false} /></div>
           </details>
         ) : null}
       </Section>

@@ -28,7 +28,7 @@ export default async function MemberAccountPage({ params }: { params: Promise<{ 
     <>
       <PageHeader title={member.name} lead={<><Link href={`/clubs/${club.slug}/money/balances`}>Member balances</Link> · {member.email}</>} />
       <MoneyNav slug={club.slug} ability={ability} />
-      <AccountView data={data} currency={club.currency} slug={club.slug} userId={userId} statementHref={(m) => `/clubs/${club.slug}/money/members/${userId}/statements/${m}`} />
+      <AccountView data={data} currency={club.currency} timeZone={club.timeZone} slug={club.slug} userId={userId} statementHref={(m) => `/clubs/${club.slug}/money/members/${userId}/statements/${m}`} />
       {canRefund && refundable.length ? (
         <section className="mt-8" aria-labelledby="refund-h">
           <h2 id="refund-h" className="mb-2 text-lg font-bold">Refund a card payment</h2>

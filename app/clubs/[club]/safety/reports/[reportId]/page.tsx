@@ -9,6 +9,7 @@ import { getReport, getReporterName, listClubAircraftChoices, listReportEvents }
 import { FACTOR_LABELS, REPORT_STATUS_LABELS, type ContributingFactor } from "@/lib/safety/labels";
 import { canReadReport, canTriageReports } from "@/lib/safety/report-access";
 import { nextReportStatuses } from "@/lib/safety/report-states";
+import { formatLocalTime } from "@/lib/fleet/time";
 import { authorizePage } from "@/lib/server/authorize";
 import { isoDateInTimeZone } from "@/lib/dates";
 
@@ -58,7 +59,7 @@ export default async function ReportPage({ params }: { params: Promise<{ club: s
               <li>{isoDateInTimeZone(report.createdAt, club.timeZone)} · Received</li>
               {events.map((e) => (
                 <li key={e.id} className="break-words">
-                  {e.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC · {e.actorName ?? "Safety officer"} ·{" "}
+                  {formatLocalTime(e.createdAt, club.timeZone)} · {e.actorName ?? "Safety officer"} ·{" "}
                   {e.kind === "status" ? `${REPORT_STATUS_LABELS[e.fromStatus!]} → ${REPORT_STATUS_LABELS[e.toStatus!]}` : null}
                   {e.kind === "bulletin" && e.bulletinId ? <>Bulletin <Link href={`${base}/bulletins/${e.bulletinId}`}>{e.bulletinTitle ?? "draft"}</Link></> : null}
                   {e.kind === "grounding" ? "Aircraft grounded" : null}
