@@ -10,6 +10,8 @@ export default async function ClubsIndex() {
   const user = await getSessionUser();
   if (!user) redirect("/sign-in?callbackUrl=/clubs");
   const clubs = listClubsForUser(getDb(), user.id);
+  // An operator who is in no club of their own lands on the console they work from.
+  if (user.platformRole === "operator" && clubs.length === 0) redirect("/operator");
   if (clubs.length === 1 && user.platformRole !== "operator") redirect(`/clubs/${clubs[0]!.slug}`);
   return (
     <main className="mx-auto max-w-2xl p-4 sm:p-8">
