@@ -56,13 +56,19 @@ export function membershipOf(email: string, slug: string) {
   return getDb().select().from(memberships).where(eq(memberships.userId, u!.id)).all().find((m) => m.clubId === c.id);
 }
 
-/** Runs an action that ends in a redirect and returns where it went. */
+/**
+ * Where an action's answer sends the browser (its `redirectTo`: actions never redirect themselves),
+ * or where a page redirected (a page still may).
+ */
 export async function expectRedirect(run: () => Promise<unknown>): Promise<string> {
+  let result: unknown;
   try {
-    await run();
+    result = await run();
   } catch (error) {
     if (error instanceof Error && error.message.startsWith("redirect:")) return error.message.slice("redirect:".length);
     throw error;
   }
-  throw new Error("Expected a redirect");
+  const to = (result as { redirectTo?: unknown } | null)?.redirectTo;
+  if (typeof to === "string") return to;
+  throw new Error(`Expected an answer with redirectTo, got ${JSON.stringify(result)}`);
 }

@@ -34,14 +34,10 @@ function tableCounts(): Record<string, number> {
   return Object.fromEntries(tables.map((t) => [t, (db().$client.prepare(`select count(*) as n from "${t}"`).get() as { n: number }).n]));
 }
 
-/** The action's whole answer: its state, or where it redirected. */
+/** The action's whole answer: its state (with `redirectTo` when it sends the browser on; actions never redirect themselves). */
 async function answerOf(action: Action, fields: Record<string, string | string[]>): Promise<{ state?: ActionState; redirect?: string }> {
-  try {
-    return { state: await action(EMPTY, form(fields)) };
-  } catch (error) {
-    if (error instanceof Error && error.message.startsWith("redirect:")) return { redirect: error.message.slice("redirect:".length) };
-    throw error;
-  }
+  const state = await action(EMPTY, form(fields));
+  return state.redirectTo ? { state, redirect: state.redirectTo } : { state };
 }
 
 /**

@@ -7,7 +7,6 @@ import { ActionError } from "@/lib/actions/action-state";
 import { IMAGE_TYPES } from "@/lib/storage";
 import { reportSquawkSchema } from "@/lib/validation/fleet";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
-import { fleetPaths } from "./paths";
 
 // Any member may report; the squawk weighs on the status at once (untriaged is never flyable
 // without a look, and "may affect airworthiness" grounds until maintenance triages it).
@@ -32,7 +31,7 @@ export const reportSquawk = clubAction({
       recordSquawkEvent(tx, { clubId: club.id, squawkId: row!.id, kind: "reported", actorId: user.id, toTriage: "untriaged", note: input.suspectedGrounding ? "Reported as possibly affecting airworthiness." : null });
       insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: row!.id, uploadedById: user.id }, stored);
       // The confirmation comes from the URL, so it survives the page being rendered afresh.
-      return { data: { squawkId: row!.id }, revalidate: fleetPaths(club.slug, plane.id), redirectTo: `/clubs/${club.slug}/aircraft/${plane.id}?reported=${row!.id}` };
+      return { data: { squawkId: row!.id }, refresh: true, redirectTo: `/clubs/${club.slug}/aircraft/${plane.id}?reported=${row!.id}` };
     });
   },
 });

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { CheckboxField } from "@/components/fleet/form-bits";
+import { CheckboxField } from "@/components/ui/field";
 import { buttonClass } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
