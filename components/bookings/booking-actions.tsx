@@ -2,8 +2,7 @@
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { useState } from "react";
-import { CheckboxField } from "@/components/ui/field";
-import { Field, SelectField } from "@/components/ui/field";
+import { CheckboxField, Field, SelectField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
 import { changeBooking } from "@/lib/actions/bookings/change-booking";

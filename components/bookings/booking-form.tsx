@@ -2,10 +2,8 @@
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { useRouter } from "next/navigation";
-import { useEffect, useState } from "react";
-import { CheckboxField } from "@/components/ui/field";
-import { Field, SelectField } from "@/components/ui/field";
+import { useState } from "react";
+import { CheckboxField, Field, SelectField } from "@/components/ui/field";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { GuardNotes } from "./guard-notes";
 
@@ -14,13 +12,8 @@ type Choice = { id: string; label: string };
 export function BookingForm({ slug, aircraft, instructors, members, defaults }: { slug: string; aircraft: Choice[]; instructors: Choice[]; members: Choice[] | null; defaults: { aircraftId: string; startsAt: string; endsAt: string } }) {
   const form = useFormAction(createBooking);
   const { state } = form;
-  const router = useRouter();
   const [values, setValues] = useState({ ...defaults, instructorId: "", memberId: "", purpose: "", carryingPassengers: false });
   const set = (k: keyof typeof values) => (e: { target: { value: string; checked?: boolean; type?: string } }) => setValues((v) => ({ ...v, [k]: e.target.type === "checkbox" ? Boolean(e.target.checked) : e.target.value }));
-  const bookingId = (state.data as { bookingId?: string } | undefined)?.bookingId;
-  useEffect(() => {
-    if (state.ok && bookingId) router.push(`/clubs/${slug}/bookings/${bookingId}`);
-  }, [state.ok, bookingId, router, slug]);
   const e = state.fieldErrors;
   return (
     <FormShell form={form} label="Book an aircraft">

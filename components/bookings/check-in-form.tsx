@@ -2,8 +2,7 @@
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { TextAreaField } from "@/components/ui/field";
-import { Field } from "@/components/ui/field";
+import { Field, TextAreaField } from "@/components/ui/field";
 import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
 
 export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, checkedIn }: { slug: string; bookingId: string; hobbs: number | null; tach: number | null; metric: boolean; rateText: string; checkedIn: boolean }) {

@@ -1,11 +1,10 @@
 "use client";
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
-import { Field, SelectField } from "@/components/ui/field";
+import { Field, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { logFlight } from "@/lib/actions/fleet/log-flight";
 import { reviewMeterFlag } from "@/lib/actions/fleet/review-meter-flag";
-import { TextAreaField } from "@/components/ui/field";
 
 type PlaneChoice = { id: string; registration: string; hobbs: number | null; tach: number | null };
 

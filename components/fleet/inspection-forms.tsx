@@ -2,12 +2,11 @@
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { useState } from "react";
-import { Field, SelectField } from "@/components/ui/field";
+import { CheckboxField, Field, FileField, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { createInspectionItem } from "@/lib/actions/fleet/create-inspection-item";
 import { recordCompletion } from "@/lib/actions/fleet/record-completion";
 import { updateInspectionItem } from "@/lib/actions/fleet/update-inspection-item";
-import { CheckboxField, FileField, TextAreaField } from "@/components/ui/field";
 
 export function RecordCompletionForm({ slug, itemId, itemName, today, hoursBased, fixedDate, meterName, meterNow }: { slug: string; itemId: string; itemName: string; today: string; hoursBased: boolean; fixedDate: boolean; meterName: string; meterNow: number | null }) {
   const form = useFormAction(recordCompletion);

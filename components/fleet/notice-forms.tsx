@@ -1,11 +1,10 @@
 "use client";
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
-import { Field, SelectField } from "@/components/ui/field";
+import { Field, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { issueGroundingNotice } from "@/lib/actions/fleet/issue-grounding-notice";
 import { liftGroundingNotice } from "@/lib/actions/fleet/lift-grounding-notice";
-import { TextAreaField } from "@/components/ui/field";
 
 export function IssueNoticeForm({ slug, aircraftId, registration, defaultCategory }: { slug: string; aircraftId: string; registration: string; defaultCategory: "safety" | "maintenance" }) {
   const form = useFormAction(issueGroundingNotice);

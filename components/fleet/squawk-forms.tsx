@@ -2,12 +2,11 @@
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { useState } from "react";
-import { Field, SelectField } from "@/components/ui/field";
+import { CheckboxField, Field, FileField, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { closeSquawk } from "@/lib/actions/fleet/close-squawk";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
 import { triageSquawk } from "@/lib/actions/fleet/triage-squawk";
-import { CheckboxField, FileField, TextAreaField } from "@/components/ui/field";
 
 export function ReportSquawkForm({ slug, aircraftId, registration }: { slug: string; aircraftId: string; registration: string }) {
   const form = useFormAction(reportSquawk);

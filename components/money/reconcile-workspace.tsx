@@ -49,7 +49,7 @@ function BookForm({ slug, line }: { slug: string; line: WorkspaceLine }) {
   const form = useFormAction(bookLine);
   const { state } = form;
   return (
-    <FormShell form={form} label={`Book line ${line.lineNo}`} className="mt-2 grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
+    <FormShell form={form} label={`Book line ${line.lineNo}`} className="mt-2 grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end" answer="none">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bankLineId" value={line.id} />
       <label className="text-sm"><span className="field-label">Account</span>
@@ -65,7 +65,7 @@ function BookForm({ slug, line }: { slug: string; line: WorkspaceLine }) {
       </label>
       <label className="text-sm"><span className="field-label">Memo</span><input name="memo" className="field-input" defaultValue={line.description} /></label>
       <SubmitButton variant="secondary" pendingText="Posting…">Post to the books</SubmitButton>
-      <div className="sm:col-span-3"><FormMessage state={state} /></div>
+      <div className="sm:col-span-3"><FormMessage state={state} answerCount={form.answerCount} /></div>
     </FormShell>
   );
 }

@@ -3,8 +3,7 @@ import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { useState } from "react";
-import { CheckboxField, FileField, TextAreaField } from "@/components/ui/field";
-import { Field } from "@/components/ui/field";
+import { CheckboxField, Field, FileField, TextAreaField } from "@/components/ui/field";
 import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
 
 type Item = { id: string; section: string; label: string; kind: "check" | "document" };
@@ -27,7 +26,7 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
   if (state.ok) return <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">✓ {state.message}</p>;
   return (
     <FormShell form={form} label="Preflight record">
-      {e._form ? <p role="alert" className="field-error mb-3">{e._form.join(" ")}</p> : null}
+      {e._form ? <p className="field-error mb-3">{e._form.join(" ")}</p> : null}
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
       {sections.map((section) => (

@@ -1,8 +1,7 @@
 "use client";
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
-import { TextAreaField } from "@/components/ui/field";
-import { Field } from "@/components/ui/field";
+import { Field, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { savePreflightTemplateAction } from "@/lib/actions/preflight/save-template";
 

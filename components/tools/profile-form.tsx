@@ -1,8 +1,7 @@
 "use client";
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
-import { TextAreaField } from "@/components/ui/field";
-import { Field, SelectField } from "@/components/ui/field";
+import { Field, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { saveWeightBalanceProfileAction } from "@/lib/actions/tools/save-weight-balance-profile";
 

@@ -24,7 +24,8 @@ export const createBooking = clubAction({
     return {
       message: `${made.plane.registration} booked from ${when}.${made.acceptedWarnings.length ? " The warnings you read are kept with the booking." : ""}`,
       data: { bookingId: made.bookingId },
-      refresh: true,
+      // The form shows the answer, then opens the new booking's page.
+      redirectTo: `/clubs/${club.slug}/bookings/${made.bookingId}`,
     };
   },
 });

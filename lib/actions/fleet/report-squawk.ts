@@ -13,7 +13,7 @@ import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFile
 export const reportSquawk = clubAction({
   schema: reportSquawkSchema,
   permission: ["create", "Squawk"],
-  success: "Squawk reported. Maintenance has been told on the flight line.",
+  success: "Squawk reported.",
   async prepare({ db, club }, input) {
     if (!getAircraft(db, club.id, input.aircraftId)) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
     return storeFiles(await checkFiles(input.photos, IMAGE_TYPES, "photos"));
@@ -30,8 +30,8 @@ export const reportSquawk = clubAction({
         .all();
       recordSquawkEvent(tx, { clubId: club.id, squawkId: row!.id, kind: "reported", actorId: user.id, toTriage: "untriaged", note: input.suspectedGrounding ? "Reported as possibly affecting airworthiness." : null });
       insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: row!.id, uploadedById: user.id }, stored);
-      // The confirmation comes from the URL, so it survives the page being rendered afresh.
-      return { data: { squawkId: row!.id }, refresh: true, redirectTo: `/clubs/${club.slug}/aircraft/${plane.id}?reported=${row!.id}` };
+      // The form shows this answer in place (quoting what was reported), then the page's lists refresh.
+      return { message: `Squawk reported: “${input.description}”.`, data: { squawkId: row!.id }, refresh: true };
     });
   },
 });
