@@ -76,8 +76,10 @@ export async function runForms(pages: FormPages, opts: { total: number; answerTi
     const ms = performance.now() - start;
     samples.push({ n: samples.length + 1, kind, ms, answered, landed });
     if (!answered) {
-      const still = await button.textContent({ timeout: 1_000 }).catch(() => "(button gone)");
-      opts.log?.(`  #${samples.length} ${kind}: no answer after ${opts.answerTimeoutMs} ms (button now "${still}", at ${page.url()})`);
+      // What the page shows instead: the button's words, and whether a loading skeleton is up.
+      const still = await button.textContent({ timeout: 1_000 }).catch(() => "(button not found)");
+      const skeleton = await page.locator('[aria-busy="true"][aria-label="Loading"]').count();
+      opts.log?.(`  #${samples.length} ${kind}: no answer after ${opts.answerTimeoutMs} ms (button now "${still}", loading skeletons shown: ${skeleton}, at ${page.url()})`);
       if (opts.stopOnMissingAnswer) stop = true;
       else await open(page, reloadTo);
     }

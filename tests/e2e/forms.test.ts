@@ -1,8 +1,8 @@
 import path from "node:path";
 import Database from "better-sqlite3";
 import { describe, expect, inject, it } from "vitest";
-import { formPages, runForms, summarize } from "./form-runs";
-import { baseUrl, getBrowser } from "./harness";
+import { FORMS_CLUB, FORMS_REG, formPages, runForms, summarize } from "./form-runs";
+import { baseUrl, getBrowser, newPage, signIn } from "./harness";
 
 // Fifty forms in a row, seven kinds, four roles: each gets its own answer (role="status" text, or
 // the page its answer sends the browser to) and each stored exactly one record.
@@ -33,5 +33,39 @@ describe("fifty forms in a row", () => {
     const s = summarize(samples);
     expect(s.unanswered).toBe(0);
     for (const p of Object.values(pages)) await p.context().close();
+  });
+});
+
+describe("a refused submission keeps what was typed", () => {
+  it("a refused photo keeps the squawk's description; the photo field is marked, described and focused", async () => {
+    const page = await newPage("phone");
+    await signIn(page, "pilot2@hangarline.test");
+    await page.goto(`${FORMS_CLUB}/flight-line`);
+    await page.locator(`article[data-registration="${FORMS_REG}"]`).getByRole("link", { name: FORMS_REG }).click();
+    await page.waitForURL(/\/aircraft\/[^/]+$/);
+    await page.getByRole("heading", { name: FORMS_REG, level: 1 }).waitFor();
+    const form = page.getByRole("form", { name: `Report a squawk on ${FORMS_REG}` });
+    const description = `Refused photo test ${Date.now()}: pitot tube bent`;
+    await form.getByLabel("What did you find?").fill(description);
+    // Called a PNG, but it is text: the server checks the content and refuses it.
+    await form.getByLabel("Photos (optional)").setInputFiles({ name: "not-a-photo.png", mimeType: "image/png", buffer: Buffer.from("just some text, not an image") });
+    await form.getByRole("button", { name: "Report squawk" }).click();
+    const refusal = form.getByRole("status").getByRole("alert");
+    await refusal.waitFor();
+    expect(await refusal.textContent()).toMatch(/nothing was saved|need attention|photo/i);
+    // One message in the status region, not two.
+    expect(await form.getByRole("status").count()).toBe(1);
+    expect(await form.getByLabel("What did you find?").inputValue()).toBe(description);
+    const photos = form.getByLabel("Photos (optional)");
+    expect(await photos.getAttribute("aria-invalid")).toBe("true");
+    const describedBy = (await photos.getAttribute("aria-describedby")) ?? "";
+    expect(describedBy).not.toBe("");
+    expect((await page.locator(`#${describedBy.split(" ")[0]}`).textContent()) ?? "").not.toBe("");
+    expect(await photos.evaluate((el) => el === document.activeElement)).toBe(true);
+    // The button is enabled again (disabled only while waiting) and nothing was stored.
+    expect(await form.getByRole("button", { name: "Report squawk" }).isDisabled()).toBe(false);
+    await page.goto(page.url());
+    expect(await page.locator("li[data-squawk]").filter({ hasText: description }).count()).toBe(0);
+    await page.context().close();
   });
 });
