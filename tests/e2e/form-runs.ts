@@ -67,13 +67,16 @@ export async function runForms(pages: FormPages, opts: { total: number; answerTi
     const start = performance.now();
     await button.click();
     let answered = true;
+    let ms = Number.NaN;
     try {
       await answer.waitFor({ state: "visible", timeout: opts.answerTimeoutMs });
+      ms = performance.now() - start;
+      // The follow-up the answer asked for (a page to open) must happen too; not part of the time.
       if (after) await after();
     } catch {
       answered = false;
+      ms = performance.now() - start;
     }
-    const ms = performance.now() - start;
     samples.push({ n: samples.length + 1, kind, ms, answered, landed });
     if (!answered) {
       // What the page shows instead: the button's words, and whether a loading skeleton is up.
