@@ -33,7 +33,7 @@ describe("fifty forms in a row", () => {
     const s = summarize(samples);
     expect(s.unanswered).toBe(0);
     for (const p of Object.values(pages)) await p.context().close();
-  });
+  }, 600_000); // fifty submissions, each on a freshly loaded page, on a shared 2-core machine
 });
 
 describe("a refused submission keeps what was typed", () => {
