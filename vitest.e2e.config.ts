@@ -13,9 +13,9 @@ export default defineConfig({
     include: ["tests/e2e/**/*.test.ts"],
     globalSetup: ["tests/e2e/global-setup.ts"],
     fileParallelism: false,
-    // A form submission in headless Chromium occasionally never gets its server-action answer
-    // (seen a few times, cause not yet found); retries keep such a hiccup from failing CI.
-    retry: 4,
+    // No retries: a browser test that fails once is a failure to fix. Each test waits for the
+    // action's own answer (role="status"), never sleeps; see DEVELOPERS.md "Forms and their answers".
+    retry: 0,
     testTimeout: 150_000,
     hookTimeout: 180_000,
   },

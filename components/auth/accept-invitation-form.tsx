@@ -1,18 +1,15 @@
 "use client";
-import { useActionState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { Field } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { acceptInvitation } from "@/lib/actions/invitations/accept-invitation";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function AcceptInvitationForm({ token, needsAccount }: { token: string; needsAccount: boolean }) {
-  const [state, action] = useActionState(acceptInvitation, initialActionState);
+  const form = useFormAction(acceptInvitation);
+  const { state } = form;
   return (
-    <form action={action} noValidate aria-label="Accept invitation">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Accept invitation">
       <input type="hidden" name="token" value={token} />
       {needsAccount ? (
         <>
@@ -21,6 +18,6 @@ export function AcceptInvitationForm({ token, needsAccount }: { token: string; n
         </>
       ) : null}
       <SubmitButton pendingText="Joining…">{needsAccount ? "Create my account and join" : "Join the club"}</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

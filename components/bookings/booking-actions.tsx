@@ -1,29 +1,24 @@
 "use client";
-import { useActionState, useState } from "react";
-import { CheckboxField } from "@/components/fleet/form-bits";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { useState } from "react";
+import { CheckboxField, Field, SelectField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
 import { changeBooking } from "@/lib/actions/bookings/change-booking";
 import { dispatchBooking } from "@/lib/actions/bookings/dispatch-booking";
 import { GuardNotes } from "./guard-notes";
-import { PendingButton } from "./pending-button";
-import { useKeptForm } from "./use-kept-form";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Choice = { id: string; label: string };
 
 export function ChangeBookingForm({ slug, bookingId, defaults, instructors, lateNote }: { slug: string; bookingId: string; defaults: { startsAt: string; endsAt: string; instructorId: string }; instructors: Choice[]; lateNote: string | null }) {
-  const { state, onSubmit, pending } = useKeptForm(changeBooking, initialActionState);
+  const form = useFormAction(changeBooking);
+  const { state } = form;
   const [values, setValues] = useState(defaults);
   const set = (k: keyof typeof values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [k]: e.target.value }));
   const e = state.fieldErrors;
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Change the booking">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Change the booking">
       <GuardNotes state={state} />
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
@@ -36,33 +31,31 @@ export function ChangeBookingForm({ slug, bookingId, defaults, instructors, late
         {instructors.map((i) => <option key={i.id} value={i.id}>{i.label}</option>)}
       </SelectField>
       {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
-      <PendingButton pending={pending} variant="secondary">Save the change</PendingButton>
-    </form>
+      <SubmitButton variant="secondary">Save the change</SubmitButton>
+    </FormShell>
   );
 }
 
 export function CancelBookingForm({ slug, bookingId, lateNote }: { slug: string; bookingId: string; lateNote: string | null }) {
-  const [state, action] = useActionState(cancelBooking, initialActionState);
+  const form = useFormAction(cancelBooking);
+  const { state } = form;
   return (
-    <form action={action} noValidate aria-label="Cancel the booking">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Cancel the booking">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
       <Field label="Reason (optional)" name="reason" maxLength={300} errors={state.fieldErrors.reason} />
       {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
       <SubmitButton variant="danger" pendingText="Cancelling…">Cancel the booking</SubmitButton>
-    </form>
+    </FormShell>
   );
 }
 
 export function DispatchForm({ slug, bookingId, records }: { slug: string; bookingId: string; records: { id: string; label: string }[] }) {
-  const { state, onSubmit, pending } = useKeptForm(dispatchBooking, initialActionState);
+  const form = useFormAction(dispatchBooking);
+  const { state } = form;
   const e = state.fieldErrors;
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Dispatch">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Dispatch">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
       <SelectField label="Preflight record" name="preflightRecordId" defaultValue={records[0]?.id ?? ""} errors={e.preflightRecordId}>
@@ -75,7 +68,7 @@ export function DispatchForm({ slug, bookingId, records }: { slug: string; booki
         </div>
       ) : null}
       <CheckboxField label="I have dealt with every finding listed for this aircraft." name="acceptFindings" hint="Needed only when the record or the aircraft's status shows something." />
-      <PendingButton pending={pending} pendingText="Dispatching…">Dispatch</PendingButton>
-    </form>
+      <SubmitButton pendingText="Dispatching…">Dispatch</SubmitButton>
+    </FormShell>
   );
 }

@@ -1,32 +1,22 @@
 "use client";
-import { useRouter } from "next/navigation";
-import { useEffect, useState } from "react";
-import { CheckboxField } from "@/components/fleet/form-bits";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
-import { initialActionState } from "@/lib/actions/action-state";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { useState } from "react";
+import { CheckboxField, Field, SelectField } from "@/components/ui/field";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { GuardNotes } from "./guard-notes";
-import { PendingButton } from "./pending-button";
-import { useKeptForm } from "./use-kept-form";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Choice = { id: string; label: string };
 
 export function BookingForm({ slug, aircraft, instructors, members, defaults }: { slug: string; aircraft: Choice[]; instructors: Choice[]; members: Choice[] | null; defaults: { aircraftId: string; startsAt: string; endsAt: string } }) {
-  const { state, onSubmit, pending } = useKeptForm(createBooking, initialActionState);
-  const router = useRouter();
+  const form = useFormAction(createBooking);
+  const { state } = form;
   const [values, setValues] = useState({ ...defaults, instructorId: "", memberId: "", purpose: "", carryingPassengers: false });
   const set = (k: keyof typeof values) => (e: { target: { value: string; checked?: boolean; type?: string } }) => setValues((v) => ({ ...v, [k]: e.target.type === "checkbox" ? Boolean(e.target.checked) : e.target.value }));
-  const bookingId = (state.data as { bookingId?: string } | undefined)?.bookingId;
-  useEffect(() => {
-    if (state.ok && bookingId) router.push(`/clubs/${slug}/bookings/${bookingId}`);
-  }, [state.ok, bookingId, router, slug]);
   const e = state.fieldErrors;
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Book an aircraft">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Book an aircraft">
       <GuardNotes state={state} />
       <input type="hidden" name="club" value={slug} />
       <SelectField label="Aircraft" name="aircraftId" value={values.aircraftId} onChange={set("aircraftId")} errors={e.aircraftId}>
@@ -49,7 +39,7 @@ export function BookingForm({ slug, aircraft, instructors, members, defaults }: 
       </SelectField>
       <Field label="Purpose (optional)" name="purpose" value={values.purpose} onChange={set("purpose")} errors={e.purpose} maxLength={200} />
       <CheckboxField label="I plan to carry passengers" name="carryingPassengers" checked={values.carryingPassengers} onChange={set("carryingPassengers")} errors={e.carryingPassengers} hint="Then passenger currency (14 CFR 61.57(a)) is checked too." />
-      <PendingButton pending={pending} pendingText="Booking…">Book</PendingButton>
-    </form>
+      <SubmitButton pendingText="Booking…">Book</SubmitButton>
+    </FormShell>
   );
 }

@@ -1,15 +1,13 @@
 "use client";
-import { TextAreaField } from "@/components/fleet/form-bits";
-import { Field } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
-import { initialActionState } from "@/lib/actions/action-state";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { Field, TextAreaField } from "@/components/ui/field";
 import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
-import { PendingButton } from "./pending-button";
-import { useKeptForm } from "./use-kept-form";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, checkedIn }: { slug: string; bookingId: string; hobbs: number | null; tach: number | null; metric: boolean; rateText: string; checkedIn: boolean }) {
-  const { state, onSubmit, pending } = useKeptForm(checkInBooking, initialActionState);
+  const form = useFormAction(checkInBooking);
+  const { state } = form;
   const e = state.fieldErrors;
   if (state.ok) {
     return <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">✓ {state.message}</p>;
@@ -17,9 +15,7 @@ export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, ch
   // Kept mounted when the page re-renders after check-in, so the message above survives.
   if (checkedIn) return <p role="status">✓ This booking is checked in; the flight is in the log.</p>;
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Check in">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Check in">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
       <div className="grid grid-cols-2 gap-x-3">
@@ -35,7 +31,7 @@ export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, ch
       <TextAreaField label="Squawk (optional)" name="squawk" errors={e.squawk} hint="Anything wrong with the aircraft: it goes to maintenance with this flight." />
       <TextAreaField label="Notes (optional)" name="notes" errors={e.notes} rows={2} />
       <p className="mb-3 text-sm text-ink-700">The flight is charged at {rateText} and posted to your account once.</p>
-      <PendingButton pending={pending} pendingText="Checking in…">Check in</PendingButton>
-    </form>
+      <SubmitButton pendingText="Checking in…">Check in</SubmitButton>
+    </FormShell>
   );
 }

@@ -1,14 +1,12 @@
 "use client";
-import { useActionState, useState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { useState } from "react";
 import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
-import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordDocument } from "@/lib/actions/documents/record-document";
 import { DOCUMENT_KINDS, type DocumentKind } from "@/db/schema/safety";
 import { DOCUMENT_KIND_LABELS } from "@/lib/safety/labels";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 const COPY: Record<DocumentKind, { issued: string; reference: string; details: string; expires: string | null }> = {
   pilot_certificate: { issued: "Date issued", reference: "Certificate number", details: "Certificate level and ratings", expires: null },
@@ -18,15 +16,13 @@ const COPY: Record<DocumentKind, { issued: string; reference: string; details: s
 };
 
 export function DocumentForm({ slug, today }: { slug: string; today: string }) {
-  const [state, action, pending] = useActionState(recordDocument, initialActionState);
-  const formRef = useResetOnSuccess(state);
+  const form = useFormAction(recordDocument);
+  const { state } = form;
   const [kind, setKind] = useState<DocumentKind>("pilot_certificate");
   const copy = COPY[kind];
   const e = state.fieldErrors;
   return (
-    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Record a document">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Record a document">
       <input type="hidden" name="club" value={slug} />
       <SelectField label="Document" name="kind" value={kind} onChange={(ev) => setKind(ev.target.value as DocumentKind)} errors={e.kind}>
         {DOCUMENT_KINDS.map((k) => (
@@ -41,7 +37,7 @@ export function DocumentForm({ slug, today }: { slug: string; today: string }) {
       </div>
       {kind === "flight_review" ? <p className="mb-4 text-sm text-ink-700">Valid through the end of the 24th calendar month after the review month (14 CFR 61.56(c)); Hangarline works the date out.</p> : null}
       <Field label="Scan or photo (optional)" name="file" type="file" accept="application/pdf,image/jpeg,image/png,image/webp,image/heic" errors={e.file} hint="PDF or photo, up to 10 MB. Instructors, the safety officer and club admins can open it." />
-      <SubmitButton disabled={pending}>Record document</SubmitButton>
-    </form>
+      <SubmitButton>Record document</SubmitButton>
+    </FormShell>
   );
 }

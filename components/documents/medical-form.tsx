@@ -1,22 +1,18 @@
 "use client";
-import { useActionState, useState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { useState } from "react";
 import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
-import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordMedical } from "@/lib/actions/documents/record-medical";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function MedicalForm({ slug, today, hasBirthDate }: { slug: string; today: string; hasBirthDate: boolean }) {
-  const [state, action, pending] = useActionState(recordMedical, initialActionState);
-  const formRef = useResetOnSuccess(state);
+  const form = useFormAction(recordMedical);
+  const { state } = form;
   const [kind, setKind] = useState<"faa_class" | "basicmed">("faa_class");
   const e = state.fieldErrors;
   return (
-    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Record a medical">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Record a medical">
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-2">
         <SelectField label="Kind" name="kind" value={kind} onChange={(ev) => setKind(ev.target.value as "faa_class" | "basicmed")} errors={e.kind}>
@@ -44,7 +40,7 @@ export function MedicalForm({ slug, today, hasBirthDate }: { slug: string; today
         />
       </div>
       <Field label="Limitations (optional)" name="limitations" maxLength={500} errors={e.limitations} hint="Seen only by you and club admins." />
-      <SubmitButton disabled={pending}>Record medical</SubmitButton>
-    </form>
+      <SubmitButton>Record medical</SubmitButton>
+    </FormShell>
   );
 }

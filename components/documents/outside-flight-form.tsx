@@ -1,21 +1,16 @@
 "use client";
-import { useActionState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
-import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { recordOutsideFlight } from "@/lib/actions/documents/record-outside-flight";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function OutsideFlightForm({ slug, today, typeGroups }: { slug: string; today: string; typeGroups: string[] }) {
-  const [state, action, pending] = useActionState(recordOutsideFlight, initialActionState);
-  const formRef = useResetOnSuccess(state);
+  const form = useFormAction(recordOutsideFlight);
+  const { state } = form;
   const e = state.fieldErrors;
   return (
-    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Add a flight from elsewhere">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Add a flight from elsewhere">
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-2">
         <Field label="Date flown" name="flownOn" type="date" max={today} errors={e.flownOn} />
@@ -30,7 +25,7 @@ export function OutsideFlightForm({ slug, today, typeGroups }: { slug: string; t
         </SelectField>
         <Field label="Note (optional)" name="note" maxLength={500} errors={e.note} />
       </div>
-      <SubmitButton disabled={pending}>Add flight</SubmitButton>
-    </form>
+      <SubmitButton>Add flight</SubmitButton>
+    </FormShell>
   );
 }

@@ -1,13 +1,10 @@
 "use client";
-import { useActionState } from "react";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { createAircraft } from "@/lib/actions/fleet/create-aircraft";
 import { updateAircraft } from "@/lib/actions/fleet/update-aircraft";
-import { CheckboxField, FileField, TextAreaField } from "./form-bits";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
+import { CheckboxField, Field, FileField, SelectField, TextAreaField } from "@/components/ui/field";
 
 export type AircraftFormValues = {
   id: string;
@@ -35,13 +32,12 @@ export type AircraftFormValues = {
 };
 
 export function AircraftForm({ slug, currency, values }: { slug: string; currency: string; values?: AircraftFormValues }) {
-  const [state, action] = useActionState(values ? updateAircraft : createAircraft, initialActionState);
+  const form = useFormAction(values ? updateAircraft : createAircraft, { keepValuesAfterOk: Boolean(values) });
+  const { state } = form;
   const e = state.fieldErrors;
   const v = values;
   return (
-    <form action={action} noValidate aria-label={v ? `Edit ${v.registration}` : "Add an aircraft"}>
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={v ? `Edit ${v.registration}` : "Add an aircraft"}>
       <input type="hidden" name="club" value={slug} />
       {v ? <input type="hidden" name="aircraftId" value={v.id} /> : null}
       <div className="grid gap-x-3 sm:grid-cols-2">
@@ -79,6 +75,6 @@ export function AircraftForm({ slug, currency, values }: { slug: string; currenc
       {v ? <FileField label="Photo (optional)" name="photo" accept="image/jpeg,image/png,image/webp,image/heic" hint="JPEG, PNG, WebP or HEIC, up to 10 MB." errors={e.photo} /> : null}
       {v ? <p className="mb-3 text-sm text-ink-500">Changing the meters here is a correction and is kept in the audit log; flights move them normally.</p> : null}
       <SubmitButton>{v ? "Save aircraft" : "Add aircraft"}</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

@@ -1,24 +1,20 @@
 "use client";
-import { useActionState } from "react";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { Field, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { logFlight } from "@/lib/actions/fleet/log-flight";
 import { reviewMeterFlag } from "@/lib/actions/fleet/review-meter-flag";
-import { TextAreaField } from "./form-bits";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type PlaneChoice = { id: string; registration: string; hobbs: number | null; tach: number | null };
 
 export function LogFlightForm({ slug, aircraft, today, metric, fixedAircraftId }: { slug: string; aircraft: PlaneChoice[]; today: string; metric: boolean; fixedAircraftId?: string }) {
-  const [state, action] = useActionState(logFlight, initialActionState);
+  const form = useFormAction(logFlight);
+  const { state } = form;
   const fixed = fixedAircraftId ? aircraft.find((a) => a.id === fixedAircraftId) : undefined;
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Log a flight" key={state.ok ? `${state.message}-${Date.now()}` : "log"}>
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Log a flight">
       <input type="hidden" name="club" value={slug} />
       {fixed ? (
         <input type="hidden" name="aircraftId" value={fixed.id} />
@@ -44,20 +40,19 @@ export function LogFlightForm({ slug, aircraft, today, metric, fixedAircraftId }
       <TextAreaField label="Squawk found (optional)" name="squawk" rows={2} errors={e.squawk} hint="Becomes a squawk for maintenance to triage. Use the aircraft page to add photos." />
       <Field label="Notes (optional)" name="notes" errors={e.notes} />
       <SubmitButton pendingText="Logging…">Log flight</SubmitButton>
-    </form>
+    </FormShell>
   );
 }
 
 export function ReviewMeterFlagForm({ slug, flightId }: { slug: string; flightId: string }) {
-  const [state, action] = useActionState(reviewMeterFlag, initialActionState);
+  const form = useFormAction(reviewMeterFlag);
+  const { state } = form;
   return (
-    <form action={action} noValidate aria-label="Review meter flag">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Review meter flag">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="flightId" value={flightId} />
       <TextAreaField label="What was found" name="note" id={`review-${flightId}`} rows={2} errors={state.fieldErrors.note} hint="E.g. a ground run not logged, or a typing error confirmed with the pilot." />
       <SubmitButton>Mark reviewed</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

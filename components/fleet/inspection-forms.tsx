@@ -1,23 +1,20 @@
 "use client";
-import { useActionState, useState } from "react";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { useState } from "react";
+import { CheckboxField, Field, FileField, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { createInspectionItem } from "@/lib/actions/fleet/create-inspection-item";
 import { recordCompletion } from "@/lib/actions/fleet/record-completion";
 import { updateInspectionItem } from "@/lib/actions/fleet/update-inspection-item";
-import { CheckboxField, FileField, TextAreaField } from "./form-bits";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function RecordCompletionForm({ slug, itemId, itemName, today, hoursBased, fixedDate, meterName, meterNow }: { slug: string; itemId: string; itemName: string; today: string; hoursBased: boolean; fixedDate: boolean; meterName: string; meterNow: number | null }) {
-  const [state, action] = useActionState(recordCompletion, initialActionState);
+  const form = useFormAction(recordCompletion);
+  const { state } = form;
   const e = state.fieldErrors;
   const p = `c-${itemId}`;
   return (
-    <form action={action} noValidate aria-label={`Record ${itemName}`} key={state.ok ? `${state.message}-${Date.now()}` : "complete"}>
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={`Record ${itemName}`}>
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="itemId" value={itemId} />
       <Field label="Date done" name="doneOn" id={`${p}-on`} type="date" defaultValue={today} max={today} errors={e.doneOn} />
@@ -28,20 +25,19 @@ export function RecordCompletionForm({ slug, itemId, itemName, today, hoursBased
       <TextAreaField label="Notes (optional)" name="notes" id={`${p}-notes`} rows={2} errors={e.notes} />
       <FileField label="Work order or logbook page (optional)" name="document" id={`${p}-doc`} accept="image/jpeg,image/png,image/webp,image/heic,application/pdf" hint="PDF or photo, up to 10 MB." errors={e.document} />
       <SubmitButton>Record completion</SubmitButton>
-    </form>
+    </FormShell>
   );
 }
 
 export function CreateItemForm({ slug, aircraftId }: { slug: string; aircraftId: string }) {
-  const [state, action] = useActionState(createInspectionItem, initialActionState);
+  const form = useFormAction(createInspectionItem);
+  const { state } = form;
   const [kind, setKind] = useState("calendar-months");
   const e = state.fieldErrors;
   const months = kind === "calendar-months" || kind === "months-or-hours";
   const hours = kind === "hours" || kind === "months-or-hours";
   return (
-    <form action={action} noValidate aria-label="Add an inspection item" key={state.ok ? `${state.message}-${Date.now()}` : "item"}>
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Add an inspection item">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />
       <Field label="Name" name="name" id="item-name" errors={e.name} placeholder="e.g. AD 0000-00-00 recurring fuel-line check" />
@@ -66,23 +62,22 @@ export function CreateItemForm({ slug, aircraftId }: { slug: string; aircraftId:
       <CheckboxField name="required" id="item-required" label="Required: grounds the aircraft when overdue" defaultChecked errors={e.required} />
       <CheckboxField name="ifrOnly" id="item-ifr" label="Needed only for IFR flight" errors={e.ifrOnly} />
       <SubmitButton>Add item</SubmitButton>
-    </form>
+    </FormShell>
   );
 }
 
 export function UpdateItemForm({ slug, itemId, hasUsage, canRetire }: { slug: string; itemId: string; hasUsage: boolean; canRetire: boolean }) {
-  const [state, action] = useActionState(updateInspectionItem, initialActionState);
+  const form = useFormAction(updateInspectionItem);
+  const { state } = form;
   const p = `u-${itemId}`;
   return (
-    <form action={action} noValidate aria-label="Update inspection item">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Update inspection item">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="itemId" value={itemId} />
       {hasUsage ? <Field label="Cumulative use since the last completion (h)" name="usageUsedHours" id={`${p}-use`} inputMode="decimal" errors={state.fieldErrors.usageUsedHours} /> : null}
       {canRetire ? <CheckboxField name="retire" id={`${p}-retire`} label="Retire this item (it no longer applies); its history stays" errors={state.fieldErrors.retire} /> : null}
       <Field label="Note (optional)" name="note" id={`${p}-note`} errors={state.fieldErrors.note} />
       <SubmitButton variant="secondary">Save item</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

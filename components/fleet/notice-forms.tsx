@@ -1,20 +1,16 @@
 "use client";
-import { useActionState } from "react";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { Field, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { issueGroundingNotice } from "@/lib/actions/fleet/issue-grounding-notice";
 import { liftGroundingNotice } from "@/lib/actions/fleet/lift-grounding-notice";
-import { TextAreaField } from "./form-bits";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function IssueNoticeForm({ slug, aircraftId, registration, defaultCategory }: { slug: string; aircraftId: string; registration: string; defaultCategory: "safety" | "maintenance" }) {
-  const [state, action] = useActionState(issueGroundingNotice, initialActionState);
+  const form = useFormAction(issueGroundingNotice);
+  const { state } = form;
   return (
-    <form action={action} noValidate aria-label={`Ground ${registration}`} key={state.ok ? `${state.message}-${Date.now()}` : "issue"}>
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={`Ground ${registration}`}>
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />
       <TextAreaField label="Reason" name="reason" id="notice-reason" required errors={state.fieldErrors.reason} />
@@ -24,17 +20,16 @@ export function IssueNoticeForm({ slug, aircraftId, registration, defaultCategor
       </SelectField>
       <Field label="Effective from (club time; empty = now)" name="effectiveAt" id="notice-effective" type="datetime-local" errors={state.fieldErrors.effectiveAt} />
       <SubmitButton variant="danger" pendingText="Issuing…">Issue grounding notice and e-mail members</SubmitButton>
-    </form>
+    </FormShell>
   );
 }
 
 export function LiftNoticeForm({ slug, noticeId, category }: { slug: string; noticeId: string; category: "safety" | "maintenance" }) {
-  const [state, action] = useActionState(liftGroundingNotice, initialActionState);
+  const form = useFormAction(liftGroundingNotice);
+  const { state } = form;
   const rts = category === "maintenance";
   return (
-    <form action={action} noValidate aria-label="Lift grounding notice">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Lift grounding notice">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="noticeId" value={noticeId} />
       <TextAreaField label="Why it is lifted" name="liftNote" id={`lift-note-${noticeId}`} required errors={state.fieldErrors.liftNote} />
@@ -45,6 +40,6 @@ export function LiftNoticeForm({ slug, noticeId, category }: { slug: string; not
         </>
       ) : null}
       <SubmitButton>Lift notice</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

@@ -1,21 +1,18 @@
 "use client";
-import { useActionState, useState } from "react";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { useState } from "react";
+import { CheckboxField, Field, FileField, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { closeSquawk } from "@/lib/actions/fleet/close-squawk";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
 import { triageSquawk } from "@/lib/actions/fleet/triage-squawk";
-import { CheckboxField, FileField, TextAreaField } from "./form-bits";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function ReportSquawkForm({ slug, aircraftId, registration }: { slug: string; aircraftId: string; registration: string }) {
-  const [state, action] = useActionState(reportSquawk, initialActionState);
+  const form = useFormAction(reportSquawk);
+  const { state } = form;
   return (
-    <form action={action} noValidate aria-label={`Report a squawk on ${registration}`} key={state.ok ? `${state.message}-${Date.now()}` : "report"}>
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={`Report a squawk on ${registration}`}>
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />
       <TextAreaField label="What did you find?" name="description" required errors={state.fieldErrors.description} placeholder="e.g. Oil on the lower cowling after engine run" />
@@ -27,17 +24,16 @@ export function ReportSquawkForm({ slug, aircraftId, registration }: { slug: str
       <CheckboxField name="suspectedGrounding" label="I think this may make the aircraft unsafe to fly" hint="The aircraft shows grounded until maintenance has looked at it." errors={state.fieldErrors.suspectedGrounding} />
       <FileField label="Photos (optional)" name="photos" accept="image/jpeg,image/png,image/webp,image/heic" multiple capture="environment" hint="Up to 6 photos, 10 MB each: JPEG, PNG, WebP or HEIC." errors={state.fieldErrors.photos} />
       <SubmitButton pendingText="Sending…">Report squawk</SubmitButton>
-    </form>
+    </FormShell>
   );
 }
 
 export function TriageSquawkForm({ slug, squawkId, current, limitation, determinedBy, placarded }: { slug: string; squawkId: string; current: string; limitation?: string | null; determinedBy?: string | null; placarded?: boolean }) {
-  const [state, action] = useActionState(triageSquawk, initialActionState);
+  const form = useFormAction(triageSquawk);
+  const { state } = form;
   const [choice, setChoice] = useState(current === "untriaged" ? "grounding" : current);
   return (
-    <form action={action} noValidate aria-label="Triage squawk">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Triage squawk">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="squawkId" value={squawkId} />
       <SelectField label="Triage" name="triage" id={`triage-${squawkId}`} value={choice} onChange={(e) => setChoice(e.target.value)} errors={state.fieldErrors.triage}>
@@ -54,16 +50,15 @@ export function TriageSquawkForm({ slug, squawkId, current, limitation, determin
       ) : null}
       <Field label="Note (optional)" name="note" id={`triage-note-${squawkId}`} errors={state.fieldErrors.note} />
       <SubmitButton>Save triage</SubmitButton>
-    </form>
+    </FormShell>
   );
 }
 
 export function CloseSquawkForm({ slug, squawkId, today, needsMechanic }: { slug: string; squawkId: string; today: string; needsMechanic: boolean }) {
-  const [state, action] = useActionState(closeSquawk, initialActionState);
+  const form = useFormAction(closeSquawk);
+  const { state } = form;
   return (
-    <form action={action} noValidate aria-label="Close squawk with return to service">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Close squawk with return to service">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="squawkId" value={squawkId} />
       <TextAreaField label="What was done" name="repairNotes" id={`repair-${squawkId}`} required errors={state.fieldErrors.repairNotes} />
@@ -72,6 +67,6 @@ export function CloseSquawkForm({ slug, squawkId, today, needsMechanic }: { slug
       <Field label="Return-to-service date" name="rtsOn" id={`rts-on-${squawkId}`} type="date" defaultValue={today} max={today} errors={state.fieldErrors.rtsOn} />
       <FileField label="Work order or logbook page (optional)" name="document" id={`rts-doc-${squawkId}`} accept="image/jpeg,image/png,image/webp,image/heic,application/pdf" hint="PDF or photo, up to 10 MB." errors={state.fieldErrors.document} />
       <SubmitButton variant="primary">Close and return to service</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

@@ -1,10 +1,10 @@
 "use client";
-import { useActionState, type ReactNode } from "react";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { type ReactNode } from "react";
+import { CheckboxField, Field, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState, type ActionState } from "@/lib/actions/action-state";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
+import type { ActionState } from "@/lib/actions/action-state";
 
 export type ServerAction = (prev: ActionState, formData: FormData) => Promise<ActionState>;
 
@@ -33,25 +33,10 @@ function FieldOf({ spec, errors }: { spec: FieldSpec; errors?: string[] }) {
     );
   }
   if (type === "checkbox") {
-    return (
-      <div className="mb-4">
-        <label className="flex items-center gap-2">
-          <input type="checkbox" name={name} defaultChecked={checked} className="size-4" />
-          <span className="font-bold text-ink-700">{label}</span>
-        </label>
-        {errors?.length ? <p className="field-error">{errors.join(" ")}</p> : hint ? <p className="mt-1 text-sm text-ink-500">{hint}</p> : null}
-      </div>
-    );
+    return <CheckboxField label={<span className="font-bold text-ink-700">{label}</span>} name={name} defaultChecked={checked} errors={errors} hint={hint} />;
   }
   if (type === "textarea") {
-    const id = `f-${name}`;
-    return (
-      <div className="mb-4">
-        <label htmlFor={id} className="field-label">{label}</label>
-        <textarea id={id} name={name} defaultValue={defaultValue} className="field-input min-h-24" aria-invalid={errors?.length ? true : undefined} />
-        {errors?.length ? <p className="field-error">{errors.join(" ")}</p> : null}
-      </div>
-    );
+    return <TextAreaField label={label} name={name} defaultValue={defaultValue} className="field-input min-h-24" errors={errors} hint={hint} />;
   }
   return <Field label={label} name={name} type={type} defaultValue={defaultValue} errors={errors} hint={hint} placeholder={placeholder} inputMode={inputMode} accept={accept} />;
 }
@@ -71,12 +56,11 @@ export function ActionForm({ action, slug, fields, hidden = {}, submitLabel, pen
   grid?: boolean;
   children?: ReactNode;
 }) {
-  const [state, formAction] = useActionState(action, initialActionState);
+  const form = useFormAction(action);
+  const { state } = form;
   const hiddenErrors = Object.entries(state.fieldErrors).filter(([k]) => !fields.some((f) => f.name === k)).flatMap(([, v]) => v);
   return (
-    <form action={formAction} noValidate aria-label={label} key={state.ok ? `${state.message}-done` : "form"}>
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={label}>
       {hiddenErrors.length && !state.ok ? <p className="field-error mb-3">{hiddenErrors.join(" ")}</p> : null}
       <input type="hidden" name="club" value={slug} />
       {Object.entries(hidden).map(([k, v]) => (
@@ -89,7 +73,7 @@ export function ActionForm({ action, slug, fields, hidden = {}, submitLabel, pen
       </div>
       {children}
       <SubmitButton pendingText={pendingText}>{submitLabel}</SubmitButton>
-    </form>
+    </FormShell>
   );
 }
 
@@ -103,28 +87,17 @@ export function ActionButton({ action, slug, hidden = {}, label, pendingText, va
   variant?: "primary" | "secondary" | "danger";
   confirm?: string;
 }) {
-  const [state, formAction] = useActionState(action, initialActionState);
+  const form = useFormAction(action);
+  const { state } = form;
   const errors = Object.values(state.fieldErrors).flat();
   return (
-    <form
-      action={formAction}
-      className="inline-flex flex-wrap items-center gap-2"
-      onSubmit={(e) => {
-        if (confirm && !window.confirm(confirm)) e.preventDefault();
-      }}
-    >
-      <IdempotencyKeyField answer={state} />
+    <FormShell form={form} className="inline-flex flex-wrap items-center gap-2" answer="inline-after" confirm={confirm}>
       <input type="hidden" name="club" value={slug} />
       {Object.entries(hidden).map(([k, v]) => (
         <input key={k} type="hidden" name={k} value={v} />
       ))}
       <SubmitButton variant={variant} pendingText={pendingText}>{label}</SubmitButton>
-      {state.message ? (
-        <span role={state.ok ? "status" : "alert"} className={`text-sm ${state.ok ? "text-go-800" : "text-stop-800"}`}>
-          {state.message}
-          {errors.length && !state.ok ? ` ${errors.join(" ")}` : ""}
-        </span>
-      ) : null}
-    </form>
+      {errors.length && !state.ok ? <span className="text-sm text-stop-800">{errors.join(" ")}</span> : null}
+    </FormShell>
   );
 }

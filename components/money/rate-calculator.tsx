@@ -1,12 +1,11 @@
 "use client";
-import { useActionState, useMemo, useState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { useMemo, useState } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { saveRateProfile } from "@/lib/actions/money/save-rates";
 import { currencyExponent, formatMoney, hourlyRate, minorToDecimalString, rateTable, toMinorUnits } from "@/lib/money";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export type RateInputs = {
   name: string;
@@ -56,15 +55,14 @@ function compute(v: RateInputs, currency: string) {
 /** Break-even hourly rate: fixed ÷ hours + variable per hour + engine reserve (overhaul ÷ TBO). */
 export function RateCalculator({ slug, currency, unit, profiles, canSave }: { slug: string; currency: string; unit: string; profiles: RateInputs[]; canSave: boolean }) {
   const [values, setValues] = useState<RateInputs>(profiles[0] ?? { name: "", fixedAnnualCosts: "", expectedHours: "300", fuelBurn: "8.5", fuelPrice: "", oilPerHour: "", maintenanceReserve: "", overhaulCost: "", tboHours: "2000" });
-  const [state, action] = useActionState(saveRateProfile, initialActionState);
+  const form = useFormAction(saveRateProfile);
+  const { state } = form;
   const result = useMemo(() => compute(values, currency), [values, currency]);
   const money = (m: number) => formatMoney(m, currency);
   const major = (m: number) => Number(minorToDecimalString(m, currencyExponent(currency)));
   return (
     <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
-      <form action={action} className="card" aria-label="Hourly-rate calculator" noValidate>
-        <IdempotencyKeyField answer={state} />
-        <FormMessage state={state} />
+      <FormShell form={form} label="Hourly-rate calculator" className="card">
         <input type="hidden" name="club" value={slug} />
         {profiles.length > 1 ? (
           <label className="mb-4 block">
@@ -84,7 +82,7 @@ export function RateCalculator({ slug, currency, unit, profiles, canSave }: { sl
           </div>
         ))}
         {canSave ? <SubmitButton pendingText="Saving…">Save this calculation</SubmitButton> : null}
-      </form>
+      </FormShell>
       <div className="grid min-w-0 grid-cols-1 gap-6">
         <section className="card" aria-label="Break-even rate" aria-live="polite">
           {result ? (

@@ -1,22 +1,22 @@
 "use client";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { useQuery } from "@tanstack/react-query";
-import { useActionState } from "react";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
 import type { ReconciliationWorkspace, WorkspaceLine } from "@/db/queries/money-reconcile";
-import { initialActionState } from "@/lib/actions/action-state";
 import { bookLine, ignoreLine, lockReconciledPeriod, matchBankLine, runAutoMatch, unmatchLine } from "@/lib/actions/money/reconcile-lines";
 import { daysBetween } from "@/lib/dates";
 import { formatMoney } from "@/lib/money";
 import { ActionButton } from "./action-form";
 import { PeriodReportPanel } from "./period-report";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Data = ReconciliationWorkspace;
 const KIND_WORDS: Record<string, string> = { exact: "same amount and date", reference: "same reference", payout: "card payout", manual: "matched by hand", booked: "posted from the statement" };
 
 function MatchForm({ slug, line, data, currency }: { slug: string; line: WorkspaceLine; data: Data; currency: string }) {
-  const [state, action] = useActionState(matchBankLine, initialActionState);
+  const form = useFormAction(matchBankLine);
+  const { state } = form;
   const candidates = [
     ...data.openBook.map((b) => ({ id: b.id, date: b.date, amountMinor: b.amountMinor, text: `${b.memo}${b.reference ? ` (${b.reference})` : ""}` })),
     ...data.openPayouts.map((p) => ({ id: p.id, date: p.date, amountMinor: p.amountMinor, text: `Card payout ${p.payoutId}: ${p.carried} payments, ${formatMoney(p.feeMinor, currency)} fees` })),
@@ -25,9 +25,7 @@ function MatchForm({ slug, line, data, currency }: { slug: string; line: Workspa
     .sort((a, b) => Math.abs(daysBetween(a.date, line.date)) - Math.abs(daysBetween(b.date, line.date)))
     .slice(0, 15);
   return (
-    <form action={action} aria-label={`Match line ${line.lineNo}`} className="mt-2">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={`Match line ${line.lineNo}`} className="mt-2">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bankLineId" value={line.id} />
       {candidates.length === 0 ? <p className="text-sm text-ink-500">Nothing open in the books with this sign.</p> : (
@@ -43,15 +41,15 @@ function MatchForm({ slug, line, data, currency }: { slug: string; line: Workspa
       )}
       {state.fieldErrors.bookIds?.length ? <p className="field-error">{state.fieldErrors.bookIds.join(" ")}</p> : null}
       <div className="mt-2"><SubmitButton variant="secondary" pendingText="Matching…">Match</SubmitButton></div>
-    </form>
+    </FormShell>
   );
 }
 
 function BookForm({ slug, line }: { slug: string; line: WorkspaceLine }) {
-  const [state, action] = useActionState(bookLine, initialActionState);
+  const form = useFormAction(bookLine);
+  const { state } = form;
   return (
-    <form action={action} aria-label={`Book line ${line.lineNo}`} className="mt-2 grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-      <IdempotencyKeyField answer={state} />
+    <FormShell form={form} label={`Book line ${line.lineNo}`} className="mt-2 grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end" answer="none">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bankLineId" value={line.id} />
       <label className="text-sm"><span className="field-label">Account</span>
@@ -67,8 +65,8 @@ function BookForm({ slug, line }: { slug: string; line: WorkspaceLine }) {
       </label>
       <label className="text-sm"><span className="field-label">Memo</span><input name="memo" className="field-input" defaultValue={line.description} /></label>
       <SubmitButton variant="secondary" pendingText="Posting…">Post to the books</SubmitButton>
-      <div className="sm:col-span-3"><FormMessage state={state} /></div>
-    </form>
+      <div className="sm:col-span-3"><FormMessage state={state} answerCount={form.answerCount} /></div>
+    </FormShell>
   );
 }
 

@@ -1,17 +1,14 @@
 "use client";
-import { useActionState } from "react";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { assignClubAdmin } from "@/lib/actions/operator/assign-admin";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function AssignAdminForm({ clubId, clubName }: { clubId: string; clubName: string }) {
-  const [state, action] = useActionState(assignClubAdmin, initialActionState);
+  const form = useFormAction(assignClubAdmin);
+  const { state } = form;
   return (
-    <form action={action} noValidate aria-label={`Appoint an admin for ${clubName}`} className="mt-3">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={`Appoint an admin for ${clubName}`} className="mt-3">
       <input type="hidden" name="clubId" value={clubId} />
       <label className="field-label" htmlFor={`admin-${clubId}`}>Invite an admin (e-mail)</label>
       <div className="flex flex-wrap gap-2">
@@ -19,6 +16,6 @@ export function AssignAdminForm({ clubId, clubName }: { clubId: string; clubName
         <SubmitButton variant="secondary">Send invitation</SubmitButton>
       </div>
       {state.fieldErrors.adminEmail ? <p className="field-error">{state.fieldErrors.adminEmail.join(" ")}</p> : null}
-    </form>
+    </FormShell>
   );
 }

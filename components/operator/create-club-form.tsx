@@ -1,23 +1,20 @@
 "use client";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import Link from "next/link";
-import { useActionState } from "react";
 import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState, type ActionState } from "@/lib/actions/action-state";
 import { createClub } from "@/lib/actions/operator/create-club";
 import { CURRENCIES } from "@/lib/validation/clubs";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 const ZONES = ["America/New_York", "America/Chicago", "America/Denver", "America/Phoenix", "America/Los_Angeles", "America/Anchorage", "Pacific/Honolulu", "Europe/London", "Europe/Berlin", "Europe/Paris", "Europe/Madrid", "Australia/Sydney", "Pacific/Auckland", "UTC"];
 
 export function CreateClubForm() {
-  const [state, action] = useActionState(createClub, initialActionState as ActionState<{ slug: string }>);
+  const form = useFormAction(createClub);
+  const { state } = form;
   const f = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Create a club">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Create a club">
       {state.ok && state.data ? <p className="mb-4"><Link href={`/clubs/${state.data.slug}`}>Open the new club</Link> (you see it once you hold a role in it)</p> : null}
       <Field label="Club name" name="name" required errors={f.name} />
       <Field label="Web address" name="slug" required hint="Lower-case letters, digits and hyphens; appears in /clubs/…" errors={f.slug} />
@@ -33,6 +30,6 @@ export function CreateClubForm() {
       </SelectField>
       <Field label="First admin's e-mail" name="adminEmail" type="email" required hint="They get an invitation if they have no account yet." errors={f.adminEmail} />
       <SubmitButton pendingText="Creating…">Create club</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

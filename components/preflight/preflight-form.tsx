@@ -1,13 +1,10 @@
 "use client";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { SubmitButton } from "@/components/ui/submit-button";
 import { useState } from "react";
-import { PendingButton } from "@/components/bookings/pending-button";
-import { useKeptForm } from "@/components/bookings/use-kept-form";
-import { CheckboxField, FileField, TextAreaField } from "@/components/fleet/form-bits";
-import { Field } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
-import { initialActionState } from "@/lib/actions/action-state";
+import { CheckboxField, Field, FileField, TextAreaField } from "@/components/ui/field";
 import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 type Item = { id: string; section: string; label: string; kind: "check" | "document" };
 
@@ -21,16 +18,15 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
   oilMaximum: number | null;
   units: { fuel: string; oil: string };
 }) {
-  const { state, onSubmit, pending } = useKeptForm(recordPreflight, initialActionState);
+  const form = useFormAction(recordPreflight);
+  const { state } = form;
   const [results, setResults] = useState<Record<string, "ok" | "finding">>({});
   const e = state.fieldErrors;
   const sections = [...new Set(items.map((i) => i.section))];
   if (state.ok) return <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">✓ {state.message}</p>;
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Preflight record">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
-      {e._form ? <p role="alert" className="field-error mb-3">{e._form.join(" ")}</p> : null}
+    <FormShell form={form} label="Preflight record">
+      {e._form ? <p className="field-error mb-3">{e._form.join(" ")}</p> : null}
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
       {sections.map((section) => (
@@ -90,7 +86,7 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
       </fieldset>
       <Field label={`Oil quantity (${units.oil})`} name="oilQuantity" inputMode="decimal" errors={e.oilQuantity} hint={`Club minimum for this aircraft: ${oilMinimum} ${units.oil}${oilMaximum !== null ? `; maximum ${oilMaximum} ${units.oil}` : ""}.`} />
       <TextAreaField label="Notes (optional)" name="notes" rows={2} errors={e.notes} />
-      <PendingButton pending={pending} pendingText="Recording…">Record the preflight</PendingButton>
-    </form>
+      <SubmitButton pendingText="Recording…">Record the preflight</SubmitButton>
+    </FormShell>
   );
 }

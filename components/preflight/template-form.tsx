@@ -1,20 +1,16 @@
 "use client";
-import { useActionState } from "react";
-import { TextAreaField } from "@/components/fleet/form-bits";
-import { Field } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { Field, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { savePreflightTemplateAction } from "@/lib/actions/preflight/save-template";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function TemplateForm({ slug, aircraftId, defaults, oilUnit }: { slug: string; aircraftId: string; defaults: { documents: string; checklist: string; sumpPoints: string; oilMinimum: string; oilMaximum: string }; oilUnit: string }) {
-  const [state, action] = useActionState(savePreflightTemplateAction, initialActionState);
+  const form = useFormAction(savePreflightTemplateAction);
+  const { state } = form;
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Preflight checklist">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Preflight checklist">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />
       <TextAreaField label="Documents aboard, one per line" name="documents" rows={4} defaultValue={defaults.documents} errors={e.documents} />
@@ -25,6 +21,6 @@ export function TemplateForm({ slug, aircraftId, defaults, oilUnit }: { slug: st
         <Field label={`Oil maximum (${oilUnit}, optional)`} name="oilMaximum" inputMode="decimal" defaultValue={defaults.oilMaximum} errors={e.oilMaximum} />
       </div>
       <SubmitButton>Save checklist</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

@@ -1,22 +1,20 @@
 "use client";
-import { useActionState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { acknowledgeBulletin } from "@/lib/actions/safety/acknowledge-bulletin";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function AcknowledgeForm({ slug, bulletinId }: { slug: string; bulletinId: string }) {
-  const [state, action] = useActionState(acknowledgeBulletin, initialActionState);
+  const form = useFormAction(acknowledgeBulletin);
+  const { state } = form;
   if (state.ok) return <FormMessage state={state} />;
   return (
-    <form action={action} aria-label="Acknowledge bulletin">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Acknowledge bulletin">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bulletinId" value={bulletinId} />
       <p className="mb-3 text-sm text-ink-700">By acknowledging you confirm that you have read and understood this bulletin.</p>
       <SubmitButton pendingText="Recording…">Acknowledge</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

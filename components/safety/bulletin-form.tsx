@@ -1,15 +1,13 @@
 "use client";
-import { useActionState, useState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { useState } from "react";
 import { buttonClass } from "@/components/ui/button";
 import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
-import { initialActionState } from "@/lib/actions/action-state";
-import { keepFormOnSubmit } from "@/components/safety/kept-form";
 import { createBulletin } from "@/lib/actions/safety/create-bulletin";
 import { updateDraft } from "@/lib/actions/safety/update-draft";
 import { BULLETIN_URGENCIES, type BulletinAudience, type BulletinUrgency } from "@/db/schema/safety";
 import { URGENCY_HINTS, URGENCY_LABELS } from "@/lib/safety/labels";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export type BulletinFormValues = {
   title: string;
@@ -36,11 +34,11 @@ function IntentButtons({ canPublish, revision, pending }: { canPublish: boolean;
   return (
     <div className="flex flex-wrap gap-3">
       {canPublish ? (
-        <button type="submit" name="intent" value="publish" className={buttonClass("primary")} disabled={pending}>
+        <button type="submit" name="intent" value="publish" className={buttonClass("primary")}>
           {pending ? "Working…" : revision ? "Publish this revision" : "Publish and send"}
         </button>
       ) : null}
-      <button type="submit" name="intent" value="draft" className={buttonClass("secondary")} disabled={pending}>
+      <button type="submit" name="intent" value="draft" className={buttonClass("secondary")}>
         Save as draft
       </button>
     </div>
@@ -48,13 +46,12 @@ function IntentButtons({ canPublish, revision, pending }: { canPublish: boolean;
 }
 
 export function BulletinForm({ slug, typeGroups, canPublish, initial = {}, bulletinId, supersedesId, sourceReportId, today }: Props) {
-  const [state, action, pending] = useActionState(bulletinId ? updateDraft : createBulletin, initialActionState);
+  const form = useFormAction(bulletinId ? updateDraft : createBulletin);
+  const { state, pending } = form;
   const [audience, setAudience] = useState<BulletinAudience>(initial.audience ?? "everyone");
   const errors = state.fieldErrors;
   return (
-    <form action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label={bulletinId ? "Edit draft bulletin" : supersedesId ? "Revise bulletin" : "New bulletin"} className="max-w-3xl">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={bulletinId ? "Edit draft bulletin" : supersedesId ? "Revise bulletin" : "New bulletin"} className="max-w-3xl">
       <input type="hidden" name="club" value={slug} />
       {bulletinId ? <input type="hidden" name="bulletinId" value={bulletinId} /> : null}
       {supersedesId ? <input type="hidden" name="supersedesId" value={supersedesId} /> : null}
@@ -107,6 +104,6 @@ export function BulletinForm({ slug, typeGroups, canPublish, initial = {}, bulle
       </div>
       {supersedesId ? <p className="mb-4 rounded border border-sand-300 bg-sand-50 p-3 text-sm">Publishing makes this the current version. The earlier version stays on record, marked as replaced, and members are asked to acknowledge the new one.</p> : null}
       <IntentButtons canPublish={canPublish} revision={!!supersedesId} pending={pending} />
-    </form>
+    </FormShell>
   );
 }

@@ -1,22 +1,17 @@
 "use client";
-import { useActionState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
-import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { fileReport } from "@/lib/actions/safety/file-report";
 import { CONTRIBUTING_FACTORS, FACTOR_LABELS } from "@/lib/safety/labels";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function ReportForm({ slug, aircraft, today }: { slug: string; aircraft: { id: string; label: string }[]; today: string }) {
-  const [state, action, pending] = useActionState(fileReport, initialActionState);
-  const formRef = useResetOnSuccess(state);
+  const form = useFormAction(fileReport);
+  const { state } = form;
   const e = state.fieldErrors;
   return (
-    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="File a safety report" className="max-w-3xl">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="File a safety report" className="max-w-3xl">
       <input type="hidden" name="club" value={slug} />
       <div className="grid gap-x-4 sm:grid-cols-3">
         <Field label="Date it happened" name="occurredOn" type="date" max={today} required errors={e.occurredOn} />
@@ -55,7 +50,7 @@ export function ReportForm({ slug, aircraft, today }: { slug: string; aircraft: 
           <span className="block text-sm text-ink-700">Your name is not stored with the report at all — not hidden, absent. The safety officer cannot ask you questions, and you will not be able to look the report up later.</span>
         </span>
       </label>
-      <SubmitButton disabled={pending} pendingText="Filing…">File the report</SubmitButton>
-    </form>
+      <SubmitButton pendingText="Filing…">File the report</SubmitButton>
+    </FormShell>
   );
 }

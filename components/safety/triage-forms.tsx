@@ -1,23 +1,18 @@
 "use client";
-import { useActionState } from "react";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
 import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
-import { keepFormOnSubmit, useResetOnSuccess } from "@/components/safety/kept-form";
 import { groundFromReport } from "@/lib/actions/safety/ground-from-report";
 import { triageReport } from "@/lib/actions/safety/triage-report";
 import type { ReportStatus } from "@/db/schema/safety";
 import { REPORT_STATUS_LABELS } from "@/lib/safety/labels";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export function TriageForm({ slug, reportId, next }: { slug: string; reportId: string; next: readonly ReportStatus[] }) {
-  const [state, action, pending] = useActionState(triageReport, initialActionState);
-  const formRef = useResetOnSuccess(state);
+  const form = useFormAction(triageReport);
+  const { state } = form;
   return (
-    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Change report state">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Change report state">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="reportId" value={reportId} />
       <SelectField label="Move to" name="toStatus" defaultValue={next[0]} errors={state.fieldErrors.toStatus}>
@@ -26,18 +21,16 @@ export function TriageForm({ slug, reportId, next }: { slug: string; reportId: s
         ))}
       </SelectField>
       <Field label="Note" name="note" maxLength={4000} errors={state.fieldErrors.note} hint="Required for “Action taken” and “Closed”: what was done, or why it is closed." />
-      <SubmitButton disabled={pending}>Save</SubmitButton>
-    </form>
+      <SubmitButton>Save</SubmitButton>
+    </FormShell>
   );
 }
 
 export function GroundFromReportForm({ slug, reportId, aircraft, preselected }: { slug: string; reportId: string; aircraft: { id: string; label: string }[]; preselected: string | null }) {
-  const [state, action, pending] = useActionState(groundFromReport, initialActionState);
-  const formRef = useResetOnSuccess(state);
+  const form = useFormAction(groundFromReport);
+  const { state } = form;
   return (
-    <form ref={formRef} action={action} onSubmit={keepFormOnSubmit(action)} noValidate aria-label="Ground an aircraft">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Ground an aircraft">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="reportId" value={reportId} />
       <SelectField label="Aircraft" name="aircraftId" defaultValue={preselected ?? ""} errors={state.fieldErrors.aircraftId}>
@@ -47,7 +40,7 @@ export function GroundFromReportForm({ slug, reportId, aircraft, preselected }: 
         ))}
       </SelectField>
       <Field label="Reason (sent to every member)" name="reason" maxLength={1000} errors={state.fieldErrors.reason} />
-      <SubmitButton disabled={pending} variant="danger" pendingText="Grounding…">Ground the aircraft</SubmitButton>
-    </form>
+      <SubmitButton variant="danger" pendingText="Grounding…">Ground the aircraft</SubmitButton>
+    </FormShell>
   );
 }

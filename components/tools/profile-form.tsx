@@ -1,12 +1,9 @@
 "use client";
-import { useActionState } from "react";
-import { TextAreaField } from "@/components/fleet/form-bits";
-import { Field, SelectField } from "@/components/ui/field";
-import { FormMessage } from "@/components/ui/form-message";
+import { FormShell } from "@/components/ui/form-shell";
+import { useFormAction } from "@/components/ui/use-form-action";
+import { Field, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/actions/action-state";
 import { saveWeightBalanceProfileAction } from "@/lib/actions/tools/save-weight-balance-profile";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 
 export type ProfileDefaults = {
   emptyWeight: string; emptyArm: string; maxTakeoffWeight: string; maxLandingWeight: string; fuelKind: string; burnPerHour: string;
@@ -14,12 +11,11 @@ export type ProfileDefaults = {
 };
 
 export function ProfileForm({ slug, aircraftId, defaults, units }: { slug: string; aircraftId: string; defaults: ProfileDefaults; units: { weight: string; arm: string; fuel: string } }) {
-  const [state, action] = useActionState(saveWeightBalanceProfileAction, initialActionState);
+  const form = useFormAction(saveWeightBalanceProfileAction);
+  const { state } = form;
   const e = state.fieldErrors;
   return (
-    <form action={action} noValidate aria-label="Weight and balance figures">
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label="Weight and balance figures">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="aircraftId" value={aircraftId} />
       <div className="grid gap-x-3 sm:grid-cols-2">
@@ -39,6 +35,6 @@ export function ProfileForm({ slug, aircraftId, defaults, units }: { slug: strin
       <TextAreaField label="Utility-category envelope (if the aircraft has one)" name="envelopeUtility" rows={5} defaultValue={defaults.envelopeUtility} errors={e.envelopeUtility} />
       <Field label="Source of the figures" name="source" defaultValue={defaults.source} errors={e.source} hint="e.g. the weighing report and its date." />
       <SubmitButton>Save figures</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

@@ -1,12 +1,14 @@
 "use client";
-import { useFormStatus } from "react-dom";
 import type { ReactNode } from "react";
 import { buttonClass } from "./button";
+import { useFormPending } from "./form-shell";
 
-export function SubmitButton({ children, pendingText = "Saving…", variant = "primary", disabled, title }: { children: ReactNode; pendingText?: string; variant?: "primary" | "secondary" | "danger"; disabled?: boolean; title?: string }) {
-  const { pending } = useFormStatus();
+/** The submit button of a FormShell: disabled (with its pending words) only while the answer is awaited. */
+export function SubmitButton({ children, pendingText = "Saving…", variant = "primary", disabled, title, name, value, pending: pendingProp }: { children: ReactNode; pendingText?: string; variant?: "primary" | "secondary" | "danger" | "quiet"; disabled?: boolean; title?: string; name?: string; value?: string; pending?: boolean }) {
+  const fromShell = useFormPending();
+  const pending = pendingProp ?? fromShell ?? false;
   return (
-    <button type="submit" className={buttonClass(variant)} disabled={pending || disabled} aria-disabled={pending || disabled} title={title}>
+    <button type="submit" name={name} value={value} className={buttonClass(variant)} disabled={pending || disabled} aria-disabled={pending || disabled} title={title}>
       {pending ? pendingText : children}
     </button>
   );

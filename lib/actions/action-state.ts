@@ -1,8 +1,19 @@
+/**
+ * What every server action answers. An action never redirects or revalidates on the server: it
+ * returns its answer, and the form's hook (components/ui/use-form-action.ts) shows it first and
+ * then does the follow-up the answer asks for — `redirectTo` (same origin: a client navigation;
+ * another origin such as a hosted payment page: a full page load) or `refresh` (the current
+ * page's server data again).
+ */
 export type ActionState<T = unknown> = {
   ok: boolean;
   message: string;
   fieldErrors: Record<string, string[]>;
   data?: T;
+  /** After the answer is shown: go here (a path on this site, or a full URL elsewhere). */
+  redirectTo?: string;
+  /** After the answer is shown: fetch this page's server data again. */
+  refresh?: boolean;
 };
 
 export const initialActionState: ActionState = { ok: false, message: "", fieldErrors: {} };

@@ -1,6 +1,4 @@
 import "server-only";
-import { revalidatePath } from "next/cache";
-import { redirect } from "next/navigation";
 import { z } from "zod";
 import { getDb, type Db, type Tx } from "@/db/client";
 import { resolveClubContext, type ClubContext } from "@/lib/server/club-context";
@@ -35,7 +33,11 @@ export function zodFieldErrors(error: z.ZodError): Record<string, string[]> {
   return out;
 }
 
-type Outcome<R> = { message?: string; data?: R; redirectTo?: string; revalidate?: string[] };
+/**
+ * What `run` returns. Never revalidate or redirect here: `redirectTo` and `refresh` ride on the answer
+ * and the form's hook (components/ui/use-form-action.ts) follows them after showing it.
+ */
+type Outcome<R> = { message?: string; data?: R; redirectTo?: string; refresh?: boolean };
 
 function fail(message: string, fieldErrors: Record<string, string[]> = {}): ActionState<never> {
   return { ok: false, message, fieldErrors };
@@ -50,10 +52,15 @@ async function settle<R>(work: () => Promise<Outcome<R>>, successMessage: string
     logError("action", "unexpected failure", error);
     return fail("Something went wrong and nothing was saved. Try again; if it keeps failing, tell a club admin.");
   }
-  // Framework control flow stays outside the try/catch above.
-  for (const path of outcome.revalidate ?? []) revalidatePath(path);
-  if (outcome.redirectTo) redirect(outcome.redirectTo);
-  return { ok: true, message: outcome.message ?? successMessage, fieldErrors: {}, data: outcome.data };
+  // The answer, with its follow-up for the browser; nothing here revalidates or redirects, so the
+  // response carries only this answer and the form shows it at once (DEVELOPERS.md "Forms and their answers").
+  // An answer stored by an earlier version (idempotent replay) may still name paths to revalidate.
+  const legacyRevalidate = (outcome as { revalidate?: unknown }).revalidate;
+  const refresh = outcome.refresh === true || (Array.isArray(legacyRevalidate) && legacyRevalidate.length > 0);
+  const state: ActionState<R> = { ok: true, message: outcome.message ?? successMessage, fieldErrors: {}, data: outcome.data };
+  if (outcome.redirectTo) state.redirectTo = outcome.redirectTo;
+  else if (refresh) state.refresh = true;
+  return state;
 }
 
 /**

@@ -50,14 +50,12 @@ describe("flight line and squawks in the browser", () => {
     await screenshot(page, "fleet-flight-line-desktop");
   });
 
-  let phoneAttempts = 0;
   it("a member on a phone reports a squawk with a photo; the flight line then shows the aircraft grounded with the reason", async () => {
     const page = await newPage("phone");
     await signIn(page, "cottonwood.pilot@hangarline.test");
     await page.goto(`${CLUB}/flight-line`);
     const card = page.locator(`article[data-registration="${REG}"]`);
-    // On a retry the first attempt's squawk may already have grounded it.
-    if (phoneAttempts++ === 0) expect(await card.getAttribute("data-status")).not.toBe("grounded");
+    expect(await card.getAttribute("data-status")).not.toBe("grounded");
     await expectNoHorizontalOverflow(page);
 
     await card.getByRole("link", { name: REG }).click();
@@ -71,10 +69,12 @@ describe("flight line and squawks in the browser", () => {
     await form.getByLabel("I think this may make the aircraft unsafe to fly").check();
     await form.getByLabel("Photos (optional)").setInputFiles({ name: "hinge.png", mimeType: "image/png", buffer: pngBytes() });
     await form.getByRole("button", { name: "Report squawk" }).click();
-    await page.waitForURL(/\?reported=/);
-    // Read the page as a fresh load shows it (the action's own answer is sometimes slow to render).
-    await page.reload();
-    await page.getByRole("status").filter({ hasText: `Squawk reported: “${description}”` }).waitFor();
+    // The action's own answer, in the form's status region, quoting what was reported.
+    const answer = form.getByRole("status").filter({ hasText: `Squawk reported: “${description}”.` });
+    await answer.waitFor();
+    expect(await answer.textContent()).toBe(`Squawk reported: “${description}”.`);
+    // The form is ready for the next report; the refreshed list shows this one with its photo.
+    expect(await form.getByLabel("What did you find?").inputValue()).toBe("");
     await page.getByRole("listitem").filter({ hasText: description }).getByRole("img", { name: "Photo: hinge.png" }).waitFor();
     await expectNoHorizontalOverflow(page);
 

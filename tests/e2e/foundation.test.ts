@@ -106,14 +106,17 @@ describe("signing in and the navigation each role sees", () => {
     await form.getByLabel("E-mail").fill("nobody-here@hangarline.test");
     await form.getByLabel("Password", { exact: true }).fill("whatever-password");
     await form.getByRole("button", { name: "Sign in", exact: true }).click();
-    const alert = page.locator("form[aria-label='Sign in with password'] [role=alert]");
+    const alert = form.getByRole("status").getByRole("alert");
     await alert.waitFor();
     const unknown = await alert.textContent();
+    // Each answer is a new message in the status region: mark this one to wait for the next.
+    await alert.evaluate((el) => el.setAttribute("data-seen", ""));
     await form.getByLabel("E-mail").fill("pilot2@hangarline.test");
     await form.getByLabel("Password", { exact: true }).fill("whatever-password");
     await form.getByRole("button", { name: "Sign in", exact: true }).click();
-    await page.waitForTimeout(800);
-    const wrong = await alert.textContent();
+    const next = form.locator("[role=status] [role=alert]:not([data-seen])");
+    await next.waitFor();
+    const wrong = await next.textContent();
     expect(unknown).toMatch(/do not match an active account/);
     expect(wrong).toBe(unknown);
     await page.context().close();

@@ -1,4 +1,5 @@
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { randomBytes } from "node:crypto";
 import fs from "node:fs";
 import net from "node:net";
 import os from "node:os";
@@ -80,4 +81,62 @@ export async function startNext(port: number, env: Record<string, string>): Prom
   }
   child.kill();
   throw new Error(`next start did not answer in time:\n${log.join("")}`);
+}
+
+export type Stack = { baseUrl: string; emailUrl: string; paymentsUrl: string; dataDir: string; close: () => Promise<void> };
+
+/**
+ * The whole test stack: a production build (kept when fresh), a fresh migrated database with the
+ * demo seed, the fake e-mail and payments providers and `next start` on free ports. Used by the
+ * browser tests' global setup and by `npm run bench:forms`.
+ */
+export async function startStack(): Promise<Stack> {
+  ensureBuild();
+  const dir = tempDir();
+  const dbFile = path.join(dir, "e2e.db");
+  process.env.DATABASE_URL = dbFile;
+  const { openDatabase } = await import("@/db/client");
+  const { migrateDatabase } = await import("@/db/migrate");
+  const { seedDemo } = await import("@/db/seed/index");
+  const db = openDatabase(dbFile);
+  migrateDatabase(db);
+  await seedDemo(db);
+  db.$client.close();
+
+  const appPort = await freePort();
+  const baseUrl = `http://localhost:${appPort}`;
+  const { startFakeEmailServer } = await import("@/fake-services/email/server");
+  const { startFakePaymentsServer, DEFAULT_WEBHOOK_SECRET } = await import("@/fake-services/payments/server");
+  const email = await startFakeEmailServer({ port: 0 });
+  const payments = await startFakePaymentsServer({ port: 0, webhookUrl: `${baseUrl}/api/webhooks/payments`, webhookSecret: DEFAULT_WEBHOOK_SECRET });
+  const paymentsPort = new URL(payments.url).port;
+
+  const server = await startNext(appPort, {
+    DATABASE_URL: dbFile,
+    UPLOAD_DIR: path.join(dir, "uploads"),
+    AUTH_URL: baseUrl,
+    APP_URL: baseUrl,
+    // A fresh random secret per run: the production server refuses published ones.
+    AUTH_SECRET: randomBytes(33).toString("base64url"),
+    RESEND_BASE_URL: email.url,
+    RESEND_API_KEY: "re_e2e_local",
+    PAYMENTS_HOST: "127.0.0.1",
+    PAYMENTS_PORT: paymentsPort,
+    PAYMENTS_PROTOCOL: "http",
+    PAYMENTS_WEBHOOK_SECRET: DEFAULT_WEBHOOK_SECRET,
+    STRIPE_SECRET_KEY: "sk_test_e2e",
+    OUTBOX_INTERVAL_MS: "500",
+  });
+
+  return {
+    baseUrl,
+    emailUrl: email.url,
+    paymentsUrl: payments.url,
+    dataDir: dir,
+    close: async () => {
+      server.kill("SIGTERM");
+      await Promise.all([email.close(), payments.close()]);
+      fs.rmSync(dir, { recursive: true, force: true });
+    },
+  };
 }

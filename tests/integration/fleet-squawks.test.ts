@@ -7,7 +7,7 @@ import { closeSquawk } from "@/lib/actions/fleet/close-squawk";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
 import { triageSquawk } from "@/lib/actions/fleet/triage-squawk";
 import type { FlightLineEntry } from "@/lib/fleet/types";
-import { EMPTY, db, expectRedirect, form, signInAs } from "./helpers";
+import { EMPTY, db, squawkIdOf, form, signInAs } from "./helpers";
 import { callRoute, planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
 const CLUB = "lakeshore-aero";
@@ -36,9 +36,7 @@ describe("squawks: report, triage, return to service", () => {
   it("a member reports a grounding squawk and the JSON route says grounded with that reason", async () => {
     signInAs("member@hangarline.test");
     const plane = planeByRegistration(CLUB, "N0556L");
-    const to = await expectRedirect(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Elevator trim tab loose at the hinge", foundDuring: "preflight", suspectedGrounding: "on" })));
-    expect(to).toMatch(new RegExp(`^/clubs/${CLUB}/aircraft/${plane.id}\\?reported=`));
-    squawkId = to.split("reported=")[1]!;
+    squawkId = await squawkIdOf(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Elevator trim tab loose at the hinge", foundDuring: "preflight", suspectedGrounding: "on" })));
     const entry = await lineEntry("N0556L");
     expect(entry.status).toBe("grounded");
     expect(entry.reasons).toContainEqual({ code: "squawk-untriaged", text: "Squawk reported as affecting airworthiness, awaiting triage: Elevator trim tab loose at the hinge", grounding: true });
@@ -105,8 +103,7 @@ describe("squawks: report, triage, return to service", () => {
   it("a deferred, placarded squawk makes the aircraft flyable with limits and says what is not allowed", async () => {
     signInAs("member@hangarline.test");
     const plane = planeByRegistration(CLUB, "N0556L");
-    const to = await expectRedirect(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Right navigation light out", foundDuring: "postflight" })));
-    const id = to.split("reported=")[1]!;
+    const id = await squawkIdOf(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Right navigation light out", foundDuring: "postflight" })));
     expect((await lineEntry("N0556L")).status).toBe("unknown"); // untriaged: nobody has looked yet
     signInAs("maintenance@hangarline.test");
     const triaged = await triageSquawk(EMPTY, form({ club: CLUB, squawkId: id, triage: "deferred", limitation: "No night flight", placarded: "on", deferralDeterminedBy: "Hollis Fairbank, A&P 0003902 IA" }));

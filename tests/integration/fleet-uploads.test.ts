@@ -7,7 +7,7 @@ import { recordCompletion } from "@/lib/actions/fleet/record-completion";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
 import { listItems } from "@/db/queries/fleet";
 import { uploadDir } from "@/lib/storage";
-import { EMPTY, clubBySlug, db, expectRedirect, form, signInAs } from "./helpers";
+import { EMPTY, clubBySlug, db, squawkIdOf, form, signInAs } from "./helpers";
 import { callRoute, fakePngFile, oversizeJpegFile, planeByRegistration, pngFile, seedFleetOnce } from "./fleet-helpers";
 
 const CLUB = "lakeshore-aero";
@@ -24,8 +24,7 @@ describe("fleet uploads: photos and work orders", () => {
   it("stores a squawk photo checked by its content, served only through the checked route", async () => {
     signInAs("member@hangarline.test");
     const plane = planeByRegistration(CLUB, "N0534L");
-    const to = await expectRedirect(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Cracked wheel fairing, left main", foundDuring: "preflight", photos: pngFile() })));
-    const squawkId = to.split("reported=")[1]!;
+    const squawkId = await squawkIdOf(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Cracked wheel fairing, left main", foundDuring: "preflight", photos: pngFile() })));
     const [row] = db().select().from(uploads).where(and(eq(uploads.subjectType, "Squawk"), eq(uploads.subjectId, squawkId))).all();
     expect(row).toMatchObject({ mimeType: "image/png", originalName: "brake.png" });
     expect(filesOnDisk()).toContain(row!.storageKey);

@@ -56,13 +56,29 @@ export function membershipOf(email: string, slug: string) {
   return getDb().select().from(memberships).where(eq(memberships.userId, u!.id)).all().find((m) => m.clubId === c.id);
 }
 
-/** Runs an action that ends in a redirect and returns where it went. */
+/**
+ * Where an action's answer sends the browser (its `redirectTo`: actions never redirect themselves),
+ * or where a page redirected (a page still may).
+ */
 export async function expectRedirect(run: () => Promise<unknown>): Promise<string> {
+  let result: unknown;
   try {
-    await run();
+    result = await run();
   } catch (error) {
     if (error instanceof Error && error.message.startsWith("redirect:")) return error.message.slice("redirect:".length);
     throw error;
   }
-  throw new Error("Expected a redirect");
+  const to = (result as { redirectTo?: unknown } | null)?.redirectTo;
+  if (typeof to === "string") return to;
+  throw new Error(`Expected an answer with redirectTo, got ${JSON.stringify(result)}`);
+}
+
+/** The new squawk's id from a squawk report's answer (ok, quoting the description, with a refresh). */
+export async function squawkIdOf(run: () => Promise<{ ok: boolean; message: string; data?: unknown; refresh?: boolean }>): Promise<string> {
+  const state = await run();
+  if (!state.ok) throw new Error(`Expected the squawk to be reported, got: ${state.message}`);
+  if (!/^Squawk reported: “.+”\.$/.test(state.message)) throw new Error(`The answer does not quote the squawk: ${state.message}`);
+  const id = (state.data as { squawkId?: unknown } | undefined)?.squawkId;
+  if (typeof id !== "string") throw new Error("The answer carries no squawk id");
+  return id;
 }

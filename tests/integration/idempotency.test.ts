@@ -19,7 +19,7 @@ import { fileReport } from "@/lib/actions/safety/file-report";
 import { groundFromReport } from "@/lib/actions/safety/ground-from-report";
 import { clubToday } from "@/lib/actions/safety/bulletin-publishing";
 import { IDEMPOTENCY_TTL_MS, KEY_REUSED_MESSAGE, MALFORMED_KEY_MESSAGE, pruneIdempotentWrites } from "@/lib/server/idempotency";
-import { EMPTY, clubBySlug, db, expectRedirect, form, signInAs } from "./helpers";
+import { EMPTY, clubBySlug, db, expectRedirect, squawkIdOf, form, signInAs } from "./helpers";
 import { pngFile } from "./fleet-helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
@@ -34,14 +34,10 @@ function tableCounts(): Record<string, number> {
   return Object.fromEntries(tables.map((t) => [t, (db().$client.prepare(`select count(*) as n from "${t}"`).get() as { n: number }).n]));
 }
 
-/** The action's whole answer: its state, or where it redirected. */
+/** The action's whole answer: its state (with `redirectTo` when it sends the browser on; actions never redirect themselves). */
 async function answerOf(action: Action, fields: Record<string, string | string[]>): Promise<{ state?: ActionState; redirect?: string }> {
-  try {
-    return { state: await action(EMPTY, form(fields)) };
-  } catch (error) {
-    if (error instanceof Error && error.message.startsWith("redirect:")) return { redirect: error.message.slice("redirect:".length) };
-    throw error;
-  }
+  const state = await action(EMPTY, form(fields));
+  return state.redirectTo ? { state, redirect: state.redirectTo } : { state };
 }
 
 /**
@@ -67,12 +63,12 @@ describe("exactly once: forms", () => {
     setGuards(CLUB, { notCurrent: "warn", inArrears: "warn" });
   });
 
-  it("a squawk report sent twice with one key: one squawk, the same redirect, nothing else written", async () => {
+  it("a squawk report sent twice with one key: one squawk, the same answer, nothing else written", async () => {
     signInAs(MEMBER);
     const plane = planeId(CLUB, "N0556L");
     const before = db().select().from(squawks).all().length;
     const { first } = await onceThenReplay(reportSquawk, { club: CLUB, aircraftId: plane, description: "Nose tire worn to the cord", foundDuring: "preflight" });
-    expect(first.redirect).toMatch(/\?reported=/);
+    expect(first.state?.message).toBe("Squawk reported: “Nose tire worn to the cord”.");
     expect(db().select().from(squawks).all().length).toBe(before + 1);
     const stored = db().select().from(idempotentWrites).all().at(-1)!;
     expect(stored).toMatchObject({ clubId: clubBySlug(CLUB).id, actorUserId: uid(MEMBER) });
@@ -84,7 +80,7 @@ describe("exactly once: forms", () => {
     const before = db().select().from(squawks).all().length;
     const fields = { club: CLUB, aircraftId: plane, description: "Left strobe flickers", foundDuring: "preflight", idempotencyKey: key() };
     const [a, b, c] = await Promise.all([answerOf(reportSquawk, fields), answerOf(reportSquawk, fields), answerOf(reportSquawk, fields)]);
-    expect(a.redirect).toMatch(/\?reported=/);
+    expect(a.state?.message).toBe("Squawk reported: “Left strobe flickers”.");
     expect(b).toEqual(a);
     expect(c).toEqual(a);
     expect(db().select().from(squawks).all().length).toBe(before + 1);
@@ -96,10 +92,10 @@ describe("exactly once: forms", () => {
     const filesOnDisk = () => (fs.existsSync(process.env.UPLOAD_DIR!) ? fs.readdirSync(process.env.UPLOAD_DIR!, { recursive: true, withFileTypes: true }).filter((e) => e.isFile()).length : 0);
     const before = filesOnDisk();
     const k = key();
-    const send = () => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane, description: "Cracked fairing", foundDuring: "preflight", idempotencyKey: k, photos: pngFile() })).catch((e: Error) => e.message);
+    const send = () => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane, description: "Cracked fairing", foundDuring: "preflight", idempotencyKey: k, photos: pngFile() }));
     const [a, b] = await Promise.all([send(), send()]);
-    expect(a).toMatch(/^redirect:/);
-    expect(b).toBe(a);
+    expect(a).toMatchObject({ ok: true, message: "Squawk reported: “Cracked fairing”." });
+    expect(b).toEqual(a);
     expect(filesOnDisk()).toBe(before + 1);
     expect(db().select().from(uploads).all().length).toBeGreaterThan(0);
   });
@@ -111,7 +107,7 @@ describe("exactly once: forms", () => {
     const before = db().select().from(squawks).all().length;
     const one = await answerOf(reportSquawk, { ...fields, idempotencyKey: key() });
     const two = await answerOf(reportSquawk, { ...fields, idempotencyKey: key() });
-    expect(one.redirect).not.toEqual(two.redirect);
+    expect(one.state?.data).not.toEqual(two.state?.data);
     expect(db().select().from(squawks).all().length).toBe(before + 2);
   });
 
@@ -140,7 +136,7 @@ describe("exactly once: forms", () => {
     expect(refused.state?.fieldErrors.description?.length).toBeGreaterThan(0);
     expect(tableCounts()).toEqual(before);
     const fixed = await answerOf(reportSquawk, { club: CLUB, aircraftId: plane, description: "Door seal torn at the hinge", foundDuring: "preflight", idempotencyKey: k });
-    expect(fixed.redirect).toMatch(/\?reported=/);
+    expect(fixed.state).toMatchObject({ ok: true, message: "Squawk reported: “Door seal torn at the hinge”." });
   });
 
   it("a malformed key is refused with a clear message and nothing is written", async () => {
@@ -160,8 +156,7 @@ describe("exactly once: forms", () => {
   it("triage replayed: one triage event, the same answer", async () => {
     signInAs(MEMBER);
     const plane = planeId(CLUB, "N0556L");
-    const to = await expectRedirect(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane, description: "Cowling fastener missing", foundDuring: "preflight" })));
-    const squawkId = to.split("reported=")[1]!;
+    const squawkId = await squawkIdOf(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane, description: "Cowling fastener missing", foundDuring: "preflight" })));
     signInAs("maintenance@hangarline.test");
     await onceThenReplay(triageSquawk, { club: CLUB, squawkId, triage: "grounding", note: "Replace before flight" });
     expect(db().select().from(squawkEvents).where(and(eq(squawkEvents.squawkId, squawkId), eq(squawkEvents.kind, "triaged"))).all()).toHaveLength(1);

@@ -8,7 +8,7 @@ import { memberDocuments, uploads } from "@/db/schema";
 import { recordDocument } from "@/lib/actions/documents/record-document";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
 import { uploadDir } from "@/lib/storage";
-import { EMPTY, db, expectRedirect, form, signInAs } from "./helpers";
+import { EMPTY, db, squawkIdOf, form, signInAs } from "./helpers";
 import { planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
 const CLUB = "lakeshore-aero";
@@ -50,8 +50,7 @@ describe("uploads: cleaned on the way in, served safely", () => {
     signInAs("member@hangarline.test");
     const plane = planeByRegistration(CLUB, "N0534L");
     const photo = new File([new Uint8Array(original)], "ramp.jpg", { type: "image/jpeg" });
-    const to = await expectRedirect(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Chafed brake line, right main", foundDuring: "preflight", photos: photo })));
-    const squawkId = to.split("reported=")[1]!;
+    const squawkId = await squawkIdOf(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Chafed brake line, right main", foundDuring: "preflight", photos: photo })));
     const row = db().select().from(uploads).where(and(eq(uploads.subjectType, "Squawk"), eq(uploads.subjectId, squawkId))).get()!;
 
     const res = await serve(row.id);
@@ -93,8 +92,8 @@ describe("uploads: cleaned on the way in, served safely", () => {
     signInAs("member@hangarline.test");
     const plane = planeByRegistration(CLUB, "N0534L");
     const photo = new File([new Uint8Array(await photoWithLocation())], "gone.jpg", { type: "image/jpeg" });
-    const to = await expectRedirect(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Loose fairing screw, nose gear", foundDuring: "preflight", photos: photo })));
-    const row = db().select().from(uploads).where(and(eq(uploads.subjectType, "Squawk"), eq(uploads.subjectId, to.split("reported=")[1]!))).get()!;
+    const squawkId = await squawkIdOf(() => reportSquawk(EMPTY, form({ club: CLUB, aircraftId: plane.id, description: "Loose fairing screw, nose gear", foundDuring: "preflight", photos: photo })));
+    const row = db().select().from(uploads).where(and(eq(uploads.subjectType, "Squawk"), eq(uploads.subjectId, squawkId))).get()!;
     fs.rmSync(path.join(uploadDir(), row.storageKey));
     const res = await serve(row.id);
     expect(res.status).toBe(404);

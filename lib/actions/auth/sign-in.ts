@@ -1,6 +1,5 @@
 "use server";
 import { AuthError, CredentialsSignin } from "next-auth";
-import { redirect } from "next/navigation";
 import { signIn } from "@/auth";
 import { zodFieldErrors } from "@/lib/actions/create-action";
 import type { ActionState } from "@/lib/actions/action-state";
@@ -12,20 +11,18 @@ const LIMITED = "Too many failed sign-ins. Wait a few minutes and try again (eac
 export async function signInWithPassword(_prev: ActionState, formData: FormData): Promise<ActionState> {
   const parsed = passwordSignInSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: zodFieldErrors(parsed.error) };
+  const to = safeCallbackUrl(parsed.data.callbackUrl ?? "/clubs");
   try {
-    await signIn("credentials", {
-      email: parsed.data.email,
-      password: parsed.data.password,
-      redirectTo: safeCallbackUrl(parsed.data.callbackUrl ?? "/clubs"),
-    });
+    // No redirect from here (DEVELOPERS.md "Forms and their answers"): the answer says where to go.
+    await signIn("credentials", { email: parsed.data.email, password: parsed.data.password, redirect: false });
   } catch (error) {
     if (error instanceof CredentialsSignin) {
       return { ok: false, message: error.code === "rate_limited" ? LIMITED : GENERIC, fieldErrors: {} };
     }
     if (error instanceof AuthError) return { ok: false, message: GENERIC, fieldErrors: {} };
-    throw error; // the redirect after a successful sign-in
+    throw error;
   }
-  return { ok: true, message: "Signed in.", fieldErrors: {} };
+  return { ok: true, message: "Signed in.", fieldErrors: {}, redirectTo: to };
 }
 
 export async function requestMagicLink(_prev: ActionState, formData: FormData): Promise<ActionState> {
@@ -40,5 +37,5 @@ export async function requestMagicLink(_prev: ActionState, formData: FormData): 
     throw error;
   }
   // Our own page, whether or not an account exists: the answer reveals nothing.
-  redirect("/sign-in/check-email");
+  return { ok: true, message: "Check your e-mail for the sign-in link.", fieldErrors: {}, redirectTo: "/sign-in/check-email" };
 }

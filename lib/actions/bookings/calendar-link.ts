@@ -5,7 +5,6 @@ import { writeAudit } from "@/lib/server/audit";
 import { newSecretToken } from "@/lib/server/tokens";
 import { appUrl } from "@/lib/server/urls";
 import { feedTokenSchema } from "@/lib/validation/bookings";
-import { bookingPaths } from "./paths";
 
 // A member's own calendar link. A new link replaces the old one (which stops working at once);
 // the secret is shown once, right after it is made, and kept only as its hash.
@@ -19,7 +18,7 @@ export const manageCalendarLink = clubAction({
     const revoked = revokeFeedTokens(tx, club.id, user.id, now);
     if (input.intent === "revoke") {
       if (revoked) writeAudit(tx, { clubId: club.id, actorId: user.id, action: "calendar.link.revoke", subjectType: "CalendarFeedToken", subjectId: had!.id });
-      return { message: revoked ? "Calendar link turned off: calendars using it get nothing more." : "You had no calendar link.", revalidate: [`${bookingPaths(club.slug)[0]}/calendar`] };
+      return { message: revoked ? "Calendar link turned off: calendars using it get nothing more." : "You had no calendar link.", refresh: true };
     }
     const secret = newSecretToken();
     const tokenId = insertFeedToken(tx, club.id, user.id, secret);
@@ -27,7 +26,7 @@ export const manageCalendarLink = clubAction({
     return {
       message: had ? "New calendar link made; the old one no longer works." : "Calendar link made.",
       data: { url: appUrl(`/api/calendar/${secret}`) },
-      revalidate: [`${bookingPaths(club.slug)[0]}/calendar`],
+      refresh: true,
     };
   },
 });

@@ -6,7 +6,6 @@ import { describeLateCheck, lateCancellation } from "@/lib/bookings/late-cancell
 import { writeAudit } from "@/lib/server/audit";
 import { cancelBookingSchema } from "@/lib/validation/bookings";
 import { canOn } from "@/permissions";
-import { bookingPaths } from "./paths";
 
 export const cancelBooking = clubAction({
   schema: cancelBookingSchema,
@@ -31,6 +30,6 @@ export const cancelBooking = clubAction({
       after: { status: "cancelled", reason: input.reason, late: late.late, hoursBefore: Math.round(late.hoursBefore * 10) / 10 },
     });
     const note = describeLateCheck(late, club.settings.lateCancellationHours);
-    return { message: `Booking cancelled; the aircraft is free again.${note ? ` ${note}` : ""}`, data: { late: late.late }, revalidate: bookingPaths(club.slug, booking.id) };
+    return { message: `Booking cancelled; the aircraft is free again.${note ? ` ${note}` : ""}`, data: { late: late.late }, refresh: true };
   },
 });

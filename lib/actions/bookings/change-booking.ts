@@ -5,7 +5,6 @@ import { formatLocalTime } from "@/lib/fleet/time";
 import { writeAudit } from "@/lib/server/audit";
 import { changeBookingSchema } from "@/lib/validation/bookings";
 import { changeBookingInTx } from "./booking-core";
-import { bookingPaths } from "./paths";
 
 // Who may change is checked inside (the member's own booking, or an instructor's).
 export const changeBooking = clubAction({
@@ -26,6 +25,6 @@ export const changeBooking = clubAction({
     });
     const when = `${formatLocalTime(changed.window.startsAt, club.timeZone)} to ${formatLocalTime(changed.window.endsAt, club.timeZone)}`;
     const late = describeLateCheck(changed.late, club.settings.lateCancellationHours);
-    return { message: `Booking moved to ${when}.${late ? ` ${late}` : ""}`, revalidate: bookingPaths(club.slug, changed.booking.id) };
+    return { message: `Booking moved to ${when}.${late ? ` ${late}` : ""}`, refresh: true };
   },
 });

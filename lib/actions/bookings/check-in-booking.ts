@@ -3,7 +3,6 @@ import { claimBookingWriteLock, updateBookingRow } from "@/db/queries/bookings";
 import { getAircraft } from "@/db/queries/fleet";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
-import { fleetPaths } from "@/lib/actions/fleet/paths";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { isLedgerError } from "@/lib/ledger/errors";
 import { postFlightCharge } from "@/lib/ledger/flight-charges";
@@ -12,7 +11,6 @@ import { writeAudit } from "@/lib/server/audit";
 import { checkInSchema } from "@/lib/validation/bookings";
 import { loadBookingForParty } from "./booking-access";
 import { writeFlightEntry } from "./flight-entry";
-import { bookingPaths } from "./paths";
 
 // Check-in, in one transaction: the flight-log entry (meters, landings, fuel, oil, squawk), the
 // aircraft's meters moved on, the flight charge posted to the member's account, the booking
@@ -53,7 +51,7 @@ export const checkInBooking = clubAction({
     return {
       message: `Checked in: flight logged and ${formatMoney(charge.netMinor, club.currency)} charged to the account.${entry.squawkId ? " Your squawk is with maintenance." : ""}${flag}`,
       data: { flightId: entry.flightId as string | null, chargeMinor: charge.netMinor as number | null, continuity: entry.continuity as string | null, alreadyCheckedIn: false },
-      revalidate: [...bookingPaths(club.slug, booking.id), ...fleetPaths(club.slug, plane.id)],
+      refresh: true,
     };
   },
 });

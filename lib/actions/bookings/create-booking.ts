@@ -4,7 +4,6 @@ import { formatLocalTime } from "@/lib/fleet/time";
 import { writeAudit } from "@/lib/server/audit";
 import { createBookingSchema } from "@/lib/validation/bookings";
 import { createBookingInTx } from "./booking-core";
-import { bookingPaths } from "./paths";
 
 export const createBooking = clubAction({
   schema: createBookingSchema,
@@ -25,7 +24,8 @@ export const createBooking = clubAction({
     return {
       message: `${made.plane.registration} booked from ${when}.${made.acceptedWarnings.length ? " The warnings you read are kept with the booking." : ""}`,
       data: { bookingId: made.bookingId },
-      revalidate: bookingPaths(club.slug, made.bookingId),
+      // The form shows the answer, then opens the new booking's page.
+      redirectTo: `/clubs/${club.slug}/bookings/${made.bookingId}`,
     };
   },
 });

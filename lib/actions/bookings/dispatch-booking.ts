@@ -7,7 +7,6 @@ import { ActionError } from "@/lib/actions/action-state";
 import { writeAudit } from "@/lib/server/audit";
 import { dispatchBookingSchema } from "@/lib/validation/bookings";
 import { loadBookingForParty } from "./booking-access";
-import { bookingPaths } from "./paths";
 
 // Dispatch: the member confirms the preflight record of this booking. A grounded aircraft is
 // never dispatched, whatever the booking guards allowed when it was booked; findings and a
@@ -41,6 +40,6 @@ export const dispatchBooking = clubAction({
     const now = new Date();
     updateBookingRow(tx, club.id, booking.id, { status: "dispatched", dispatchedAt: now, dispatchedById: user.id, preflightRecordId: record.id });
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "booking.dispatch", subjectType: "Booking", subjectId: booking.id, before: { status: booking.status }, after: { status: "dispatched", preflightRecordId: record.id, accepted: concerns } });
-    return { message: "Dispatched: the aircraft is out on your booking. Check in when you are back.", revalidate: bookingPaths(club.slug, booking.id) };
+    return { message: "Dispatched: the aircraft is out on your booking. Check in when you are back.", refresh: true };
   },
 });

@@ -31,6 +31,6 @@ export const recordCheckout = clubAction({
       .returning({ id: checkouts.id })
       .all();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "checkout.record", subjectType: "Checkout", subjectId: row!.id, after: { userId: input.userId, typeGroup, checkedOutOn: input.checkedOutOn, conditions: input.conditions ?? null } });
-    return { revalidate: [`/clubs/${club.slug}/safety/checkouts`, `/clubs/${club.slug}/me`] };
+    return { refresh: true };
   },
 });

@@ -22,6 +22,6 @@ export const revokeCheckout = clubAction({
       .run();
     if (result.changes === 0) throw new ActionError("This checkout was already revoked.", {}, "conflict");
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "checkout.revoke", subjectType: "Checkout", subjectId: current.id, before: { revokedAt: null }, after: { reason: input.reason } });
-    return { revalidate: [`/clubs/${club.slug}/safety/checkouts`, `/clubs/${club.slug}/me`] };
+    return { refresh: true };
   },
 });

@@ -31,7 +31,7 @@ export const recordDocument = clubAction({
         .values({ id, clubId: club.id, userId: user.id, kind: input.kind, reference: input.reference ?? null, details: input.details ?? null, issuedOn: input.issuedOn, expiresOn, uploadId, recordedById: user.id })
         .run();
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "member_document.record", subjectType: "MemberDocument", subjectId: id, after: { kind: input.kind, expiresOn, file: stored ? stored.file.originalName : null } });
-      return { data: { documentId: id }, revalidate: [`/clubs/${club.slug}/me`] };
+      return { data: { documentId: id }, refresh: true };
     });
   },
 });

@@ -53,6 +53,6 @@ export const recordMedical = clubAction({
       .returning({ id: medicalCertificates.id })
       .all();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "medical.record", subjectType: "Medical", subjectId: row!.id, after: { expiresOn } });
-    return { message: `Medical recorded: valid for private-pilot privileges through ${expiresOn}.`, revalidate: [`/clubs/${club.slug}/me`] };
+    return { message: `Medical recorded: valid for private-pilot privileges through ${expiresOn}.`, refresh: true };
   },
 });

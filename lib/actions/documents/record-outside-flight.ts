@@ -26,6 +26,6 @@ export const recordOutsideFlight = clubAction({
         note: input.note ?? null,
       })
       .run();
-    return { revalidate: [`/clubs/${ctx.club.slug}/me`] };
+    return { refresh: true };
   },
 });

@@ -9,7 +9,6 @@ import { writeAudit } from "@/lib/server/audit";
 import { DOCUMENT_TYPES } from "@/lib/storage";
 import { closeSquawkSchema } from "@/lib/validation/fleet";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
-import { fleetPaths } from "./paths";
 
 // Closing is the return to service: anything other than a plain note needs the mechanic's name
 // and certificate number, as the logbook entry does.
@@ -48,7 +47,7 @@ export const closeSquawk = clubAction({
       recordSquawkEvent(tx, { clubId: club.id, squawkId: current.id, kind: "closed", actorId: user.id, fromTriage: current.triage, toTriage: current.triage, note: `${input.repairNotes}${who}` });
       insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: current.id, uploadedById: user.id }, stored);
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "squawk.close", subjectType: "Squawk", subjectId: current.id, before: { status: current.status, triage: current.triage }, after: { ...change, closedAt: change.closedAt.toISOString() } });
-      return { revalidate: fleetPaths(club.slug, current.aircraftId) };
+      return { refresh: true };
     });
   },
 });

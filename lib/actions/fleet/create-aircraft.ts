@@ -6,7 +6,6 @@ import { ActionError } from "@/lib/actions/action-state";
 import { writeAudit } from "@/lib/server/audit";
 import { createAircraftSchema } from "@/lib/validation/fleet";
 import { aircraftValues, defaultItemRows } from "./aircraft-values";
-import { fleetPaths } from "./paths";
 
 export const createAircraft = clubAction({
   schema: createAircraftSchema,
@@ -21,6 +20,6 @@ export const createAircraft = clubAction({
     const id = row!.id;
     tx.insert(inspectionItems).values(defaultItemRows(club, id)).run();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "aircraft.create", subjectType: "Aircraft", subjectId: id, after: values });
-    return { data: { aircraftId: id }, revalidate: fleetPaths(club.slug, id), redirectTo: `/clubs/${club.slug}/aircraft/${id}` };
+    return { data: { aircraftId: id }, refresh: true, redirectTo: `/clubs/${club.slug}/aircraft/${id}` };
   },
 });

@@ -6,7 +6,6 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { writeAudit } from "@/lib/server/audit";
 import { createInspectionItemSchema } from "@/lib/validation/fleet";
-import { fleetPaths } from "./paths";
 
 function keyFor(origin: string, name: string): string {
   const slug = name.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60);
@@ -40,6 +39,6 @@ export const createInspectionItem = clubAction({
     };
     const [row] = tx.insert(inspectionItems).values(values).returning({ id: inspectionItems.id }).all();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "inspection.item.create", subjectType: "InspectionItem", subjectId: row!.id, after: values });
-    return { revalidate: fleetPaths(club.slug, plane.id) };
+    return { refresh: true };
   },
 });

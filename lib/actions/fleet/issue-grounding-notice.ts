@@ -10,7 +10,6 @@ import { formatLocalTime, localTimeToInstant } from "@/lib/fleet/time";
 import { writeAudit } from "@/lib/server/audit";
 import { appUrl } from "@/lib/server/urls";
 import { issueNoticeSchema } from "@/lib/validation/fleet";
-import { fleetPaths } from "./paths";
 
 export const issueGroundingNotice = clubAction({
   schema: issueNoticeSchema,
@@ -48,7 +47,7 @@ export const issueGroundingNotice = clubAction({
       })),
     );
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "grounding.issue", subjectType: "GroundingNotice", subjectId: row!.id, after: { aircraftId: plane.id, category: input.category, reason: input.reason, effectiveAt: effectiveAt.toISOString(), recipients: sent } });
-    return { message: `Grounding notice issued; ${sent} members are being e-mailed.`, data: { noticeId: row!.id, recipients: sent }, revalidate: fleetPaths(club.slug, plane.id) };
+    return { message: `Grounding notice issued; ${sent} members are being e-mailed.`, data: { noticeId: row!.id, recipients: sent }, refresh: true };
   },
   after: () => kickOutbox(),
 });

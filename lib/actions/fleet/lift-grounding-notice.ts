@@ -6,7 +6,6 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { writeAudit } from "@/lib/server/audit";
 import { liftNoticeSchema } from "@/lib/validation/fleet";
-import { fleetPaths } from "./paths";
 
 // Lifting needs a note; a maintenance notice also needs the return-to-service entry.
 export const liftGroundingNotice = clubAction({
@@ -27,6 +26,6 @@ export const liftGroundingNotice = clubAction({
     const result = tx.update(groundingNotices).set(change).where(and(eq(groundingNotices.clubId, club.id), eq(groundingNotices.id, notice.id), isNull(groundingNotices.liftedAt))).run();
     if (result.changes === 0) throw new ActionError("That notice was already lifted.", {}, "conflict");
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "grounding.lift", subjectType: "GroundingNotice", subjectId: notice.id, before: { liftedAt: null }, after: { ...change, liftedAt: change.liftedAt.toISOString() } });
-    return { revalidate: fleetPaths(club.slug, notice.aircraftId) };
+    return { refresh: true };
   },
 });

@@ -10,7 +10,6 @@ import { roundHours } from "@/lib/airworthiness";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { advanceMeters, checkBetween } from "@/lib/fleet/continuity";
 import { logFlightSchema } from "@/lib/validation/fleet";
-import { fleetPaths } from "./paths";
 import { can } from "@/permissions";
 
 // One transaction: the flight, its continuity flag, the aircraft's current meters (which the
@@ -88,7 +87,7 @@ export const logFlight = clubAction({
         ? `Flight logged, and flagged for maintenance: ${continuity.issues.map((i) => i.text).join("; ")}.`
         : "Flight logged; the meters continue from the previous flight.",
       data: { flightId: row!.id, continuity: continuity.status },
-      revalidate: fleetPaths(club.slug, plane.id),
+      refresh: true,
     };
   },
 });

@@ -10,7 +10,6 @@ import { writeAudit } from "@/lib/server/audit";
 import { DOCUMENT_TYPES } from "@/lib/storage";
 import { recordCompletionSchema } from "@/lib/validation/fleet";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
-import { fleetPaths } from "./paths";
 
 const HOURS_RULES = new Set(["hours", "months-or-hours"]);
 
@@ -58,7 +57,7 @@ export const recordCompletion = clubAction({
       }
       insertUploadRows(tx, { clubId: club.id, subjectType: "InspectionCompletion", subjectId: row!.id, uploadedById: user.id }, stored);
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "inspection.record", subjectType: "InspectionCompletion", subjectId: row!.id, after: { item: item.name, ...values } });
-      return { revalidate: fleetPaths(club.slug, plane.id) };
+      return { refresh: true };
     });
   },
 });

@@ -7,14 +7,13 @@ import { ActionError } from "@/lib/actions/action-state";
 import { IMAGE_TYPES } from "@/lib/storage";
 import { reportSquawkSchema } from "@/lib/validation/fleet";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
-import { fleetPaths } from "./paths";
 
 // Any member may report; the squawk weighs on the status at once (untriaged is never flyable
 // without a look, and "may affect airworthiness" grounds until maintenance triages it).
 export const reportSquawk = clubAction({
   schema: reportSquawkSchema,
   permission: ["create", "Squawk"],
-  success: "Squawk reported. Maintenance has been told on the flight line.",
+  success: "Squawk reported.",
   async prepare({ db, club }, input) {
     if (!getAircraft(db, club.id, input.aircraftId)) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
     return storeFiles(await checkFiles(input.photos, IMAGE_TYPES, "photos"));
@@ -31,8 +30,8 @@ export const reportSquawk = clubAction({
         .all();
       recordSquawkEvent(tx, { clubId: club.id, squawkId: row!.id, kind: "reported", actorId: user.id, toTriage: "untriaged", note: input.suspectedGrounding ? "Reported as possibly affecting airworthiness." : null });
       insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: row!.id, uploadedById: user.id }, stored);
-      // The confirmation comes from the URL, so it survives the page being rendered afresh.
-      return { data: { squawkId: row!.id }, revalidate: fleetPaths(club.slug, plane.id), redirectTo: `/clubs/${club.slug}/aircraft/${plane.id}?reported=${row!.id}` };
+      // The form shows this answer in place (quoting what was reported), then the page's lists refresh.
+      return { message: `Squawk reported: “${input.description}”.`, data: { squawkId: row!.id }, refresh: true };
     });
   },
 });

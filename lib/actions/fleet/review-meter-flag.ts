@@ -6,7 +6,6 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { writeAudit } from "@/lib/server/audit";
 import { reviewMeterFlagSchema } from "@/lib/validation/fleet";
-import { fleetPaths } from "./paths";
 
 // Maintenance looks at a gap or overlap and records what it found. The flag itself stays on
 // the flight: the record shows that the meters did not continue, and who looked at it.
@@ -25,6 +24,6 @@ export const reviewMeterFlag = clubAction({
       .run();
     if (result.changes === 0) throw new ActionError("Someone already reviewed that flag.", {}, "conflict");
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "flight.meter.review", subjectType: "Flight", subjectId: flight.id, before: { continuity: flight.continuity, text: flight.continuityText }, after: { note: input.note } });
-    return { revalidate: fleetPaths(club.slug, flight.aircraftId) };
+    return { refresh: true };
   },
 });

@@ -8,7 +8,6 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { writeAudit } from "@/lib/server/audit";
 import { triageSquawkSchema } from "@/lib/validation/fleet";
-import { fleetPaths } from "./paths";
 
 const MESSAGES = {
   grounding: "Triaged as grounding: the aircraft shows grounded until the squawk is closed with a return to service.",
@@ -50,7 +49,7 @@ export const triageSquawk = clubAction({
       const told = plane ? emailBookingHoldersOfGrounding(tx, club, plane, { reason: current.description, effectiveAt: new Date(), issuedBy: user.name ?? user.email }) : 0;
       if (told > 0) message += ` ${told} member${told === 1 ? "" : "s"} with bookings on this aircraft will be e-mailed.`;
     }
-    return { message, revalidate: fleetPaths(club.slug, current.aircraftId) };
+    return { message, refresh: true };
   },
   after: () => kickOutbox(),
 });

@@ -9,7 +9,6 @@ import { IMAGE_TYPES } from "@/lib/storage";
 import { updateAircraftSchema } from "@/lib/validation/fleet";
 import { aircraftValues } from "./aircraft-values";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
-import { fleetPaths } from "./paths";
 
 // Meter corrections go through here too, with the before/after in the audit log; the flight
 // log is the normal way the meters move.
@@ -36,7 +35,7 @@ export const updateAircraft = clubAction({
         .run();
       const before = Object.fromEntries(Object.keys(values).map((k) => [k, current[k as keyof typeof current]]));
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "aircraft.update", subjectType: "Aircraft", subjectId: current.id, before, after: { ...values, ...(photoId ? { photoUploadId: photoId } : {}) } });
-      return { revalidate: fleetPaths(club.slug, current.id) };
+      return { refresh: true };
     });
   },
 });

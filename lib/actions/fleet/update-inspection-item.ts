@@ -6,7 +6,6 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { writeAudit } from "@/lib/server/audit";
 import { updateInspectionItemSchema } from "@/lib/validation/fleet";
-import { fleetPaths } from "./paths";
 
 // Records cumulative use (ELT transmitter time, 14 CFR 91.207(c)) or retires a directive or
 // club item that no longer applies. Regulation items are never retired: the aircraft's flags
@@ -41,6 +40,6 @@ export const updateInspectionItem = clubAction({
       before: { usageUsedHours: item.usageUsedHours, retired: false },
       after: { usageUsedHours: input.usageUsedHours ?? item.usageUsedHours, retired: input.retire, note: input.note },
     });
-    return { revalidate: fleetPaths(club.slug, item.aircraftId) };
+    return { refresh: true };
   },
 });

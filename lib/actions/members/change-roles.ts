@@ -21,6 +21,6 @@ export const changeRoles = clubAction({
     revokeSessions(tx, current.userId); // the member signs in again under the new roles
     tx.update(memberships).set({ roles: input.roles }).where(and(eq(memberships.clubId, club.id), eq(memberships.id, current.id))).run();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "member.roles.change", subjectType: "Membership", subjectId: current.id, before: { roles: current.roles }, after: { roles: input.roles } });
-    return { revalidate: [`/clubs/${club.slug}/members`] };
+    return { refresh: true };
   },
 });

@@ -52,7 +52,7 @@ export const inviteMember = clubAction({
       },
     });
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "member.invite", subjectType: "Invitation", subjectId: row!.id, after: { email: input.email, roles: input.roles } });
-    return { revalidate: [`/clubs/${club.slug}/members`] };
+    return { refresh: true };
   },
   after: () => kickOutbox(),
 });

@@ -18,6 +18,6 @@ export const revokeInvitation = clubAction({
       .run();
     if (result.changes === 0) throw new ActionError("That invitation is not open any more.", {}, "not_found");
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "member.invitation.revoke", subjectType: "Invitation", subjectId: input.invitationId });
-    return { revalidate: [`/clubs/${club.slug}/members`] };
+    return { refresh: true };
   },
 });

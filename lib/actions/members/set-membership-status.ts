@@ -31,6 +31,6 @@ export const setMembershipStatus = clubAction({
       before: { status: current.status },
       after: { status: input.status },
     });
-    return { message: input.status === "inactive" ? "Member deactivated; their history is kept." : "Member reactivated.", revalidate: [`/clubs/${club.slug}/members`] };
+    return { message: input.status === "inactive" ? "Member deactivated; their history is kept." : "Member reactivated.", refresh: true };
   },
 });

@@ -17,7 +17,7 @@ export const assignDuesPlan = clubAction({
     if (!input.planId) {
       if (before) tx.delete(memberDues).where(and(eq(memberDues.clubId, club.id), eq(memberDues.id, before.id))).run();
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.plan.assign", subjectType: "MemberDues", subjectId: input.memberUserId, before, after: null });
-      return { message: "The member pays no dues plan now.", revalidate: [`/clubs/${club.slug}/money/billing`] };
+      return { message: "The member pays no dues plan now.", refresh: true };
     }
     const plan = tx.select().from(duesPlans).where(and(eq(duesPlans.clubId, club.id), eq(duesPlans.id, input.planId))).get();
     if (!plan) throw new ActionError("Some fields need attention; nothing was saved.", { planId: ["Choose a plan of this club."] });
@@ -25,6 +25,6 @@ export const assignDuesPlan = clubAction({
     if (before) tx.update(memberDues).set(values).where(and(eq(memberDues.clubId, club.id), eq(memberDues.id, before.id))).run();
     else tx.insert(memberDues).values({ clubId: club.id, memberUserId: input.memberUserId, ...values }).run();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.plan.assign", subjectType: "MemberDues", subjectId: input.memberUserId, before, after: values });
-    return { revalidate: [`/clubs/${club.slug}/money/billing`] };
+    return { refresh: true };
   },
 });

@@ -31,6 +31,6 @@ export const postAdjustment = clubAction({
       });
     });
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.entry.adjust", subjectType: "JournalEntry", subjectId: entryId, after: { ...input, amountMinor } });
-    return { revalidate: [`/clubs/${club.slug}/money`] };
+    return { refresh: true };
   },
 });

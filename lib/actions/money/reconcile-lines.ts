@@ -1,6 +1,4 @@
 "use server";
-import { and, eq } from "drizzle-orm";
-import { bankLines } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { autoMatchStatement } from "@/lib/ledger/reconciliation";
 import { bookBankLine, lockPeriod, matchManually, setLineIgnored, undoMatch } from "@/lib/ledger/reconcile-edits";
@@ -12,12 +10,6 @@ import { ledger } from "./ledger-errors";
 
 // The reconciliation workspace's actions, one wrapper each: all need "reconcile" on Reconciliation.
 const actor = (ctx: ClubContext) => ({ clubId: ctx.club.id, userId: ctx.user.id, currency: ctx.club.currency });
-// The workspace page of the line's statement, so the treasurer sees the change at once.
-function paths(ctx: ClubContext, ref: { statementId?: string; bankLineId?: string }): string[] {
-  const base = `/clubs/${ctx.club.slug}/money/reconciliation`;
-  const statementId = ref.statementId ?? ctx.db.select({ s: bankLines.statementId }).from(bankLines).where(and(eq(bankLines.clubId, ctx.club.id), eq(bankLines.id, ref.bankLineId ?? ""))).get()?.s;
-  return statementId ? [base, `${base}/${statementId}`] : [base];
-}
 
 export const runAutoMatch = clubAction({
   schema: statementIdSchema,
@@ -26,7 +18,7 @@ export const runAutoMatch = clubAction({
   run(tx, ctx, input) {
     const r = ledger(() => autoMatchStatement(tx, actor(ctx), input.statementId));
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.bank.match", subjectType: "BankStatement", subjectId: input.statementId, after: r });
-    return { message: r.matched ? `${r.matched} more lines matched; ${r.unmatched} still open.` : `No further automatic matches; ${r.unmatched} lines still open.`, revalidate: paths(ctx, input) };
+    return { message: r.matched ? `${r.matched} more lines matched; ${r.unmatched} still open.` : `No further automatic matches; ${r.unmatched} lines still open.`, refresh: true };
   },
 });
 
@@ -37,7 +29,7 @@ export const matchBankLine = clubAction({
   run(tx, ctx, input) {
     ledger(() => matchManually(tx, actor(ctx), input.bankLineId, input.bookIds));
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.bank.match", subjectType: "BankLine", subjectId: input.bankLineId, after: { bookIds: input.bookIds } });
-    return { revalidate: paths(ctx, input) };
+    return { refresh: true };
   },
 });
 
@@ -48,7 +40,7 @@ export const bookLine = clubAction({
   run(tx, ctx, input) {
     const entryId = ledger(() => bookBankLine(tx, actor(ctx), input.bankLineId, input.account, input.memo ?? ""));
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.bank.book", subjectType: "BankLine", subjectId: input.bankLineId, after: { entryId, account: input.account } });
-    return { revalidate: paths(ctx, input) };
+    return { refresh: true };
   },
 });
 
@@ -59,7 +51,7 @@ export const unmatchLine = clubAction({
   run(tx, ctx, input) {
     ledger(() => undoMatch(tx, actor(ctx), input.bankLineId));
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.bank.unmatch", subjectType: "BankLine", subjectId: input.bankLineId });
-    return { revalidate: paths(ctx, input) };
+    return { refresh: true };
   },
 });
 
@@ -70,7 +62,7 @@ export const ignoreLine = clubAction({
   run(tx, ctx, input) {
     ledger(() => setLineIgnored(tx, actor(ctx), input.bankLineId, input.ignored));
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.bank.ignore", subjectType: "BankLine", subjectId: input.bankLineId, after: { ignored: input.ignored } });
-    return { message: input.ignored ? "Line set aside." : "Line brought back.", revalidate: paths(ctx, input) };
+    return { message: input.ignored ? "Line set aside." : "Line brought back.", refresh: true };
   },
 });
 
@@ -81,6 +73,6 @@ export const lockReconciledPeriod = clubAction({
   run(tx, ctx, input) {
     const report = ledger(() => lockPeriod(tx, actor(ctx), input.statementId));
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.period.lock", subjectType: "BankStatement", subjectId: input.statementId, after: { periodEnd: report.periodEnd, statement: report.statementBalanceMinor, book: report.bookBalanceMinor } });
-    return { message: `Reconciled: ${formatMoney(report.adjustedBankBalanceMinor, ctx.club.currency)} on both sides. The books are locked through ${report.periodEnd}.`, revalidate: [`/clubs/${ctx.club.slug}/money`, ...paths(ctx, input)] };
+    return { message: `Reconciled: ${formatMoney(report.adjustedBankBalanceMinor, ctx.club.currency)} on both sides. The books are locked through ${report.periodEnd}.`, refresh: true };
   },
 });

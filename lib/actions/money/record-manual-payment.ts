@@ -40,7 +40,7 @@ export const recordManualPayment = clubAction({
       .all();
     queueReceipt(tx, club.id, { memberUserId: input.memberUserId, amountMinor, method: input.method, receivedOn: input.receivedOn, reference: input.reference });
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.payment.manual", subjectType: "Payment", subjectId: row!.id, after: { ...input, amountMinor, entryId } });
-    return { revalidate: [`/clubs/${club.slug}/money`] };
+    return { refresh: true };
   },
   after: () => kickOutbox(),
 });

@@ -44,7 +44,7 @@ export const refundPayment = clubAction({
       recordCardRefund(tx, { clubId: ctx.club.id, paymentIntentId, refundId: refund.id, amountMinor: refund.amount, currency: refund.currency, treatment: input.treatment, createdAt: new Date(refund.created * 1000), requestedById: ctx.user.id }),
     );
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.payment.refund", subjectType: "Payment", subjectId: input.paymentId, after: { refundId: refund.id, amountMinor, treatment: input.treatment, outcome } });
-    return { revalidate: [`/clubs/${ctx.club.slug}/money`] };
+    return { refresh: true };
   },
   after: () => kickOutbox(),
 });

@@ -25,6 +25,6 @@ export const reverseJournalEntry = clubAction({
     const date = input.date ?? (through && original.entryDate <= through ? clubToday(ctx.club) : original.entryDate);
     const { entryId } = ledger(() => reverseEntry(tx, ctx.club.id, original.id, { date, createdById: ctx.user.id }));
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.entry.reverse", subjectType: "JournalEntry", subjectId: original.id, after: { reversalId: entryId, date } });
-    return { revalidate: [`/clubs/${ctx.club.slug}/money/journal`] };
+    return { refresh: true };
   },
 });

@@ -25,7 +25,7 @@ export const runBilling = clubAction({
       posted === 0 && result.statementsIssued === 0
         ? `Nothing new: ${monthLabel(input.month)} was already billed and its statements issued.`
         : `${monthLabel(input.month)}: ${result.duesPosted} dues and ${result.lateFeesPosted} late fees posted, ${result.statementsIssued} statements for ${monthLabel(shiftMonthKey(input.month, -1))} e-mailed.`;
-    return { message, data: result, revalidate: [`/clubs/${ctx.club.slug}/money`] };
+    return { message, data: result, refresh: true };
   },
   after: () => kickOutbox(),
 });

@@ -26,6 +26,6 @@ export const saveDuesPlan = clubAction({
       planId = tx.insert(duesPlans).values({ clubId: club.id, currency: club.currency, ...values }).returning({ id: duesPlans.id }).all()[0]!.id;
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.plan.save", subjectType: "DuesPlan", subjectId: planId, after: values });
     }
-    return { revalidate: [`/clubs/${club.slug}/money/billing`] };
+    return { refresh: true };
   },
 });

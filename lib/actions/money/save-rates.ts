@@ -27,7 +27,7 @@ export const saveRateProfile = clubAction({
     if (id) tx.update(rateProfiles).set(values).where(and(eq(rateProfiles.clubId, club.id), eq(rateProfiles.id, id))).run();
     else id = tx.insert(rateProfiles).values({ clubId: club.id, name: input.name, ...values }).returning({ id: rateProfiles.id }).all()[0]!.id;
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.rates.save", subjectType: "RateProfile", subjectId: id, after: { name: input.name, ...values } });
-    return { revalidate: [`/clubs/${club.slug}/money/rates`] };
+    return { refresh: true };
   },
 });
 
@@ -45,6 +45,6 @@ export const saveMoneySettings = clubAction({
     const before = tx.select().from(moneySettings).where(eq(moneySettings.clubId, club.id)).get();
     tx.insert(moneySettings).values({ clubId: club.id, ...values }).onConflictDoUpdate({ target: moneySettings.clubId, set: values }).run();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.settings.save", subjectType: "MoneySettings", subjectId: club.id, before, after: values });
-    return { revalidate: [`/clubs/${club.slug}/money`] };
+    return { refresh: true };
   },
 });

@@ -14,7 +14,7 @@ export const sendReminders = clubAction({
     const today = clubToday(ctx.club);
     const sent = sendDuesReminders(tx, ctx.club.id, today);
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.reminders.send", subjectType: "Club", subjectId: ctx.club.id, after: { sent, on: today } });
-    return { message: sent === 0 ? "Nobody to remind today (each member is reminded at most once a day)." : `${sent} reminder${sent === 1 ? "" : "s"} queued for sending.`, revalidate: [`/clubs/${ctx.club.slug}/money/ageing`] };
+    return { message: sent === 0 ? "Nobody to remind today (each member is reminded at most once a day)." : `${sent} reminder${sent === 1 ? "" : "s"} queued for sending.`, refresh: true };
   },
   after: () => kickOutbox(),
 });

@@ -19,7 +19,7 @@ export const assignClubAdmin = userAction({
     const club = tx.select().from(clubs).where(eq(clubs.id, input.clubId)).get();
     if (!club || !user) throw new ActionError("That club was not found.", {}, "not_found");
     appointAdmin(tx, club, input.adminEmail, user);
-    return { message: `${input.adminEmail} has been invited as an admin of ${club.name}; they become one when they accept.`, revalidate: ["/operator"] };
+    return { message: `${input.adminEmail} has been invited as an admin of ${club.name}; they become one when they accept.`, refresh: true };
   },
   after: () => kickOutbox(),
 });

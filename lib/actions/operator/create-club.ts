@@ -31,7 +31,7 @@ export const createClub = userAction({
     appointAdmin(tx, club, input.adminEmail, user);
     return {
       message: `Club created; ${input.adminEmail} has been invited as its admin and becomes one on accepting.`,
-      revalidate: ["/operator"],
+      refresh: true,
       data: { slug: club.slug },
     };
   },

@@ -4,11 +4,9 @@ import { recordSquawkEvent } from "@/db/queries/fleet-squawks";
 import { getPreflightTemplate } from "@/db/queries/tools-preflight";
 import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
 import { loadBookingForParty } from "@/lib/actions/bookings/booking-access";
-import { bookingPaths } from "@/lib/actions/bookings/paths";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles, type StoredFile } from "@/lib/actions/fleet/files";
-import { fleetPaths } from "@/lib/actions/fleet/paths";
 import { evaluatePreflight } from "@/lib/bookings/preflight-outcome";
 import { writeAudit } from "@/lib/server/audit";
 import { IMAGE_TYPES } from "@/lib/storage";
@@ -102,7 +100,7 @@ export const recordPreflight = clubAction({
       const message = outcome.outcome === "ok"
         ? "Preflight recorded: everything OK. You can dispatch the booking."
         : `Preflight recorded with ${outcome.findings.length} finding${outcome.findings.length === 1 ? "" : "s"}${squawkIds.length ? `; ${squawkIds.length} reported as squawk${squawkIds.length === 1 ? "" : "s"} for maintenance` : ""}.`;
-      return { message, data: { recordId: record!.id, squawkIds, findings: outcome.findings }, revalidate: [...bookingPaths(club.slug, booking.id), ...fleetPaths(club.slug, booking.aircraftId)] };
+      return { message, data: { recordId: record!.id, squawkIds, findings: outcome.findings }, refresh: true };
     });
   },
 });

@@ -21,6 +21,6 @@ export const savePreflightTemplateAction = clubAction({
     ];
     const templateId = savePreflightTemplate(tx, club.id, plane.id, { oilMinimum: input.oilMinimum, oilMaximum: input.oilMaximum, sumpPoints: input.sumpPoints, items, updatedById: user.id });
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "preflight.template.update", subjectType: "Aircraft", subjectId: plane.id, after: { templateId, items: items.length, oilMinimum: input.oilMinimum, sumpPoints: input.sumpPoints } });
-    return { data: { templateId }, revalidate: [`/clubs/${club.slug}/tools/aircraft/${plane.id}`] };
+    return { data: { templateId }, refresh: true };
   },
 });

@@ -22,6 +22,6 @@ export const acknowledgeBulletin = clubAction({
       const existing = getAcknowledgement(tx, club.id, bulletin.id, user.id);
       return { message: `You already acknowledged this on ${existing?.acknowledgedAt.toISOString().slice(0, 10) ?? "an earlier day"}.` };
     }
-    return { revalidate: [`/clubs/${club.slug}`, `/clubs/${club.slug}/safety`, `/clubs/${club.slug}/safety/bulletins/${bulletin.id}`] };
+    return { refresh: true };
   },
 });

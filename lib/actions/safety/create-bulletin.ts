@@ -65,9 +65,9 @@ export const createBulletin = clubAction({
       const base = `/clubs/${club.slug}/safety`;
       if (input.intent === "publish") {
         const { recipients } = publishBulletinInTx(tx, ctx, row!);
-        return { message: `Published and sent to ${recipients} ${recipients === 1 ? "member" : "members"}.`, data: { bulletinId: id }, revalidate: [base, `/clubs/${club.slug}`], redirectTo: `${base}/bulletins/${id}?published=${recipients}` };
+        return { message: `Published and sent to ${recipients} ${recipients === 1 ? "member" : "members"}.`, data: { bulletinId: id }, refresh: true, redirectTo: `${base}/bulletins/${id}?published=${recipients}` };
       }
-      return { message: "Draft saved. Nothing was sent yet.", data: { bulletinId: id }, revalidate: [base], redirectTo: `${base}/bulletins/${id}?saved=draft` };
+      return { message: "Draft saved. Nothing was sent yet.", data: { bulletinId: id }, refresh: true, redirectTo: `${base}/bulletins/${id}?saved=draft` };
     });
   },
   after: (_ctx, input) => {

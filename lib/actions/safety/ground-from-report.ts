@@ -9,7 +9,6 @@ import { writeAudit } from "@/lib/server/audit";
 import { resolveClubContext } from "@/lib/server/club-context";
 import { canTriageReports } from "@/lib/safety/report-access";
 import { groundFromReportSchema } from "@/lib/validation/safety";
-import { revalidatePath } from "next/cache";
 import { can } from "@/permissions";
 import { logError } from "@/lib/server/log";
 
@@ -55,8 +54,8 @@ export async function groundFromReport(_prev: ActionState, formData: FormData): 
     });
   } catch (error) {
     logError("safety", "grounding issued but not linked to the report", error);
-    return { ok: true, message: "The aircraft is grounded and members are being told, but the link to this report could not be saved.", fieldErrors: {} };
+    return { ok: true, message: "The aircraft is grounded and members are being told, but the link to this report could not be saved.", fieldErrors: {}, refresh: true };
   }
-  revalidatePath(`/clubs/${ctx.club.slug}/safety/reports/${report.id}`);
-  return { ok: true, message: issued.message, fieldErrors: {}, data: { noticeId } };
+  // The answer first; the form's hook then refreshes the report's page (actions never revalidate).
+  return { ok: true, message: issued.message, fieldErrors: {}, data: { noticeId }, refresh: true };
 }

@@ -14,8 +14,7 @@ export const publishBulletin = clubAction({
     const draft = getBulletin(tx, ctx.club.id, input.bulletinId);
     if (!draft) throw new ActionError("That bulletin was not found.", {}, "not_found");
     const { recipients } = publishBulletinInTx(tx, ctx, draft);
-    const base = `/clubs/${ctx.club.slug}`;
-    return { message: `Published and sent to ${recipients} ${recipients === 1 ? "member" : "members"}.`, revalidate: [base, `${base}/safety`, `${base}/safety/bulletins/${draft.id}`] };
+    return { message: `Published and sent to ${recipients} ${recipients === 1 ? "member" : "members"}.`, refresh: true };
   },
   after: () => kickOutbox(),
 });

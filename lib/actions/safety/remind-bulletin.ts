@@ -41,7 +41,7 @@ export const remindBulletin = clubAction({
     );
     tx.update(bulletins).set({ lastRemindedAt: now }).where(and(eq(bulletins.clubId, club.id), eq(bulletins.id, bulletin.id))).run();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "bulletin.remind", subjectType: "Bulletin", subjectId: bulletin.id, after: { recipients: outstanding.length } });
-    return { message: `Reminder queued for ${outstanding.length} ${outstanding.length === 1 ? "member" : "members"}.`, revalidate: [`/clubs/${club.slug}/safety/bulletins/${bulletin.id}`] };
+    return { message: `Reminder queued for ${outstanding.length} ${outstanding.length === 1 ? "member" : "members"}.`, refresh: true };
   },
   after: () => kickOutbox(),
 });

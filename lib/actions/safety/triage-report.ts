@@ -26,6 +26,6 @@ export const triageReport = clubAction({
     if (moved.changes === 0) throw new ActionError("Someone else changed this report just now; reload and try again.", {}, "conflict");
     tx.insert(safetyReportEvents).values({ clubId: club.id, reportId: report.id, actorId: user.id, kind: "status", fromStatus: report.status, toStatus: input.toStatus, note: input.note ?? null }).run();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "safety_report.triage", subjectType: "SafetyReport", subjectId: report.id, before: { status: report.status }, after: { status: input.toStatus } });
-    return { message: `Report marked "${REPORT_STATUS_LABELS[input.toStatus]}".`, revalidate: [`/clubs/${club.slug}/safety/reports`, `/clubs/${club.slug}/safety/reports/${report.id}`] };
+    return { message: `Report marked "${REPORT_STATUS_LABELS[input.toStatus]}".`, refresh: true };
   },
 });

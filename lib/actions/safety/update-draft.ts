@@ -41,9 +41,9 @@ export const updateDraft = clubAction({
       const base = `/clubs/${club.slug}/safety`;
       if (input.intent === "publish") {
         const { recipients } = publishBulletinInTx(tx, ctx, row);
-        return { message: `Published and sent to ${recipients} ${recipients === 1 ? "member" : "members"}.`, revalidate: [base, `/clubs/${club.slug}`], redirectTo: `${base}/bulletins/${row.id}?published=${recipients}` };
+        return { message: `Published and sent to ${recipients} ${recipients === 1 ? "member" : "members"}.`, refresh: true, redirectTo: `${base}/bulletins/${row.id}?published=${recipients}` };
       }
-      return { message: "Draft saved. Nothing was sent yet.", revalidate: [base, `${base}/bulletins/${row.id}`] };
+      return { message: "Draft saved. Nothing was sent yet.", refresh: true };
     });
   },
   after: (_ctx, input) => {

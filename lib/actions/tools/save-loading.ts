@@ -1,7 +1,6 @@
 "use server";
 import { getWeightBalanceProfile, saveBookingLoading, toLoadingProfile } from "@/db/queries/tools-wb";
 import { loadBookingForParty } from "@/lib/actions/bookings/booking-access";
-import { bookingPaths } from "@/lib/actions/bookings/paths";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { computeLoading } from "@/lib/bookings/loading";
@@ -41,7 +40,7 @@ export const saveLoading = clubAction({
     return {
       message: result.problems.length ? `Saved, but out of limits: ${result.problems.join(" ")}` : "Saved: within the envelope and every limit at takeoff and at landing.",
       data: { problems: result.problems },
-      revalidate: [...bookingPaths(club.slug, booking.id), `/clubs/${club.slug}/bookings/${booking.id}/weight-balance`],
+      refresh: true,
     };
   },
 });

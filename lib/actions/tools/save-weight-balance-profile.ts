@@ -39,6 +39,6 @@ export const saveWeightBalanceProfileAction = clubAction({
     };
     const profileId = saveWeightBalanceProfile(tx, club.id, plane.id, values);
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "weight-balance.profile.update", subjectType: "Aircraft", subjectId: plane.id, before: before ?? null, after: values });
-    return { data: { profileId }, revalidate: [`/clubs/${club.slug}/tools`, `/clubs/${club.slug}/tools/aircraft/${plane.id}`] };
+    return { data: { profileId }, refresh: true };
   },
 });

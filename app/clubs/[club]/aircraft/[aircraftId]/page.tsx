@@ -35,9 +35,8 @@ function Section({ id, title, children }: { id: string; title: string; children:
   );
 }
 
-export default async function AircraftPage({ params, searchParams }: { params: Promise<{ club: string; aircraftId: string }>; searchParams?: Promise<{ reported?: string }> }) {
+export default async function AircraftPage({ params }: { params: Promise<{ club: string; aircraftId: string }> }) {
   const { club: slug, aircraftId } = await params;
-  const { reported } = (await searchParams) ?? {};
   const { db, club, ability } = await authorizePage(slug, ["read", "Aircraft"]);
   const plane = getAircraft(db, club.id, aircraftId);
   const entry = plane ? getAircraftStatusEntry(db, club, plane.id) : undefined;
@@ -92,11 +91,6 @@ export default async function AircraftPage({ params, searchParams }: { params: P
       </div>
 
       <Section id="report" title="Report a squawk">
-        {reported && open.some((s) => s.id === reported) ? (
-          <p role="status" className="mb-3 rounded border border-go-600 bg-go-100 px-3 py-2 text-sm text-go-800">
-            Squawk reported: &ldquo;{open.find((s) => s.id === reported)!.description}&rdquo;. It is on the list below, and maintenance sees it on the flight line.
-          </p>
-        ) : null}
         <div className="card">{may.report ? <ReportSquawkForm slug={club.slug} aircraftId={plane.id} registration={plane.registration} /> : <p className="text-sm text-ink-500">{explainDenied("create", "Squawk")}</p>}</div>
       </Section>
 

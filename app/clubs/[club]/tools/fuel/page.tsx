@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
-import { CheckboxField } from "@/components/fleet/form-bits";
+import { CheckboxField, Field } from "@/components/ui/field";
 import { buttonClass } from "@/components/ui/button";
-import { Field } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { zodFieldErrors } from "@/lib/actions/create-action";
