@@ -1,14 +1,17 @@
--- Club data version: one counter per club, bumped in the same transaction by every write to a
--- table the club's cached reads depend on (the flight line and the due lists read aircraft,
--- inspection items and completions, open squawks and grounding notices; bookings and
--- memberships are counted too). The bump is made by triggers, so no write path can forget it;
--- readers compare the version (one primary-key read) with the one their snapshot was built at.
+-- Club data version: counters per club, bumped in the same transaction by every write to a
+-- table the club's cached reads depend on, by triggers, so that no write path can forget it.
+-- `version` counts what the flight line, the due lists and the club's people read: aircraft,
+-- flights, inspection items and completions, squawks, grounding notices, memberships and the
+-- club row itself (time zone, settings). `bookings_version` counts bookings apart: they change
+-- far more often and the flight line never reads them, so a booking leaves its snapshot valid.
+-- Readers compare the version (one primary-key read) with the one their snapshot was built at.
 CREATE TABLE `club_data_version` (
 	`club_id` text PRIMARY KEY NOT NULL,
-	`version` integer NOT NULL DEFAULT 0
+	`version` integer NOT NULL DEFAULT 0,
+	`bookings_version` integer NOT NULL DEFAULT 0
 ) WITHOUT ROWID;
 --> statement-breakpoint
-INSERT INTO `club_data_version` (`club_id`, `version`) SELECT `id`, 1 FROM `clubs`;
+INSERT INTO `club_data_version` (`club_id`, `version`, `bookings_version`) SELECT `id`, 1, 1 FROM `clubs`;
 --> statement-breakpoint
 CREATE TRIGGER `aircraft_bump_club_version_insert` AFTER INSERT ON `aircraft`
 BEGIN
@@ -118,24 +121,6 @@ BEGIN
     ON CONFLICT (club_id) DO UPDATE SET version = version + 1;
 END;
 --> statement-breakpoint
-CREATE TRIGGER `bookings_bump_club_version_insert` AFTER INSERT ON `bookings`
-BEGIN
-  INSERT INTO club_data_version (club_id, version) VALUES (NEW.club_id, 1)
-    ON CONFLICT (club_id) DO UPDATE SET version = version + 1;
-END;
---> statement-breakpoint
-CREATE TRIGGER `bookings_bump_club_version_update` AFTER UPDATE ON `bookings`
-BEGIN
-  INSERT INTO club_data_version (club_id, version) VALUES (NEW.club_id, 1)
-    ON CONFLICT (club_id) DO UPDATE SET version = version + 1;
-END;
---> statement-breakpoint
-CREATE TRIGGER `bookings_bump_club_version_delete` AFTER DELETE ON `bookings`
-BEGIN
-  INSERT INTO club_data_version (club_id, version) VALUES (OLD.club_id, 1)
-    ON CONFLICT (club_id) DO UPDATE SET version = version + 1;
-END;
---> statement-breakpoint
 CREATE TRIGGER `memberships_bump_club_version_insert` AFTER INSERT ON `memberships`
 BEGIN
   INSERT INTO club_data_version (club_id, version) VALUES (NEW.club_id, 1)
@@ -152,6 +137,24 @@ CREATE TRIGGER `memberships_bump_club_version_delete` AFTER DELETE ON `membershi
 BEGIN
   INSERT INTO club_data_version (club_id, version) VALUES (OLD.club_id, 1)
     ON CONFLICT (club_id) DO UPDATE SET version = version + 1;
+END;
+--> statement-breakpoint
+CREATE TRIGGER `bookings_bump_club_version_insert` AFTER INSERT ON `bookings`
+BEGIN
+  INSERT INTO club_data_version (club_id, bookings_version) VALUES (NEW.club_id, 1)
+    ON CONFLICT (club_id) DO UPDATE SET bookings_version = bookings_version + 1;
+END;
+--> statement-breakpoint
+CREATE TRIGGER `bookings_bump_club_version_update` AFTER UPDATE ON `bookings`
+BEGIN
+  INSERT INTO club_data_version (club_id, bookings_version) VALUES (NEW.club_id, 1)
+    ON CONFLICT (club_id) DO UPDATE SET bookings_version = bookings_version + 1;
+END;
+--> statement-breakpoint
+CREATE TRIGGER `bookings_bump_club_version_delete` AFTER DELETE ON `bookings`
+BEGIN
+  INSERT INTO club_data_version (club_id, bookings_version) VALUES (OLD.club_id, 1)
+    ON CONFLICT (club_id) DO UPDATE SET bookings_version = bookings_version + 1;
 END;
 --> statement-breakpoint
 CREATE TRIGGER `clubs_bump_club_version_update` AFTER UPDATE ON `clubs`

@@ -131,16 +131,23 @@ describe("flight-line snapshot", () => {
   it("a write rolled back leaves the version and the snapshot as they were", async () => {
     await expectSnapshotFresh("before a rolled-back write");
     const before = version();
+    const entryBefore = getAircraftStatusEntry(db(), clubBySlug(CLUB), planeId)!;
     expect(() =>
       db().transaction((tx) => {
-        tx.update(squawks).set({ triage: "grounding" }).where(eq(squawks.aircraftId, planeId)).run();
-        // Read inside the transaction: computed fresh, not cached.
-        getFlightLine(tx as never, clubBySlug(CLUB));
+        tx.insert(groundingNotices).values({ clubId: clubBySlug(CLUB).id, aircraftId: planeId, category: "safety", reason: "Snapshot test: rolled back", effectiveAt: new Date(Date.now() - 1_000), issuedById: signInAs("maintenance@hangarline.test")!.id }).run();
+        // Read inside the transaction: its own write shows (the kept snapshot no longer holds there).
+        const club = clubBySlug(CLUB);
+        const inside = getAircraftStatusEntry(tx as never, club, planeId)!;
+        expect(inside).not.toEqual(entryBefore);
+        expect(inside.reasons.filter((r) => r.grounding).length).toBeGreaterThan(entryBefore.reasons.filter((r) => r.grounding).length);
+        const at = new Date();
+        expect(getFlightLine(tx as never, club, at)).toEqual(computeFlightLine(tx as never, club, at));
         throw new Error("roll back");
       }),
     ).toThrow("roll back");
     expect(version()).toBe(before);
     await expectSnapshotFresh("after a rolled-back write");
+    expect(getAircraftStatusEntry(db(), clubBySlug(CLUB), planeId)).toEqual(entryBefore);
   });
 
   it("the snapshot is keyed by the club's date", () => {
