@@ -84,6 +84,10 @@ export async function run({ measure }: BenchTools): Promise<BenchResult[]> {
     const count = (sqlite.prepare("SELECT count(*) n FROM bookings").get() as { n: number }).n;
     const note = `${count} bookings on ${fleet.length} aircraft, ${MEMBERS} members (seeded in ${((performance.now() - t0) / 1000).toFixed(1)} s)`;
 
+    // The booking form's page shows the fleet's statuses first (the flight line), as a member
+    // sees them before booking; the guards then read the club's kept records.
+    getFlightLine(db, club!);
+
     // Each sample books a free hour in the gap after one future booking, on the next aircraft.
     const booker = memberIds[7]!;
     const ctx = { club: club!, user: { id: booker, email: "member7@bench.test", name: "Member 7", platformRole: null }, ability: defineAbilityFor({ userId: booker, roles: ["member"] }) };
