@@ -36,7 +36,7 @@ export async function run({ measure }: BenchTools): Promise<BenchResult[]> {
   const { defineAbilityFor } = await import("@/permissions");
   const { createBookingInTx } = await import("@/lib/actions/bookings/booking-core");
   const { createBookingSchema } = await import("@/lib/validation/bookings");
-  const { listBookingsInRange, listSheetBookings } = await import("@/db/queries/bookings");
+  const { listBookingsInRange, listSheetBookings, sheetBookingsQuery } = await import("@/db/queries/bookings");
   const { listAircraft } = await import("@/db/queries/fleet");
   const { getFlightLine } = await import("@/db/queries/fleet-status");
   const { viewRange } = await import("@/lib/actions/bookings/range");
@@ -126,6 +126,10 @@ export async function run({ measure }: BenchTools): Promise<BenchResult[]> {
       const range = viewRange(club!, "week", undefined);
       listSheetBookings(db, club!.id, range.from, range.to);
     }, { samples: 50 });
+    const range = viewRange(club!, "week", undefined);
+    const q = sheetBookingsQuery(db, club!.id, range.from, range.to).toSQL();
+    const plan = sqlite.prepare(`EXPLAIN QUERY PLAN ${q.sql}`).all(...q.params.map((p) => (p instanceof Date ? p.getTime() : p))) as { detail: string }[];
+    listResult.note = `query plan: ${plan.map((r) => r.detail).join("; ")}`;
     return [createResult, weekResult, statusResult, listResult];
   } finally {
     db.$client.close();
