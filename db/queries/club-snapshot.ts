@@ -47,10 +47,11 @@ export function clubDataVersion(db: Db | Tx, clubId: string): number {
 function versionOn(client: Database.Database, clubId: string): number {
   let read = versionReads.get(client);
   if (!read) {
-    read = client.prepare("SELECT version FROM club_data_version WHERE club_id = ?").pluck();
+    read = client.prepare("SELECT version FROM club_data_version WHERE club_id = ?");
     versionReads.set(client, read);
   }
-  return (read.get(clubId) as number | undefined) ?? 0;
+  // The connection keeps one statement per SQL text: set the result mode on every use.
+  return (read.pluck(true).get(clubId) as number | undefined) ?? 0;
 }
 
 function holds(hit: Entry | undefined, version: number, key: string, nowMs: number): hit is Entry {

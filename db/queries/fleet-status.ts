@@ -151,7 +151,7 @@ export function loadFleetRecords(db: Db, clubId: string, aircraftId?: string): F
   if (fleet.length === 0) return { aircraft: [], items: [], completions: [], squawks: [], notices: [] };
   const ids = new Set(fleet.map((a) => a.id));
   const items = q.items.all(params);
-  const completions = q.completions.all({ ...params, chainIds: JSON.stringify(chainItemIds(items)) }) as FleetCompletionRecord[];
+  const completions = q.completions.raw(false).all({ ...params, chainIds: JSON.stringify(chainItemIds(items)) }) as FleetCompletionRecord[];
   // Open squawks of the fleet in service (a retired aircraft's are not on the line).
   const openSquawks = q.squawks.all(params).filter((s) => ids.has(s.aircraftId));
   const notices = q.notices.all(params);
