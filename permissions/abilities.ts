@@ -80,12 +80,21 @@ export function defineAbilityFor({ userId, roles }: AbilityInput): AppAbility {
   return builder.build();
 }
 
+// The table never changes while the process runs: one probe ability per role, and each
+// question's answer, are worked out once.
+let probes: Map<Role, AppAbility> | null = null;
+const allowedBy = new Map<string, Role[]>();
+
 /** Roles that would allow `action` on `subject` (type-level), for "why is this disabled". */
 export function rolesThatAllow(action: Action, subject: SubjectName): Role[] {
-  return ROLES.filter((role) => {
-    const ability = defineAbilityFor({ userId: "__probe__", roles: [role] });
-    return ability.rulesFor(action, subject).some((r) => !r.inverted);
-  });
+  const key = `${action}\u0000${subject}`;
+  let roles = allowedBy.get(key);
+  if (!roles) {
+    probes ??= new Map(ROLES.map((role) => [role, defineAbilityFor({ userId: "__probe__", roles: [role] })]));
+    roles = ROLES.filter((role) => probes!.get(role)!.rulesFor(action, subject).some((r) => !r.inverted));
+    allowedBy.set(key, roles);
+  }
+  return [...roles];
 }
 
 /** Plain-words reason shown beside a hidden or disabled control. */

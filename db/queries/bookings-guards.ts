@@ -13,7 +13,7 @@ import { memberArrears } from "@/lib/ledger/arrears";
 import { formatMoney } from "@/lib/money";
 import { normalizeTypeGroup } from "@/lib/safety/audience";
 import { getMemberCurrency } from "./currency";
-import { loadFleetRecords } from "./fleet-status";
+import { loadAircraftRecords } from "./fleet-status";
 import { countActiveBookingsBetween } from "./bookings";
 import { findStandingCheckout } from "./safety-checkouts";
 
@@ -48,7 +48,7 @@ function statusOf(records: FleetRecords, record: FleetAircraftRecord, today: str
 }
 
 export function aircraftStatusNowAndAtEnd(db: Handle, club: Club, plane: Aircraft, window: { startsAt: Date; endsAt: Date }, now: Date, excludeBookingId?: string) {
-  const records = loadFleetRecords(db as Db, club.id, plane.id);
+  const records = loadAircraftRecords(db as Db, club.id, plane.id, now);
   const record = records.aircraft[0];
   const soon = { days: club.settings.dueSoonDays, hours: club.settings.dueSoonHours };
   const average = aircraftAverageFlightHours(db, club.id, plane);

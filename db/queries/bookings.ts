@@ -142,6 +142,11 @@ export type SheetRow = { id: string; aircraftId: string; userId: string; instruc
 
 /** The fleet sheet's narrow read: only what a block on the track shows. */
 export function listSheetBookings(db: Handle, clubId: string, from: Date, to: Date): SheetRow[] {
+  return sheetBookingsQuery(db, clubId, from, to).all();
+}
+
+/** The week view's query itself (its plan is checked: the (club_id, starts_at) index, no scan). */
+export function sheetBookingsQuery(db: Handle, clubId: string, from: Date, to: Date) {
   return db
     .select({
       id: bookings.id, aircraftId: bookings.aircraftId, userId: bookings.userId, instructorId: bookings.instructorId, startsAt: bookings.startsAt, endsAt: bookings.endsAt, status: bookings.status,
@@ -152,6 +157,5 @@ export function listSheetBookings(db: Handle, clubId: string, from: Date, to: Da
     .innerJoin(member, eq(member.id, bookings.userId))
     .leftJoin(instructor, eq(instructor.id, bookings.instructorId))
     .where(and(eq(bookings.clubId, clubId), lt(bookings.startsAt, to), gt(bookings.startsAt, new Date(from.getTime() - MAX_BOOKING_MS)), gt(bookings.endsAt, from), ne(bookings.status, "cancelled")))
-    .orderBy(asc(bookings.startsAt))
-    .all();
+    .orderBy(asc(bookings.startsAt));
 }

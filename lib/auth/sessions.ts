@@ -1,5 +1,5 @@
 import { randomUUID } from "node:crypto";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { revokedSessions, users } from "@/db/schema";
 
@@ -20,15 +20,33 @@ export function newSessionClaims(now = new Date()): { sid: string; authAt: numbe
   return { sid: randomUUID(), authAt: now.getTime() };
 }
 
+// Asked on every request: the two reads are prepared once per connection (its query session,
+// shared by the handle and its transactions) and reused.
+function buildChecks(db: Db) {
+  return {
+    user: db.select({ disabledAt: users.disabledAt, validAfter: users.sessionsValidAfter }).from(users).where(eq(users.id, sql.placeholder("id"))).prepare(),
+    revoked: db.select({ sid: revokedSessions.sessionId }).from(revokedSessions).where(eq(revokedSessions.sessionId, sql.placeholder("sid"))).prepare(),
+  };
+}
+const preparedChecks = new WeakMap<object, ReturnType<typeof buildChecks>>();
+
+function checks(db: Db) {
+  const session = (db as unknown as { session?: object }).session ?? db;
+  let c = preparedChecks.get(session);
+  if (!c) preparedChecks.set(session, (c = buildChecks(db)));
+  return c;
+}
+
 /** True while the session's account is active and nothing has revoked the session. */
 export function isSessionCurrent(db: Db, claims: SessionClaims): boolean {
   const { sub, sid, authAt } = claims;
   // A session from before revocation existed carries no id: it is asked to sign in again.
   if (typeof sub !== "string" || typeof sid !== "string" || typeof authAt !== "number") return false;
-  const user = db.select({ disabledAt: users.disabledAt, validAfter: users.sessionsValidAfter }).from(users).where(eq(users.id, sub)).get();
+  const q = checks(db);
+  const user = q.user.get({ id: sub });
   if (!user || user.disabledAt) return false;
   if (user.validAfter && authAt <= user.validAfter.getTime()) return false;
-  const revoked = db.select({ sid: revokedSessions.sessionId }).from(revokedSessions).where(eq(revokedSessions.sessionId, sid)).get();
+  const revoked = q.revoked.get({ sid });
   return !revoked;
 }
 

@@ -89,13 +89,16 @@ export function compareIsoDates(a: IsoDate, b: IsoDate): number {
 }
 
 /** Calendar date of an instant in a time zone (IANA name), e.g. the club's "today". */
+// Making an Intl.DateTimeFormat costs far more than using one: one per time zone, kept.
+const dateFormats = new Map<string, Intl.DateTimeFormat>();
+
 export function isoDateInTimeZone(instant: Date, timeZone: string): IsoDate {
-  const parts = new Intl.DateTimeFormat("en-CA", {
-    timeZone,
-    year: "numeric",
-    month: "2-digit",
-    day: "2-digit",
-  }).formatToParts(instant);
+  let format = dateFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" });
+    dateFormats.set(timeZone, format);
+  }
+  const parts = format.formatToParts(instant);
   const get = (t: string) => parts.find((p) => p.type === t)?.value ?? "";
   return `${get("year")}-${get("month")}-${get("day")}`;
 }

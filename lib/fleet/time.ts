@@ -1,17 +1,16 @@
 // Club-local wall-clock times ↔ UTC instants. The database keeps instants; people type and read
 // times in the club's own time zone.
 
+// Making an Intl.DateTimeFormat costs far more than using one: one per time zone, kept.
+const offsetFormats = new Map<string, Intl.DateTimeFormat>();
+
 function offsetMs(instant: number, timeZone: string): number {
-  const parts = new Intl.DateTimeFormat("en-US", {
-    timeZone,
-    hourCycle: "h23",
-    year: "numeric",
-    month: "2-digit",
-    day: "2-digit",
-    hour: "2-digit",
-    minute: "2-digit",
-    second: "2-digit",
-  }).formatToParts(new Date(instant));
+  let format = offsetFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat("en-US", { timeZone, hourCycle: "h23", year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", second: "2-digit" });
+    offsetFormats.set(timeZone, format);
+  }
+  const parts = format.formatToParts(new Date(instant));
   const get = (t: string) => Number(parts.find((p) => p.type === t)?.value ?? "0");
   const asUtc = Date.UTC(get("year"), get("month") - 1, get("day"), get("hour"), get("minute"), get("second"));
   return asUtc - Math.floor(instant / 1000) * 1000;
