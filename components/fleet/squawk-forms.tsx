@@ -9,9 +9,11 @@ import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
 import { triageSquawk } from "@/lib/actions/fleet/triage-squawk";
 import { CheckboxField, FileField, TextAreaField } from "./form-bits";
 import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
+import { rampAction } from "@/components/ramp/ramp-action";
+import { reportSquawkSchema } from "@/lib/validation/fleet";
 
 export function ReportSquawkForm({ slug, aircraftId, registration }: { slug: string; aircraftId: string; registration: string }) {
-  const [state, action] = useActionState(reportSquawk, initialActionState);
+  const [state, action] = useActionState(rampAction("squawk", reportSquawk, reportSquawkSchema), initialActionState);
   return (
     <form action={action} noValidate aria-label={`Report a squawk on ${registration}`} key={state.ok ? `${state.message}-${Date.now()}` : "report"}>
       <IdempotencyKeyField answer={state} />

@@ -8,6 +8,8 @@ import { FormMessage } from "@/components/ui/form-message";
 import { initialActionState } from "@/lib/actions/action-state";
 import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
 import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
+import { rampAction } from "@/components/ramp/ramp-action";
+import { preflightRecordSchema } from "@/lib/validation/tools";
 
 type Item = { id: string; section: string; label: string; kind: "check" | "document" };
 
@@ -21,7 +23,7 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
   oilMaximum: number | null;
   units: { fuel: string; oil: string };
 }) {
-  const { state, onSubmit, pending } = useKeptForm(recordPreflight, initialActionState);
+  const { state, onSubmit, pending } = useKeptForm(rampAction("preflight", recordPreflight, preflightRecordSchema), initialActionState);
   const [results, setResults] = useState<Record<string, "ok" | "finding">>({});
   const e = state.fieldErrors;
   const sections = [...new Set(items.map((i) => i.section))];

@@ -1,11 +1,9 @@
-import { signOutAction } from "@/lib/actions/auth/sign-out";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
+import { SignOutForm } from "@/components/ramp/sign-out-form";
 
 export function SignOutButton() {
   return (
-    <form action={signOutAction}>
-      <IdempotencyKeyField />
+    <SignOutForm>
       <button type="submit" className="rounded px-3 py-2 text-sm text-sand-50 underline-offset-2 hover:underline">Sign out</button>
-    </form>
+    </SignOutForm>
   );
 }
