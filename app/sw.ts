@@ -23,14 +23,28 @@ function keepable(response: Response): boolean {
   return response.status === 200 && !response.redirected && response.type === "basic" && (response.headers.get("content-type") ?? "").startsWith("text/html");
 }
 
+/**
+ * Bumped on every forget: a page fetched before it (a keep still under way when the person signed
+ * out) is not put back afterwards.
+ */
+let generation = 0;
+/** Puts under way: a forget waits for them, then deletes, so none lands after it. */
+const putting = new Set<Promise<void>>();
+
 async function forgetPages(): Promise<void> {
+  generation += 1;
+  await Promise.allSettled([...putting]);
   await caches.delete(RAMP_PAGES_CACHE);
 }
 
 const rampPagePlugin: SerwistPlugin = {
   // One entry per page, whatever its query string ("?reported=…" is a confirmation, not a page).
   cacheKeyWillBeUsed: async ({ request }) => pageCacheKey(request.url, self.location.origin) ?? request.url,
-  cacheWillUpdate: async ({ response }) => (keepable(response) ? response : null),
+  requestWillFetch: async ({ request, state }) => {
+    if (state) state.generation = generation;
+    return request;
+  },
+  cacheWillUpdate: async ({ response, state }) => (keepable(response) && (state?.generation ?? generation) === generation ? response : null),
   fetchDidSucceed: async ({ response }) => {
     // The session ended and the server sent the sign-in page instead: what was kept is no longer this person's to see.
     if (response.redirected && isSignedOutPath(new URL(response.url).pathname)) await forgetPages();
@@ -70,17 +84,26 @@ self.addEventListener("fetch", (event) => {
 async function keepPage(url: string): Promise<void> {
   const key = pageCacheKey(url, self.location.origin);
   if (!key) return;
+  const startedIn = generation;
   const response = await fetch(key, { credentials: "same-origin", redirect: "follow", headers: { Accept: "text/html" } });
   if (!keepable(response)) {
     if (response.redirected && isSignedOutPath(new URL(response.url).pathname)) await forgetPages();
     return;
   }
-  await (await caches.open(RAMP_PAGES_CACHE)).put(key, response);
+  if (startedIn !== generation) return;
+  const put = caches.open(RAMP_PAGES_CACHE).then((cache) => (startedIn === generation ? cache.put(key, response) : undefined));
+  putting.add(put);
+  try {
+    await put;
+  } finally {
+    putting.delete(put);
+  }
 }
 
 self.addEventListener("message", (event) => {
   const message = event.data as RampMessage | undefined;
-  if (!message || typeof message !== "object" || event.origin !== self.location.origin) return;
+  // Only our own pages can reach a worker (same origin by construction); the URL is checked again in keepPage.
+  if (!message || typeof message !== "object") return;
   if (message.type === "ramp:keep-page" && typeof message.url === "string") event.waitUntil(keepPage(message.url).catch(() => undefined));
   else if (message.type === "ramp:forget-pages") event.waitUntil(forgetPages());
 });

@@ -12,8 +12,11 @@ import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 import { rampAction } from "@/components/ramp/ramp-action";
 import { reportSquawkSchema } from "@/lib/validation/fleet";
 
+// Ramp mode: with no signal the squawk (photos included) waits on the device and is sent later.
+const reportSquawkOnRamp = rampAction("squawk", reportSquawk, reportSquawkSchema);
+
 export function ReportSquawkForm({ slug, aircraftId, registration }: { slug: string; aircraftId: string; registration: string }) {
-  const [state, action] = useActionState(rampAction("squawk", reportSquawk, reportSquawkSchema), initialActionState);
+  const [state, action] = useActionState(reportSquawkOnRamp, initialActionState);
   return (
     <form action={action} noValidate aria-label={`Report a squawk on ${registration}`} key={state.ok ? `${state.message}-${Date.now()}` : "report"}>
       <IdempotencyKeyField answer={state} />

@@ -13,6 +13,9 @@ import { preflightRecordSchema } from "@/lib/validation/tools";
 
 type Item = { id: string; section: string; label: string; kind: "check" | "document" };
 
+// Ramp mode: with no signal the record (photos included) waits on the device and is sent later.
+const recordPreflightOnRamp = rampAction("preflight", recordPreflight, preflightRecordSchema);
+
 export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMinimum, oilMaximum, units }: {
   slug: string;
   bookingId: string;
@@ -23,7 +26,7 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
   oilMaximum: number | null;
   units: { fuel: string; oil: string };
 }) {
-  const { state, onSubmit, pending } = useKeptForm(rampAction("preflight", recordPreflight, preflightRecordSchema), initialActionState);
+  const { state, onSubmit, pending } = useKeptForm(recordPreflightOnRamp, initialActionState);
   const [results, setResults] = useState<Record<string, "ok" | "finding">>({});
   const e = state.fieldErrors;
   const sections = [...new Set(items.map((i) => i.section))];
