@@ -51,7 +51,8 @@ const withSerwist = withSerwistInit({
   register: false,
   reloadOnOnline: false,
   cacheOnNavigation: false,
-  disable: process.env.NODE_ENV !== "production",
+  // Off in `next dev` only (the browser tests build with NODE_ENV=test and need the worker).
+  disable: process.env.NODE_ENV === "development",
   // The icons and the offline page from public/ (the worker itself is never in its own list).
   globPublicPatterns: ["**/*.{png,svg,html,webmanifest}"],
   exclude: [/\.map$/, /^build-manifest\.json$/, /react-loadable-manifest\.json$/],

@@ -105,6 +105,9 @@ describe("ramp mode", () => {
     expect(stored.key).toMatch(/^[0-9a-f-]{36}$/); // with the form's idempotency key
     expect(readDb((db) => db.prepare("SELECT count(*) AS n FROM squawks WHERE description = ?").get(description) as { n: number }).n).toBe(0);
     await screenshot(page, "ramp-squawk-not-sent-yet-phone");
+    // As the phone shows it: the form's answer and the waiting count at the foot of the screen.
+    await form.getByRole("button", { name: "Report squawk" }).scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.resolve(import.meta.dirname, "../.artifacts/ramp-squawk-not-sent-yet-phone-viewport.png") });
 
     await context.setOffline(false);
     await page.getByRole("status").filter({ hasText: `Squawk sent: “${description}”` }).waitFor();
