@@ -6,7 +6,7 @@ import { createStore, del, entries as idbEntries, set, type UseStore } from "idb
 import type { ActionState } from "@/lib/actions/action-state";
 import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
-import { classifyAnswer, classifyFailure, rebuildFormData, sentMessage, toSend, type QueuedKind, type QueuedWrite, type SendOutcome } from "@/lib/ramp/queue";
+import { classifyAnswer, classifyFailure, rebuildFormData, retryDelayMs, sentMessage, toSend, type QueuedKind, type QueuedWrite, type SendOutcome } from "@/lib/ramp/queue";
 
 /** The one write path of each kind: the same server actions the forms call. */
 const SENDERS: Record<QueuedKind, (prev: ActionState, formData: FormData) => Promise<ActionState>> = {
@@ -22,6 +22,8 @@ let snapshot: RampSnapshot = { userId: null, entries: [], notices: [], online: t
 const listeners = new Set<() => void>();
 let store: UseStore | null = null;
 let flushing: Promise<void> | null = null;
+let retryTimer: ReturnType<typeof setTimeout> | null = null;
+let retryAttempt = 0;
 
 function idb(): UseStore {
   store ??= createStore("hangarline-ramp", "queue");
@@ -71,6 +73,19 @@ export function currentUserId(): string | null {
 export async function keep(entry: QueuedWrite): Promise<void> {
   await set(entry.id, entry, idb());
   update({ entries: [...snapshot.entries.filter((e) => e.id !== entry.id), entry] });
+  retryAttempt = 0;
+  scheduleRetry();
+}
+
+/** While something waits and the browser thinks it has signal (one bar), try again now and then. */
+function scheduleRetry() {
+  const userId = snapshot.userId;
+  if (retryTimer || !userId || navigator.onLine === false || toSend(snapshot.entries, userId).length === 0) return;
+  retryTimer = setTimeout(() => {
+    retryTimer = null;
+    retryAttempt += 1;
+    void flushQueue();
+  }, retryDelayMs(retryAttempt));
 }
 
 export async function dismiss(id: string): Promise<void> {
@@ -126,6 +141,9 @@ export function flushQueue(): Promise<void> {
       else await flushOnce();
     } finally {
       flushing = null;
+      const userId = snapshot.userId;
+      if (userId && toSend(snapshot.entries, userId).length === 0) retryAttempt = 0;
+      scheduleRetry();
     }
   })();
   return flushing;

@@ -16,7 +16,8 @@ function tellWorker(message: RampMessage) {
 /**
  * Ramp mode for one signed-in person on a club's pages: registers the service worker, asks it to
  * keep each ramp page this person opens (client-side navigation fetches no HTML it could keep),
- * sends what waits on the device when there is signal (on load and on `online`), and shows the
+ * sends what waits on the device when there is signal (on load, on `online`, on coming back to the
+ * app, and now and then while the browser claims signal it may not have), and shows the
  * queue's state in one status region at the foot of the screen.
  */
 export function RampMode({ userId }: { userId: string }) {
@@ -37,11 +38,17 @@ export function RampMode({ userId }: { userId: string }) {
       void flushQueue();
     };
     const offline = () => setOnline(false);
+    // Back to the app after the phone slept in a pocket: try what waits.
+    const visible = () => {
+      if (document.visibilityState === "visible") void flushQueue();
+    };
     window.addEventListener("online", online);
     window.addEventListener("offline", offline);
+    document.addEventListener("visibilitychange", visible);
     return () => {
       window.removeEventListener("online", online);
       window.removeEventListener("offline", offline);
+      document.removeEventListener("visibilitychange", visible);
     };
   }, [userId]);
 

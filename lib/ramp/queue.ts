@@ -160,3 +160,13 @@ export function classifyFailure(error: unknown): SendOutcome {
 export function isNetworkFailure(error: unknown): boolean {
   return error instanceof TypeError;
 }
+
+/**
+ * With one bar the browser still says it is online, so no `online` event will come: waiting entries
+ * are tried again after 15 s, 30 s, 1 min, then every 2 min (our own choice: soon enough to land
+ * while the pilot is still at the aircraft, sparse enough not to drain a phone on a weak signal).
+ */
+export function retryDelayMs(attempt: number): number {
+  const steps = [15_000, 30_000, 60_000];
+  return steps[Math.max(0, Math.floor(attempt))] ?? 120_000;
+}

@@ -2,7 +2,7 @@
 // No trade computation here: the expected values are this product's own wording and rules.
 import { describe, expect, it } from "vitest";
 import { isRampPage, isSignedOutPath, pageCacheKey } from "@/lib/ramp/pages";
-import { classifyAnswer, classifyFailure, fieldsToObject, newQueuedWrite, rebuildFormData, sentMessage, toSend, toStoredFields, waitingMessage, type QueuedWrite } from "@/lib/ramp/queue";
+import { classifyAnswer, classifyFailure, fieldsToObject, newQueuedWrite, rebuildFormData, retryDelayMs, sentMessage, toSend, toStoredFields, waitingMessage, type QueuedWrite } from "@/lib/ramp/queue";
 
 const KEY = "5d0c1f8e-3a4b-4c2d-9e8f-0a1b2c3d4e5f";
 
@@ -100,6 +100,13 @@ describe("reading the answer", () => {
     expect(classifyFailure(Object.assign(new Error("NEXT_REDIRECT"), { digest: "NEXT_REDIRECT;push;/clubs/x/aircraft/y?reported=z;307;" }))).toEqual({ kind: "sent" });
     expect(classifyFailure(new TypeError("Failed to fetch")).kind).toBe("retry");
     expect(classifyFailure(new Error("An unexpected response was received from the server.")).kind).toBe("retry");
+  });
+});
+
+describe("trying again with one bar", () => {
+  it("15 s, 30 s, 1 min, then every 2 min (our own choice)", () => {
+    expect([0, 1, 2, 3, 4, 50].map(retryDelayMs)).toEqual([15_000, 30_000, 60_000, 120_000, 120_000, 120_000]);
+    expect(retryDelayMs(-1)).toBe(15_000);
   });
 });
 
