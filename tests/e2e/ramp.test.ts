@@ -131,6 +131,37 @@ describe("ramp mode", () => {
     await page.context().close();
   });
 
+  it("a kept squawk the server refuses when the signal returns is shown with the reason, kept until dismissed, and written nowhere", async () => {
+    const page = await newPage("phone");
+    const context = page.context();
+    await signIn(page, PILOT);
+    await page.goto(`${CLUB}/flight-line`);
+    await page.locator(`article[data-registration="${REG}"]`).getByRole("link", { name: REG }).click();
+    await page.waitForURL(/\/aircraft\/[^/?]+$/);
+    const form = page.getByRole("form", { name: `Report a squawk on ${REG}` });
+    await form.getByLabel("What did you find?").waitFor();
+
+    await context.setOffline(true);
+    await page.waitForFunction(() => navigator.onLine === false);
+    // The aircraft is gone by the time it is sent (here: an id no club has), which only the server can know.
+    await form.locator("input[name=aircraftId]").evaluate((el) => ((el as HTMLInputElement).value = "00000000-0000-4000-8000-000000000000"));
+    const description = `Nav light lens cracked, left wing ${Date.now()}`;
+    await form.getByLabel("What did you find?").fill(description);
+    await form.getByRole("button", { name: "Report squawk" }).click();
+    await page.getByRole("status").filter({ hasText: "1 squawk not sent yet" }).waitFor();
+
+    await context.setOffline(false);
+    const refusal = page.getByRole("status").filter({ hasText: `Squawk “${description}” was not accepted: That aircraft was not found in this club.` });
+    await refusal.waitFor();
+    await page.reload();
+    await refusal.waitFor(); // still there after a reload: kept on the device, not dropped
+    await expect(page.getByRole("status").filter({ hasText: "not sent yet" }).count()).resolves.toBe(0); // and not sent again
+    await refusal.getByRole("button", { name: "Dismiss" }).click();
+    await refusal.waitFor({ state: "detached" });
+    expect(readDb((db) => db.prepare("SELECT count(*) AS n FROM squawks WHERE description = ?").get(description) as { n: number }).n).toBe(0);
+    await page.context().close();
+  });
+
   it("with the worker in control and no signal, the kept flight line opens; a page never kept says so; signing out forgets what was kept", async () => {
     const page = await newPage("phone");
     const context = page.context();
