@@ -30,6 +30,12 @@ export const OWN_CSP_ROUTES = [/^\/api\/clubs\/[^/]+\/uploads\/[^/]+\/?$/];
 /** For JSON, files and redirects from /api: nothing may run, load, or frame it. */
 export const API_CSP = "default-src 'none'; frame-ancestors 'none'; base-uri 'none'; form-action 'none'";
 
+/**
+ * For the service worker script (/sw.js, built from app/sw.ts): its own policy governs the worker.
+ * It runs no inline script and loads none (a nonce means nothing to a worker), and fetches only from us.
+ */
+export const WORKER_CSP = "default-src 'self'; script-src 'self'; connect-src 'self'; img-src 'self'; object-src 'none'; frame-ancestors 'none'; base-uri 'none'; form-action 'none'";
+
 export function newNonce(): string {
   const bytes = crypto.getRandomValues(new Uint8Array(16));
   return btoa(String.fromCharCode(...bytes));
@@ -110,6 +116,12 @@ export function middleware(request: NextRequest): NextResponse {
     if (refused) return refused;
     const res = NextResponse.next();
     if (!OWN_CSP_ROUTES.some((re) => re.test(path))) res.headers.set("Content-Security-Policy", API_CSP);
+    return res;
+  }
+
+  if (path === "/sw.js") {
+    const res = NextResponse.next();
+    res.headers.set("Content-Security-Policy", WORKER_CSP);
     return res;
   }
 

@@ -1,3 +1,5 @@
+import withSerwistInit from "@serwist/next";
+
 // Headers with one value for every response: pages, route handlers, redirects, 404s and the
 // build's static files. The Content-Security-Policy of pages and route handlers carries a
 // per-request nonce and is set in middleware.ts; static files, which middleware does not see,
@@ -41,4 +43,19 @@ const nextConfig = {
     ];
   },
 };
-export default nextConfig;
+// Ramp mode's service worker (app/sw.ts → public/sw.js, see DEVELOPERS.md "Ramp mode"). Registered by
+// components/ramp/ramp-mode.tsx in production builds only; `next dev` builds none.
+const withSerwist = withSerwistInit({
+  swSrc: "app/sw.ts",
+  swDest: "public/sw.js",
+  register: false,
+  reloadOnOnline: false,
+  cacheOnNavigation: false,
+  // Off in `next dev` only (the browser tests build with NODE_ENV=test and need the worker).
+  disable: process.env.NODE_ENV === "development",
+  // The icons and the offline page from public/ (the worker itself is never in its own list).
+  globPublicPatterns: ["**/*.{png,svg,html,webmanifest}"],
+  exclude: [/\.map$/, /^build-manifest\.json$/, /react-loadable-manifest\.json$/],
+});
+
+export default withSerwist(nextConfig);

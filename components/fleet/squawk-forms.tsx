@@ -7,9 +7,15 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { closeSquawk } from "@/lib/actions/fleet/close-squawk";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
 import { triageSquawk } from "@/lib/actions/fleet/triage-squawk";
+import { rampAction } from "@/components/ramp/ramp-action";
+import { reportSquawkSchema } from "@/lib/validation/fleet";
+
+// Ramp mode: with no signal the squawk (photos included) waits on the device and is sent later
+// through the same action, under the same idempotency key.
+const reportSquawkOnRamp = rampAction("squawk", reportSquawk, reportSquawkSchema);
 
 export function ReportSquawkForm({ slug, aircraftId, registration }: { slug: string; aircraftId: string; registration: string }) {
-  const form = useFormAction(reportSquawk);
+  const form = useFormAction(reportSquawkOnRamp);
   const { state } = form;
   return (
     <FormShell form={form} label={`Report a squawk on ${registration}`}>

@@ -5,8 +5,13 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { useState } from "react";
 import { CheckboxField, Field, FileField, TextAreaField } from "@/components/ui/field";
 import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
+import { rampAction } from "@/components/ramp/ramp-action";
+import { preflightRecordSchema } from "@/lib/validation/tools";
 
 type Item = { id: string; section: string; label: string; kind: "check" | "document" };
+
+// Ramp mode: with no signal the record (photos included) waits on the device and is sent later.
+const recordPreflightOnRamp = rampAction("preflight", recordPreflight, preflightRecordSchema);
 
 export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMinimum, oilMaximum, units }: {
   slug: string;
@@ -18,7 +23,7 @@ export function PreflightForm({ slug, bookingId, items, tanks, sumpPoints, oilMi
   oilMaximum: number | null;
   units: { fuel: string; oil: string };
 }) {
-  const form = useFormAction(recordPreflight);
+  const form = useFormAction(recordPreflightOnRamp);
   const { state } = form;
   const [results, setResults] = useState<Record<string, "ok" | "finding">>({});
   const e = state.fieldErrors;

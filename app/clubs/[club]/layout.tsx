@@ -4,6 +4,7 @@ import { clubNavItems } from "@/components/shell/nav-items";
 import { AbilityBoundary } from "@/components/ability-boundary";
 import { listClubsForUser } from "@/db/queries/clubs";
 import { requireClubContext } from "@/lib/server/club-context";
+import { RampMode } from "@/components/ramp/ramp-mode";
 
 export default async function ClubLayout({ children, params }: { children: ReactNode; params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
@@ -21,6 +22,7 @@ export default async function ClubLayout({ children, params }: { children: React
       >
         {children}
       </ClubShell>
+      <RampMode userId={ctx.user.id} />
     </AbilityBoundary>
   );
 }
