@@ -1,7 +1,7 @@
 "use client";
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
-import { forgetRampPages } from "@/components/ramp/sign-out-form";
+import { forgetRampPages } from "@/components/ramp/forget-pages";
 import { signOutAction } from "@/lib/actions/auth/sign-out";
 
 /** Signing out first forgets the pages this device kept for the ramp, then ends the session. */

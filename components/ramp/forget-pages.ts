@@ -1,7 +1,4 @@
 "use client";
-import type { ReactNode } from "react";
-import { signOutAction } from "@/lib/actions/auth/sign-out";
-import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
 import { RAMP_PAGES_CACHE, type RampMessage } from "@/lib/ramp/pages";
 
 /**
@@ -12,13 +9,4 @@ import { RAMP_PAGES_CACHE, type RampMessage } from "@/lib/ramp/pages";
 export async function forgetRampPages(): Promise<void> {
   if (typeof caches !== "undefined") await caches.delete(RAMP_PAGES_CACHE).catch(() => false);
   if ("serviceWorker" in navigator) navigator.serviceWorker.controller?.postMessage({ type: "ramp:forget-pages" } satisfies RampMessage);
-}
-
-export function SignOutForm({ children }: { children: ReactNode }) {
-  return (
-    <form action={signOutAction} onSubmit={() => void forgetRampPages()}>
-      <IdempotencyKeyField />
-      {children}
-    </form>
-  );
 }
