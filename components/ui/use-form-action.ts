@@ -1,6 +1,6 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { startTransition, useCallback, useEffect, useRef, useState, type FormEvent, type RefObject } from "react";
+import { useCallback, useEffect, useRef, useState, useTransition, type FormEvent, type RefObject } from "react";
 import { initialActionState, type ActionState } from "@/lib/actions/action-state";
 
 export type FormAction<R = unknown> = (prev: ActionState, formData: FormData) => Promise<ActionState<R>>;
@@ -17,6 +17,9 @@ export type FormActionHandle<R = unknown> = {
   /** Sends FormData without a form (a button that writes fixed values). */
   formAction: (formData: FormData) => Promise<ActionState<R>>;
 };
+
+/** How long a follow-up (navigation or refresh) may take before the page is loaded the plain way. */
+const FOLLOW_UP_PATIENCE_MS = 10_000;
 
 const NO_ANSWER: ActionState = {
   ok: false,
@@ -59,6 +62,49 @@ export function useFormAction<R = unknown>(action: FormAction<R>, options: { kee
   const busy = useRef(false);
   const opts = useRef(options);
   opts.current = options;
+  // The follow-up runs in its own transition, so that we can tell whether it ever committed.
+  const [followingUp, startFollowUp] = useTransition();
+  const followUpPending = useRef(false);
+  followUpPending.current = followingUp;
+  // A form the refreshed page no longer shows (a lifted notice's form) unmounts: its refresh landed.
+  const mounted = useRef(true);
+  const followUpSeq = useRef(0);
+  useEffect(() => {
+    mounted.current = true;
+    return () => {
+      mounted.current = false;
+    };
+  }, []);
+
+  /**
+   * The follow-up the answer asked for. It starts on a later task: Next's router queue still holds
+   * the server action's own entry when the answer arrives, and a navigation started then makes the
+   * router discard that entry, whose transition never settles. If the router still has not committed
+   * after FOLLOW_UP_PATIENCE_MS, the page is loaded the plain way (the answer was already shown).
+   */
+  const followUp = useCallback(
+    (answer: ActionState<R>) => {
+      const target = answer.ok && answer.redirectTo ? answer.redirectTo : null;
+      if (!target && !answer.refresh) return;
+      const seq = ++followUpSeq.current;
+      window.setTimeout(() => {
+        const path = target ? sameOriginPath(target) : null;
+        if (target && (!path || opts.current.fullPageLoad)) {
+          window.location.assign(target);
+          return;
+        }
+        startFollowUp(() => (path ? router.push(path) : router.refresh()));
+        window.setTimeout(() => {
+          const landed = path ? `${window.location.pathname}${window.location.search}${window.location.hash}` === path : !mounted.current || !followUpPending.current;
+          // Only for the latest follow-up, and never while another submission is on its way.
+          if (landed || seq !== followUpSeq.current || busy.current) return;
+          if (path) window.location.assign(path);
+          else window.location.reload();
+        }, FOLLOW_UP_PATIENCE_MS);
+      }, 0);
+    },
+    [router],
+  );
 
   const formAction = useCallback(
     async (formData: FormData): Promise<ActionState<R>> => {
@@ -81,16 +127,10 @@ export function useFormAction<R = unknown>(action: FormAction<R>, options: { kee
       if (answer.ok && !opts.current.keepValuesAfterOk) formRef.current?.reset();
       opts.current.onAnswer?.(answer);
       // Then the follow-up, which may take as long as it likes.
-      if (answer.ok && answer.redirectTo) {
-        const path = sameOriginPath(answer.redirectTo);
-        if (path && !opts.current.fullPageLoad) startTransition(() => router.push(path));
-        else window.location.assign(answer.redirectTo);
-      } else if (answer.refresh) {
-        startTransition(() => router.refresh());
-      }
+      followUp(answer);
       return answer;
     },
-    [action, router],
+    [action, followUp],
   );
 
   const onSubmit = useCallback(

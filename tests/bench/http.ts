@@ -55,6 +55,18 @@ async function freePort(): Promise<number> {
   });
 }
 
+/** fetch, tried again after a dropped connection (a kept-alive socket the server had just closed). */
+async function fetchRetry(url: string, init: RequestInit = {}): Promise<Response> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await fetch(url, init);
+    } catch (error) {
+      if (attempt >= 3) throw error;
+      await new Promise((r) => setTimeout(r, 200));
+    }
+  }
+}
+
 async function waitFor(url: string, ms = 120_000): Promise<void> {
   const deadline = Date.now() + ms;
   while (Date.now() < deadline) {
@@ -235,7 +247,7 @@ async function main() {
     const demoCookie = await mintCookie(secret, demoUser);
 
     // The bare server's bytes: the app's own answer for the bench club, stored in SQLite.
-    const sample = await fetch(`${base}/api/clubs/${BENCH_CLUB}/flight-line`, { headers: { cookie: benchCookie } });
+    const sample = await fetchRetry(`${base}/api/clubs/${BENCH_CLUB}/flight-line`, { headers: { cookie: benchCookie } });
     if (sample.status !== 200) throw new Error(`flight-line JSON answered ${sample.status}: is the minted session accepted?`);
     const bytes = Buffer.from(await sample.arrayBuffer());
     const bareDb = path.join(tmp, "bare.db");
@@ -266,7 +278,7 @@ async function main() {
     for (const t of targets) {
       if (only && t.cookie && !t.name.includes(only)) continue;
       // Check the answer is the real page (not a redirect to sign-in), then warm up.
-      const check = await fetch(t.url, { headers: t.cookie ? { cookie: t.cookie } : {}, redirect: "manual" });
+      const check = await fetchRetry(t.url, { headers: t.cookie ? { cookie: t.cookie } : {}, redirect: "manual" });
       await check.arrayBuffer();
       if (check.status !== 200) throw new Error(`${t.name} answered ${check.status}`);
       const headers: Record<string, string> = t.cookie ? { cookie: t.cookie } : {};
