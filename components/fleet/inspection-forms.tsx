@@ -6,6 +6,7 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/actions/action-state";
 import { createInspectionItem } from "@/lib/actions/fleet/create-inspection-item";
 import { recordCompletion } from "@/lib/actions/fleet/record-completion";
+import { recordMeterConversion } from "@/lib/actions/fleet/record-meter-conversion";
 import { updateInspectionItem } from "@/lib/actions/fleet/update-inspection-item";
 import { CheckboxField, FileField, TextAreaField } from "./form-bits";
 import { IdempotencyKeyField } from "@/components/ui/idempotency-key-field";
@@ -83,6 +84,26 @@ export function UpdateItemForm({ slug, itemId, hasUsage, canRetire }: { slug: st
       {canRetire ? <CheckboxField name="retire" id={`${p}-retire`} label="Retire this item (it no longer applies); its history stays" errors={state.fieldErrors.retire} /> : null}
       <Field label="Note (optional)" name="note" id={`${p}-note`} errors={state.fieldErrors.note} />
       <SubmitButton variant="secondary">Save item</SubmitButton>
+    </form>
+  );
+}
+
+/** After a meter switch: maintenance records where the item's last completion stands on the new meter. */
+export function MeterConversionForm({ slug, itemId, itemName, fromMeter, toMeter, lastHours }: { slug: string; itemId: string; itemName: string; fromMeter: "hobbs" | "tach"; toMeter: "hobbs" | "tach"; lastHours: number | null }) {
+  const [state, action] = useActionState(recordMeterConversion, initialActionState);
+  const e = state.fieldErrors;
+  const word = (m: "hobbs" | "tach") => (m === "hobbs" ? "Hobbs" : "tach");
+  const p = `mc-${itemId}`;
+  return (
+    <form action={action} noValidate aria-label={`Record ${itemName} on the ${word(toMeter)}`}>
+      <IdempotencyKeyField answer={state} />
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="itemId" value={itemId} />
+      <Field label={`Last completion on the ${word(toMeter)}`} name="reading" id={`${p}-reading`} inputMode="decimal" errors={e.reading}
+        hint={`It was recorded${lastHours !== null ? ` at ${lastHours.toFixed(1)} h` : ""} on the ${word(fromMeter)}. From the logbooks, enter the ${word(toMeter)} reading it corresponds to.`} />
+      <TextAreaField label="Note (optional)" name="note" id={`${p}-note`} rows={2} errors={e.note} />
+      <SubmitButton>Record the {word(toMeter)} reading</SubmitButton>
     </form>
   );
 }

@@ -1,7 +1,7 @@
 import "server-only";
-import { and, eq, inArray, isNull } from "drizzle-orm";
+import { and, eq, inArray, isNotNull, isNull } from "drizzle-orm";
 import type { Db } from "@/db/client";
-import { aircraft, groundingNotices, inspectionCompletions, inspectionItems, squawks, type Club } from "@/db/schema";
+import { aircraft, groundingNotices, inspectionCompletions, inspectionItems, meterConversions, squawks, type Club } from "@/db/schema";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { buildFlightLine, type FleetRecords } from "@/lib/fleet/flight-line";
 import type { FlightLineEntry } from "@/lib/fleet/types";
@@ -32,7 +32,7 @@ export function loadFleetRecords(db: Db, clubId: string, aircraftId?: string): F
     .where(and(eq(aircraft.clubId, clubId), isNull(aircraft.retiredAt), ...one))
     .orderBy(aircraft.registration)
     .all();
-  if (fleet.length === 0) return { aircraft: [], items: [], completions: [], squawks: [], notices: [] };
+  if (fleet.length === 0) return { aircraft: [], items: [], completions: [], squawks: [], notices: [], conversions: [] };
   const ids = fleet.map((a) => a.id);
 
   const items = db
@@ -60,9 +60,10 @@ export function loadFleetRecords(db: Db, clubId: string, aircraftId?: string): F
     .all();
 
   // The whole completion history of each item is needed: the 100-hour's carried-forward excess
-  // (14 CFR 91.409(b)) is a chain through every earlier due point. Four narrow columns only.
+  // (14 CFR 91.409(b)) is a chain through every earlier due point. Five narrow columns only.
   const completions = db
-    .select({ itemId: inspectionCompletions.itemId, doneOn: inspectionCompletions.doneOn, hours: inspectionCompletions.hours, expiresOn: inspectionCompletions.expiresOn })
+    // i11-meter: `id` and `meter` (the meter `hours` were read on) added for meter provenance.
+    .select({ id: inspectionCompletions.id, itemId: inspectionCompletions.itemId, doneOn: inspectionCompletions.doneOn, hours: inspectionCompletions.hours, expiresOn: inspectionCompletions.expiresOn, meter: inspectionCompletions.meter })
     .from(inspectionCompletions)
     .where(and(eq(inspectionCompletions.clubId, clubId), aircraftId ? eq(inspectionCompletions.aircraftId, aircraftId) : undefined))
     .all();
@@ -91,10 +92,21 @@ export function loadFleetRecords(db: Db, clubId: string, aircraftId?: string): F
     .orderBy(groundingNotices.effectiveAt)
     .all();
 
+  // i11-meter: maintenance's readings of completions on another meter (meter provenance);
+  // a handful of rows at most, only after an aircraft switched meters.
+  const conversions = db
+    .select({ completionId: meterConversions.completionId, toMeter: meterConversions.toMeter, toReading: meterConversions.toReading })
+    .from(meterConversions)
+    .where(and(eq(meterConversions.clubId, clubId), isNotNull(meterConversions.completionId), aircraftId ? eq(meterConversions.aircraftId, aircraftId) : undefined))
+    .orderBy(meterConversions.createdAt)
+    .all()
+    .flatMap((v) => (v.completionId ? [{ ...v, completionId: v.completionId }] : []));
+
   return {
     aircraft: fleet,
     items,
     completions,
+    conversions,
     squawks: openSquawks.map(({ createdAt, ...s }) => ({ ...s, reportedAt: createdAt.toISOString() })),
     notices: notices.map((n) => ({ ...n, effectiveAt: n.effectiveAt.toISOString(), liftedAt: n.liftedAt?.toISOString() ?? null })),
   };
