@@ -19,6 +19,7 @@ import { listFlights } from "@/db/queries/fleet-flights";
 import { listNotices } from "@/db/queries/fleet-notices";
 import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
 import { listSquawkEvents, listSquawks } from "@/db/queries/fleet-squawks";
+import { toldText } from "@/lib/fleet/squawk-words";
 import { minorToDecimalString, currencyExponent, formatMoney } from "@/lib/money";
 import { explainDenied, can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
@@ -35,9 +36,10 @@ function Section({ id, title, children }: { id: string; title: string; children:
   );
 }
 
-export default async function AircraftPage({ params, searchParams }: { params: Promise<{ club: string; aircraftId: string }>; searchParams?: Promise<{ reported?: string }> }) {
+export default async function AircraftPage({ params, searchParams }: { params: Promise<{ club: string; aircraftId: string }>; searchParams?: Promise<{ reported?: string; mx?: string; bk?: string }> }) {
   const { club: slug, aircraftId } = await params;
-  const { reported } = (await searchParams) ?? {};
+  const { reported, mx, bk } = (await searchParams) ?? {};
+  const told = toldText(Number(mx ?? 0), Number(bk ?? 0));
   const { db, club, ability } = await authorizePage(slug, ["read", "Aircraft"]);
   const plane = getAircraft(db, club.id, aircraftId);
   const entry = plane ? getAircraftStatusEntry(db, club, plane.id) : undefined;
@@ -94,7 +96,7 @@ export default async function AircraftPage({ params, searchParams }: { params: P
       <Section id="report" title="Report a squawk">
         {reported && open.some((s) => s.id === reported) ? (
           <p role="status" className="mb-3 rounded border border-go-600 bg-go-100 px-3 py-2 text-sm text-go-800">
-            Squawk reported: &ldquo;{open.find((s) => s.id === reported)!.description}&rdquo;. It is on the list below, and maintenance sees it on the flight line.
+            Squawk reported: &ldquo;{open.find((s) => s.id === reported)!.description}&rdquo;. It is on the list below.{told ? ` ${told[0]!.toUpperCase()}${told.slice(1)}.` : ""}
           </p>
         ) : null}
         <div className="card">{may.report ? <ReportSquawkForm slug={club.slug} aircraftId={plane.id} registration={plane.registration} /> : <p className="text-sm text-ink-500">{explainDenied("create", "Squawk")}</p>}</div>
