@@ -14,6 +14,8 @@ export type SquawkAlertProps = {
   /** Why this person hears of it: they look after the aircraft, or they hold a booking on it. */
   because: "maintenance" | "booking";
   url: string;
+  /** Ties the message to its squawk, so the report's confirmation can say who was e-mailed. */
+  squawkId?: string;
 };
 
 export function SquawkAlertEmail({ clubName, registration, aircraftName, description, foundDuring, reportedBy, because, url }: SquawkAlertProps) {

@@ -1,8 +1,8 @@
 import "server-only";
-import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/sqlite-core";
 import type { Db, Tx } from "@/db/client";
-import { aircraft, memberships, squawkEvents, squawks, users, type SquawkRow } from "@/db/schema";
+import { aircraft, emailOutbox, memberships, squawkEvents, squawks, users, type SquawkRow } from "@/db/schema";
 import { listBookingHolders } from "./bookings-holders";
 
 type Handle = Db | Tx;
@@ -77,4 +77,18 @@ export function listSquawkAlertRecipients(tx: Handle, clubId: string, aircraftId
     out.push(r);
   }
   return out;
+}
+
+/** How many "possibly unsafe" alerts one squawk report queued, by why each person heard. */
+export function countSquawkAlerts(db: Handle, clubId: string, squawkId: string): { maintenance: number; booking: number } {
+  const rows = db
+    .select({ because: sql<string>`json_extract(${emailOutbox.payload}, '$.because')`, n: sql<number>`count(*)` })
+    .from(emailOutbox)
+    .where(and(eq(emailOutbox.clubId, clubId), eq(emailOutbox.template, "squawk-alert"), sql`json_extract(${emailOutbox.payload}, '$.squawkId') = ${squawkId}`))
+    .groupBy(sql`json_extract(${emailOutbox.payload}, '$.because')`)
+    .all();
+  return {
+    maintenance: rows.find((r) => r.because === "maintenance")?.n ?? 0,
+    booking: rows.find((r) => r.because === "booking")?.n ?? 0,
+  };
 }

@@ -57,6 +57,11 @@ export function hoursLateness(input: { lastDoneAt: number; previousDueAt?: numbe
  *   that the late time counts against the next interval all the same. The late time itself is
  *   a matter for the records: `hoursLateness` says how late, and the inspection history
  *   flags it.
+ * - Done a whole interval or more after it fell due: no 100-hour can have been skipped
+ *   lawfully, so either a record is missing or the rule did not apply then (the aircraft was
+ *   not used for hire or instruction, e.g. between two annuals of a private aircraft). The
+ *   history cannot place a due point across that gap; it starts afresh from when it was done,
+ *   and the lateness is still flagged for someone to check the records.
  * overrunLimitAt is the furthest the aircraft may be flown, only to reach a place where the
  * inspection can be done.
  */
@@ -74,7 +79,8 @@ export function hoursDue(input: {
   if (intervalHours <= 0) throw new RangeError("intervalHours must be more than zero");
   if (overrunHours < 0) throw new RangeError("overrunHours must not be negative");
 
-  const doneLate = overrunHours > 0 && previousDueAt !== undefined && Number.isFinite(previousDueAt) && roundHours(lastDoneAt) > roundHours(previousDueAt);
+  const late = previousDueAt !== undefined && Number.isFinite(previousDueAt) ? roundHours(lastDoneAt - previousDueAt) : 0;
+  const doneLate = overrunHours > 0 && late > 0 && late < intervalHours;
   const base = doneLate && previousDueAt !== undefined ? previousDueAt : lastDoneAt;
   const dueAt = roundHours(base + intervalHours);
   return { dueAt, overrunLimitAt: roundHours(dueAt + overrunHours) };

@@ -60,6 +60,7 @@ export const reportSquawk = clubAction({
               reportedBy: user.name ?? "A member",
               because: r.why,
               url: appUrl(`/clubs/${club.slug}/aircraft/${plane.id}`),
+              squawkId: row!.id,
             },
           })),
         );
@@ -68,13 +69,12 @@ export const reportSquawk = clubAction({
       }
       const told = toldText(maintenance, booking);
       // The confirmation comes from the URL, so it survives the page being rendered afresh; the
-      // counts are what this write queued, so the page says no more than happened.
-      const query = new URLSearchParams({ reported: row!.id, ...(told ? { mx: String(maintenance), bk: String(booking) } : {}) });
+      // page counts the messages this report queued (countSquawkAlerts), so it says no more than happened.
       return {
         message: told ? `Squawk reported; ${told}.` : "Squawk reported.",
         data: { squawkId: row!.id, emailed: { maintenance, booking } },
         revalidate: fleetPaths(club.slug, plane.id),
-        redirectTo: `/clubs/${club.slug}/aircraft/${plane.id}?${query.toString()}`,
+        redirectTo: `/clubs/${club.slug}/aircraft/${plane.id}?reported=${row!.id}`,
       };
     });
   },

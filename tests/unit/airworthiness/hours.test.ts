@@ -40,6 +40,15 @@ describe("hoursDue: the 100-hour inspection", () => {
     expect(hoursDue({ lastDoneAt: 1125, previousDueAt: 1100, ...HUNDRED })).toEqual({ dueAt: 1200, overrunLimitAt: 1210 });
   });
 
+  it("starts afresh when done a whole interval or more after it fell due (a gap in the records)", () => {
+    // Our documented choice beside hoursDue: no 100-hour is skipped lawfully (14 CFR 91.409(b)), so the
+    // history cannot place a due point across the gap; the lateness is still flagged (hoursLateness)
+    expect(hoursDue({ lastDoneAt: 1200, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1300);
+    expect(hoursDue({ lastDoneAt: 1250.5, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1350.5);
+    // own arithmetic: 99.9 h late still counts from the due point
+    expect(hoursDue({ lastDoneAt: 1199.9, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1200);
+  });
+
   it("says how late an inspection was, for the records", () => {
     // 14 CFR 91.409(b): 1112.0 done against 1100.0 due is 12.0 h late, beyond the 10-hour overrun
     expect(hoursLateness({ lastDoneAt: 1112, previousDueAt: 1100, overrunHours: 10 })).toEqual({ lateHours: 12, beyondOverrun: true });

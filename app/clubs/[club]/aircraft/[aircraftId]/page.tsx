@@ -18,7 +18,7 @@ import { getAircraft, listCompletionHistory, listItems, listUploadsFor } from "@
 import { listFlights } from "@/db/queries/fleet-flights";
 import { listNotices } from "@/db/queries/fleet-notices";
 import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
-import { listSquawkEvents, listSquawks } from "@/db/queries/fleet-squawks";
+import { countSquawkAlerts, listSquawkEvents, listSquawks } from "@/db/queries/fleet-squawks";
 import { toldText } from "@/lib/fleet/squawk-words";
 import { minorToDecimalString, currencyExponent, formatMoney } from "@/lib/money";
 import { explainDenied, can } from "@/permissions";
@@ -36,10 +36,9 @@ function Section({ id, title, children }: { id: string; title: string; children:
   );
 }
 
-export default async function AircraftPage({ params, searchParams }: { params: Promise<{ club: string; aircraftId: string }>; searchParams?: Promise<{ reported?: string; mx?: string; bk?: string }> }) {
+export default async function AircraftPage({ params, searchParams }: { params: Promise<{ club: string; aircraftId: string }>; searchParams?: Promise<{ reported?: string }> }) {
   const { club: slug, aircraftId } = await params;
-  const { reported, mx, bk } = (await searchParams) ?? {};
-  const told = toldText(Number(mx ?? 0), Number(bk ?? 0));
+  const { reported } = (await searchParams) ?? {};
   const { db, club, ability } = await authorizePage(slug, ["read", "Aircraft"]);
   const plane = getAircraft(db, club.id, aircraftId);
   const entry = plane ? getAircraftStatusEntry(db, club, plane.id) : undefined;
@@ -69,6 +68,9 @@ export default async function AircraftPage({ params, searchParams }: { params: P
   const dueKeys = new Set(entry.due.map((d) => d.key));
   const meterNow = plane.maintenanceMeter === "hobbs" ? plane.currentHobbs : plane.currentTach;
   const open = squawks.filter((s) => s.status === "open");
+  // Only what happened: who this report's alerts went to, counted from the outbox.
+  const alerts = reported && open.some((s) => s.id === reported) ? countSquawkAlerts(db, club.id, reported) : null;
+  const told = alerts ? toldText(alerts.maintenance, alerts.booking) : null;
   const closed = squawks.filter((s) => s.status === "closed");
   const base = `/clubs/${club.slug}`;
 
