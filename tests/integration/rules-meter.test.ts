@@ -3,7 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { GET as aircraftDetailRoute } from "@/app/api/clubs/[club]/aircraft/[aircraftId]/route";
 import { countSquawkAlerts } from "@/db/queries/fleet-squawks";
 import { listItems } from "@/db/queries/fleet";
-import { aircraft, auditLog, bookings, emailOutbox, inspectionCompletions, meterConversions, squawks, users } from "@/db/schema";
+import { auditLog, bookings, emailOutbox, inspectionCompletions, meterConversions, squawks, users } from "@/db/schema";
 import { recordCompletion } from "@/lib/actions/fleet/record-completion";
 import { recordMeterConversion } from "@/lib/actions/fleet/record-meter-conversion";
 import { reportSquawk } from "@/lib/actions/fleet/report-squawk";
