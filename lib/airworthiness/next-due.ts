@@ -45,7 +45,7 @@ export function hoursChain(completions: Completion[], intervalHours: number, ove
     if (previous && !sameMeter(previousMeter, c.meter)) previous = null;
     const due = hoursDue({ lastDoneAt: c.hours, intervalHours, overrunHours, previousDueAt: previous?.dueAt });
     const lateness = hoursLateness({ lastDoneAt: c.hours, previousDueAt: previous?.dueAt, overrunHours });
-    const late: LateCompletion | null = previous && lateness.lateHours > 0 ? { ...lateness, fellDueAt: previous.dueAt } : null;
+    const late: LateCompletion | null = previous && lateness.lateHours > 0 ? { ...lateness, fellDueAt: previous.dueAt, countsFromDuePoint: due.dueAt === roundHours(previous.dueAt + intervalHours) } : null;
     previous = { ...due, late };
     previousMeter = c.meter ?? previousMeter;
     out.push({ completion: c, point: previous });

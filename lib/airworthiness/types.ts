@@ -141,6 +141,8 @@ export interface LateCompletion {
   beyondOverrun: boolean;
   /** The due point it was late against. */
   fellDueAt: number;
+  /** The next interval counts from fellDueAt (false: a whole interval late, counted afresh). */
+  countsFromDuePoint: boolean;
 }
 
 /** What comes due next for one item; null fields do not apply or cannot be computed. */

@@ -72,7 +72,16 @@ describe("100-hour done late: flagged in the records", () => {
       .map((i) => (i.key === "annual" ? { ...i, completions: [{ date: "2025-06-06", hours: 900, meter: "hobbs" as const }] } : i));
     const next = nextDue(items.find((i) => i.key === "100-hour")!, TODAY, 1150, items, "hobbs");
     expect(next.dueHours).toBe(1200);
-    expect(next.late).toEqual({ lateHours: 12, beyondOverrun: true, fellDueAt: 1100 });
+    expect(next.late).toEqual({ lateHours: 12, beyondOverrun: true, fellDueAt: 1100, countsFromDuePoint: true });
+  });
+
+  it("flags a whole interval late as counted afresh", () => {
+    // hoursDue's documented choice (14 CFR 91.409(b)): due 1100.0, done 1230.0 → a gap in the records, next 1330.0
+    const items = hundredOnly([{ date: "2026-01-02", hours: 1000, meter: "hobbs" }, { date: "2026-03-02", hours: 1230, meter: "hobbs" }])
+      .map((i) => (i.key === "annual" ? { ...i, completions: [{ date: "2025-06-06", hours: 900, meter: "hobbs" as const }] } : i));
+    const next = nextDue(items.find((i) => i.key === "100-hour")!, TODAY, 1250, items, "hobbs");
+    expect(next.dueHours).toBe(1330);
+    expect(next.late).toEqual({ lateHours: 130, beyondOverrun: true, fellDueAt: 1100, countsFromDuePoint: false });
   });
 
   it("does not flag an inspection done on time", () => {
