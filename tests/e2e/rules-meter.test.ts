@@ -23,7 +23,7 @@ describe("meter provenance, squawk alerts and medical dates in the browser", { r
 
     await page.getByText("Edit the record", { exact: true }).click();
     const form = page.getByRole("form", { name: `Edit ${REG}` });
-    await form.getByLabel("Inspections count by").selectOption("hobbs");
+    await form.getByLabel("Inspections count by", { exact: true }).selectOption("hobbs");
     // Without the conversion reading the switch is refused, field by field.
     await form.getByRole("button", { name: "Save aircraft" }).click();
     await form.getByRole("alert").filter({ hasText: "nothing was saved" }).waitFor();
