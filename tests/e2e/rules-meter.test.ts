@@ -8,6 +8,8 @@ import { newPage, screenshot, signIn } from "./harness";
 // squawk marked possibly unsafe. No retries, no sleeps: each step waits for the page's own answer.
 const CLUB = "/clubs/lakeshore-aero";
 const REG = "N0534L";
+// A loaded two-core machine can take long to answer an action that re-renders the page.
+const ANSWER = { timeout: 120_000 };
 
 describe("meter provenance, squawk alerts and medical dates in the browser", { retry: 0 }, () => {
   it("after a switch from tach to Hobbs the aircraft shows Check status naming both meters", async () => {
@@ -26,13 +28,13 @@ describe("meter provenance, squawk alerts and medical dates in the browser", { r
     await form.getByLabel("Inspections count by", { exact: true }).selectOption("hobbs");
     // Without the conversion reading the switch is refused, field by field.
     await form.getByRole("button", { name: "Save aircraft" }).click();
-    await form.getByRole("alert").filter({ hasText: "nothing was saved" }).waitFor();
+    await form.getByRole("alert").filter({ hasText: "nothing was saved" }).waitFor(ANSWER);
     await form.getByText(/needs the Hobbs reading at the switch/).waitFor();
 
     const hobbs = await form.getByLabel("Current Hobbs").inputValue();
     await form.getByLabel(/^Conversion reading/).fill(hobbs);
     await form.getByRole("button", { name: "Save aircraft" }).click();
-    await form.getByRole("status").filter({ hasText: "Inspections now count by the Hobbs" }).waitFor();
+    await form.getByRole("status").filter({ hasText: "Inspections now count by the Hobbs" }).waitFor(ANSWER);
 
     await page.goto(page.url(), { waitUntil: "networkidle" });
     await page.getByRole("heading", { name: REG, level: 1 }).waitFor();
@@ -63,7 +65,7 @@ describe("meter provenance, squawk alerts and medical dates in the browser", { r
     await form.getByLabel("Found during").selectOption("preflight");
     await form.getByLabel("I think this may make the aircraft unsafe to fly").check();
     await form.getByRole("button", { name: "Report squawk" }).click();
-    await page.waitForURL(/\?reported=/);
+    await page.waitForURL(/\?reported=/, ANSWER);
     const status = page.getByRole("status").filter({ hasText: `Squawk reported: “${description}”` });
     await status.waitFor();
     expect(await status.textContent()).toMatch(/Maintenance \(2 people\)( and (1 member holding a booking|\d+ members holding bookings) on it)? were e-mailed\./);
