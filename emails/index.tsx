@@ -11,6 +11,7 @@ import { StatementEmail, type StatementEmailProps } from "./statement";
 import { ReceiptEmail, type ReceiptEmailProps } from "./receipt";
 import { DuesReminderEmail, type DuesReminderEmailProps } from "./dues-reminder";
 import { SafetyDigestEmail, type SafetyDigestProps } from "./safety-digest";
+import { SquawkAlertEmail, type SquawkAlertProps } from "./squawk-alert";
 
 // Every template the outbox can send, by name. A row stores the name and the props; the worker
 // renders when it sends, so a template fix applies to messages still waiting.
@@ -26,6 +27,7 @@ export type EmailTemplates = {
   receipt: ReceiptEmailProps;
   "dues-reminder": DuesReminderEmailProps;
   "safety-digest": SafetyDigestProps;
+  "squawk-alert": SquawkAlertProps;
 };
 export type EmailTemplateName = keyof EmailTemplates;
 
@@ -41,6 +43,7 @@ const components: { [K in EmailTemplateName]: (props: EmailTemplates[K]) => Reac
   receipt: (p) => <ReceiptEmail {...p} />,
   "dues-reminder": (p) => <DuesReminderEmail {...p} />,
   "safety-digest": (p) => <SafetyDigestEmail {...p} />,
+  "squawk-alert": (p) => <SquawkAlertEmail {...p} />,
 };
 
 export function isEmailTemplateName(name: string): name is EmailTemplateName {

@@ -61,6 +61,14 @@ export function AircraftForm({ slug, currency, values }: { slug: string; currenc
         </SelectField>
         <Field label="Current Hobbs" name="currentHobbs" inputMode="decimal" defaultValue={v?.currentHobbs?.toFixed(1) ?? ""} errors={e.currentHobbs} />
         <Field label="Current tach" name="currentTach" inputMode="decimal" defaultValue={v?.currentTach?.toFixed(1) ?? ""} errors={e.currentTach} />
+        {v ? (
+          <Field label="Conversion reading (only when switching the meter inspections count by)" name="conversionReading" inputMode="decimal" defaultValue="" errors={e.conversionReading}
+            hint={`Inspections count by the ${v.maintenanceMeter === "hobbs" ? "Hobbs" : "tach"} now. To switch, enter the new meter's reading at the switch, the same as its current reading above.`} />
+        ) : null}
+        {v ? (
+          <Field label="Reason for lowering a reading (maintenance only)" name="readingChangeReason" defaultValue="" errors={e.readingChangeReason}
+            hint="Needed only when a current reading goes down, e.g. a meter replaced; kept in the audit log." />
+        ) : null}
         <Field label="Engine TBO (h, optional)" name="engineTboHours" inputMode="decimal" defaultValue={v?.engineTboHours?.toString() ?? ""} errors={e.engineTboHours} />
         <Field label="Engine time since overhaul (h, optional)" name="engineTimeSinceOverhaul" inputMode="decimal" defaultValue={v?.engineTimeSinceOverhaul?.toString() ?? ""} errors={e.engineTimeSinceOverhaul} />
       </div>

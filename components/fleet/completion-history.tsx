@@ -1,7 +1,11 @@
 import type { CompletionHistoryRow, UploadLink } from "@/db/queries/fleet";
 import { formatHours } from "@/lib/airworthiness";
+import type { DueSummary } from "@/lib/fleet/types";
+import { lateText, meterWord } from "./due-text";
 
-export function CompletionHistory({ slug, rows, files }: { slug: string; rows: CompletionHistoryRow[]; files: UploadLink[] }) {
+/** `due` flags the governing completion of an item done after it fell due (14 CFR 91.409(b)). */
+export function CompletionHistory({ slug, rows, files, due = [] }: { slug: string; rows: CompletionHistoryRow[]; files: UploadLink[]; due?: DueSummary[] }) {
+  const lateFor = (c: CompletionHistoryRow) => due.find((d) => d.late && d.lastDoneOn === c.doneOn && d.lastDoneHours === c.hours && d.name === c.itemName)?.late ?? null;
   if (rows.length === 0) return <p className="text-ink-700">No completions recorded yet.</p>;
   return (
     <div className="overflow-x-auto rounded border border-sand-300 bg-white">
@@ -12,7 +16,9 @@ export function CompletionHistory({ slug, rows, files }: { slug: string; rows: C
         <tbody>
           {rows.map((c) => (
             <tr key={c.id} className="border-t border-sand-200 align-top">
-              <td className="px-3 py-2 font-mono tabular">{c.doneOn}{c.hours !== null ? ` · ${formatHours(c.hours)} h` : ""}{c.expiresOn ? ` · expires ${c.expiresOn}` : ""}</td>
+              <td className="px-3 py-2 font-mono tabular">{c.doneOn}{c.hours !== null ? ` · ${formatHours(c.hours)} h${c.meter ? ` ${meterWord(c.meter)}` : ""}` : ""}{c.expiresOn ? ` · expires ${c.expiresOn}` : ""}
+                {(() => { const late = lateFor(c); return late ? <span className="block font-sans text-xs font-bold text-stop-800">Late: {lateText(late)}</span> : null; })()}
+              </td>
               <td className="px-3 py-2">{c.itemName}</td>
               <td className="px-3 py-2">{c.mechanicName}<span className="block text-xs text-ink-500">{c.mechanicCertificate}</span></td>
               <td className="px-3 py-2">

@@ -1,6 +1,6 @@
 import { formatHours } from "@/lib/airworthiness";
 import type { DueSummary } from "@/lib/fleet/types";
-import { dueLabel, dueText, dueTone } from "./due-text";
+import { dueLabel, dueText, dueTone, lateText, meterWord } from "./due-text";
 
 /** Every applicable item with its last completion and when it comes due; scrolls inside its box on a phone. */
 export function DueTable({ due, caption }: { due: DueSummary[]; caption: string }) {
@@ -23,7 +23,10 @@ export function DueTable({ due, caption }: { due: DueSummary[]; caption: string 
                 <span className="font-bold">{d.name}</span>
                 {d.source ? <span className="block text-xs text-ink-500">{d.source}{d.ifrOnly ? " · IFR only" : ""}</span> : null}
               </td>
-              <td className="px-3 py-2 font-mono tabular">{d.lastDoneOn ?? "—"}{d.lastDoneHours !== null && d.lastDoneHours !== undefined ? ` at ${formatHours(d.lastDoneHours)} h` : ""}</td>
+              <td className="px-3 py-2 font-mono tabular">
+                {d.lastDoneOn ?? "—"}{d.lastDoneHours !== null && d.lastDoneHours !== undefined ? ` at ${formatHours(d.lastDoneHours)} h${d.lastDoneMeter ? ` ${meterWord(d.lastDoneMeter)}` : ""}` : ""}
+                {d.late ? <span className="block font-sans text-xs font-bold text-stop-800">Late: {lateText(d.late)}</span> : null}
+              </td>
               <td className="px-3 py-2">{dueText(d)}</td>
               <td className={`px-3 py-2 ${dueTone(d)}`}>{dueLabel(d) ?? "Current"}</td>
             </tr>

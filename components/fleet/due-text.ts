@@ -1,6 +1,16 @@
 import { formatHours } from "@/lib/airworthiness";
 import type { DueSummary } from "@/lib/fleet/types";
 
+export function meterWord(meter: "hobbs" | "tach"): string {
+  return meter === "hobbs" ? "Hobbs" : "tach";
+}
+
+/** "done 12.0 h after it fell due at 1100.0 h, beyond the overrun" — the records keep the late time. */
+export function lateText(late: { lateHours: number; beyondOverrun: boolean; fellDueAt: number; countsFromDuePoint: boolean }): string {
+  const next = late.countsFromDuePoint ? "the next counts from when it fell due" : "a whole interval late: check the records; the next counts from when it was done";
+  return `done ${formatHours(late.lateHours)} h after it fell due at ${formatHours(late.fellDueAt)} h${late.beyondOverrun ? ", beyond the overrun allowance" : ", within the ferry overrun"}; ${next}`;
+}
+
 function plural(n: number, unit: string): string {
   return `${n} ${unit}${Math.abs(n) === 1 ? "" : "s"}`;
 }
@@ -15,6 +25,10 @@ export function dueText(d: DueSummary): string {
     parts.push(d.hoursLeft === null ? `at ${formatHours(d.dueHours)} h` : d.hoursLeft < 0 ? `was due at ${formatHours(d.dueHours)} h (${formatHours(-d.hoursLeft)} h over)` : `at ${formatHours(d.dueHours)} h (${formatHours(d.hoursLeft)} h left)`);
   }
   if (d.useLeftHours !== null) parts.push(d.useLeftHours < 0 ? "use limit exceeded" : `${formatHours(d.useLeftHours)} h of use left`);
+  if (d.otherMeter) {
+    const note = `hours cannot be computed: last done on the ${meterWord(d.otherMeter.completionMeter)}, inspections now count by the ${meterWord(d.otherMeter.currentMeter)}`;
+    return parts.length ? `${parts.join(" or ")}; ${note}` : note;
+  }
   if (d.incomplete && parts.length === 0) return d.lastDoneOn ? "cannot be computed: data missing" : "no completion on record";
   return parts.join(" or ");
 }

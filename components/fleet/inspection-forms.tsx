@@ -6,6 +6,7 @@ import { CheckboxField, Field, FileField, SelectField, TextAreaField } from "@/c
 import { SubmitButton } from "@/components/ui/submit-button";
 import { createInspectionItem } from "@/lib/actions/fleet/create-inspection-item";
 import { recordCompletion } from "@/lib/actions/fleet/record-completion";
+import { recordMeterConversion } from "@/lib/actions/fleet/record-meter-conversion";
 import { updateInspectionItem } from "@/lib/actions/fleet/update-inspection-item";
 
 export function RecordCompletionForm({ slug, itemId, itemName, today, hoursBased, fixedDate, meterName, meterNow }: { slug: string; itemId: string; itemName: string; today: string; hoursBased: boolean; fixedDate: boolean; meterName: string; meterNow: number | null }) {
@@ -79,5 +80,25 @@ export function UpdateItemForm({ slug, itemId, hasUsage, canRetire }: { slug: st
       <Field label="Note (optional)" name="note" id={`${p}-note`} errors={state.fieldErrors.note} />
       <SubmitButton variant="secondary">Save item</SubmitButton>
     </FormShell>
+  );
+}
+
+/** After a meter switch: maintenance records where the item's last completion stands on the new meter. */
+export function MeterConversionForm({ slug, itemId, itemName, fromMeter, toMeter, lastHours }: { slug: string; itemId: string; itemName: string; fromMeter: "hobbs" | "tach"; toMeter: "hobbs" | "tach"; lastHours: number | null }) {
+  const [state, action] = useActionState(recordMeterConversion, initialActionState);
+  const e = state.fieldErrors;
+  const word = (m: "hobbs" | "tach") => (m === "hobbs" ? "Hobbs" : "tach");
+  const p = `mc-${itemId}`;
+  return (
+    <form action={action} noValidate aria-label={`Record ${itemName} on the ${word(toMeter)}`}>
+      <IdempotencyKeyField answer={state} />
+      <FormMessage state={state} />
+      <input type="hidden" name="club" value={slug} />
+      <input type="hidden" name="itemId" value={itemId} />
+      <Field label={`Last completion on the ${word(toMeter)}`} name="reading" id={`${p}-reading`} inputMode="decimal" errors={e.reading}
+        hint={`It was recorded${lastHours !== null ? ` at ${lastHours.toFixed(1)} h` : ""} on the ${word(fromMeter)}. From the logbooks, enter the ${word(toMeter)} reading it corresponds to.`} />
+      <TextAreaField label="Note (optional)" name="note" id={`${p}-note`} rows={2} errors={e.note} />
+      <SubmitButton>Record the {word(toMeter)} reading</SubmitButton>
+    </form>
   );
 }

@@ -1,8 +1,9 @@
 import "server-only";
-import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/sqlite-core";
 import type { Db, Tx } from "@/db/client";
-import { aircraft, squawkEvents, squawks, users, type SquawkRow } from "@/db/schema";
+import { aircraft, emailOutbox, memberships, squawkEvents, squawks, users, type SquawkRow } from "@/db/schema";
+import { listBookingHolders } from "./bookings-holders";
 
 type Handle = Db | Tx;
 
@@ -49,4 +50,45 @@ export function recordSquawkEvent(tx: Tx, event: { clubId: string; squawkId: str
   tx.insert(squawkEvents)
     .values({ clubId: event.clubId, squawkId: event.squawkId, kind: event.kind, actorId: event.actorId, fromTriage: event.fromTriage ?? null, toTriage: event.toTriage ?? null, note: event.note ?? null })
     .run();
+}
+
+export type SquawkAlertRecipient = { userId: string; email: string; name: string | null; why: "maintenance" | "booking" };
+
+/**
+ * Who hears at once of a squawk reported as possibly unsafe: the club's maintenance people
+ * (maintenance officers and mechanics, who triage squawks), then the holders of bookings on
+ * the aircraft that end after `from`; each person once, the reporter left out.
+ */
+export function listSquawkAlertRecipients(tx: Handle, clubId: string, aircraftId: string, from: Date, reporterId: string): SquawkAlertRecipient[] {
+  const maintenance = tx
+    .select({ userId: users.id, email: users.email, name: users.name, roles: memberships.roles })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.clubId, clubId), eq(memberships.status, "active"), isNull(users.disabledAt)))
+    .all()
+    .filter((m) => m.roles.includes("maintenance") || m.roles.includes("mechanic"))
+    .map(({ roles: _roles, ...m }) => ({ ...m, why: "maintenance" as const }));
+  const holders = listBookingHolders(tx, clubId, aircraftId, from).map((h) => ({ userId: h.userId, email: h.email, name: h.name, why: "booking" as const }));
+  const seen = new Set<string>([reporterId]);
+  const out: SquawkAlertRecipient[] = [];
+  for (const r of [...maintenance, ...holders]) {
+    if (seen.has(r.userId)) continue;
+    seen.add(r.userId);
+    out.push(r);
+  }
+  return out;
+}
+
+/** How many "possibly unsafe" alerts one squawk report queued, by why each person heard. */
+export function countSquawkAlerts(db: Handle, clubId: string, squawkId: string): { maintenance: number; booking: number } {
+  const rows = db
+    .select({ because: sql<string>`json_extract(${emailOutbox.payload}, '$.because')`, n: sql<number>`count(*)` })
+    .from(emailOutbox)
+    .where(and(eq(emailOutbox.clubId, clubId), eq(emailOutbox.template, "squawk-alert"), sql`json_extract(${emailOutbox.payload}, '$.squawkId') = ${squawkId}`))
+    .groupBy(sql`json_extract(${emailOutbox.payload}, '$.because')`)
+    .all();
+  return {
+    maintenance: rows.find((r) => r.because === "maintenance")?.n ?? 0,
+    booking: rows.find((r) => r.because === "booking")?.n ?? 0,
+  };
 }

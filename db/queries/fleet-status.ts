@@ -1,7 +1,7 @@
 import "server-only";
-import { and, eq, isNull, sql } from "drizzle-orm";
+import { and, eq, isNotNull, isNull, sql } from "drizzle-orm";
 import type { Db } from "@/db/client";
-import { aircraft, groundingNotices, inspectionItems, squawks, type Club } from "@/db/schema";
+import { aircraft, groundingNotices, inspectionItems, meterConversions, squawks, type Club } from "@/db/schema";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { buildFlightLine, type FleetRecords } from "@/lib/fleet/flight-line";
 import { clubSnapshot, deepFreeze, peekClubSnapshot, sessionOf, sqliteOf } from "./club-snapshot";
@@ -27,7 +27,7 @@ const P = { clubId: sql.placeholder("clubId"), aircraftId: sql.placeholder("airc
  */
 function governingCompletionsSql(one: boolean): string {
   return `
-    SELECT c.item_id AS itemId, c.done_on AS doneOn, c.hours AS hours, c.expires_on AS expiresOn
+    SELECT c.id AS id, c.item_id AS itemId, c.done_on AS doneOn, c.hours AS hours, c.expires_on AS expiresOn, c.meter AS meter
     FROM inspection_items i
     JOIN inspection_completions c ON c.rowid = (
       SELECT c2.rowid FROM inspection_completions c2 WHERE c2.aircraft_id = i.aircraft_id AND c2.item_id = i.id
@@ -35,7 +35,7 @@ function governingCompletionsSql(one: boolean): string {
     WHERE i.club_id = @clubId AND i.retired_at IS NULL ${one ? "AND i.aircraft_id = @aircraftId" : ""}
       AND i.id NOT IN (SELECT value FROM json_each(@chainIds))
     UNION ALL
-    SELECT c.item_id, c.done_on, c.hours, c.expires_on
+    SELECT c.id, c.item_id, c.done_on, c.hours, c.expires_on, c.meter
     FROM json_each(@chainIds) j
     JOIN inspection_items i ON i.id = j.value AND i.club_id = @clubId
     JOIN inspection_completions c ON c.aircraft_id = i.aircraft_id AND c.item_id = i.id`;
@@ -156,10 +156,21 @@ export function loadFleetRecords(db: Db, clubId: string, aircraftId?: string): F
   const openSquawks = q.squawks.all(params).filter((s) => ids.has(s.aircraftId));
   const notices = q.notices.all(params);
 
+  // i11-meter: maintenance's readings of completions on another meter (meter provenance);
+  // a handful of rows at most, only after an aircraft switched meters.
+  const conversions = db
+    .select({ completionId: meterConversions.completionId, toMeter: meterConversions.toMeter, toReading: meterConversions.toReading })
+    .from(meterConversions)
+    .where(and(eq(meterConversions.clubId, clubId), isNotNull(meterConversions.completionId), aircraftId ? eq(meterConversions.aircraftId, aircraftId) : undefined))
+    .orderBy(meterConversions.createdAt)
+    .all()
+    .flatMap((v) => (v.completionId ? [{ ...v, completionId: v.completionId }] : []));
+
   return {
     aircraft: fleet,
     items,
     completions,
+    conversions,
     squawks: openSquawks.map(({ createdAt, ...s }) => ({ ...s, reportedAt: createdAt.toISOString() })),
     notices: notices.map((n) => ({ ...n, effectiveAt: n.effectiveAt.toISOString(), liftedAt: n.liftedAt?.toISOString() ?? null })),
   };

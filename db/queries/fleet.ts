@@ -1,7 +1,8 @@
 import "server-only";
-import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNotNull, isNull } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
-import { aircraft, inspectionCompletions, inspectionItems, uploads, users, type Aircraft, type InspectionItemRow } from "@/db/schema";
+import { aircraft, inspectionCompletions, inspectionItems, meterConversions, uploads, users, type Aircraft, type InspectionItemRow } from "@/db/schema";
+import type { FleetCompletionRecord, FleetMeterConversionRecord } from "@/lib/fleet/types";
 
 // Aircraft records and inspection items. Every query is scoped by club_id: another club's
 // record is not found, exactly like a missing one.
@@ -39,6 +40,8 @@ export type CompletionHistoryRow = {
   itemName: string;
   doneOn: string;
   hours: number | null;
+  /** The meter `hours` were read on. */
+  meter: "hobbs" | "tach" | null;
   expiresOn: string | null;
   mechanicName: string;
   mechanicCertificate: string;
@@ -54,6 +57,7 @@ export function listCompletionHistory(db: Handle, clubId: string, aircraftId: st
       itemName: inspectionItems.name,
       doneOn: inspectionCompletions.doneOn,
       hours: inspectionCompletions.hours,
+      meter: inspectionCompletions.meter,
       expiresOn: inspectionCompletions.expiresOn,
       mechanicName: inspectionCompletions.mechanicName,
       mechanicCertificate: inspectionCompletions.mechanicCertificate,
@@ -80,4 +84,24 @@ export function listUploadsFor(db: Handle, clubId: string, subjectType: string, 
     .where(and(eq(uploads.clubId, clubId), eq(uploads.subjectType, subjectType), inArray(uploads.subjectId, subjectIds)))
     .orderBy(asc(uploads.createdAt))
     .all();
+}
+
+/** Every completion of one aircraft as the fleet rules read them (meter provenance included). */
+export function listCompletionRecords(db: Handle, clubId: string, aircraftId: string): FleetCompletionRecord[] {
+  return db
+    .select({ id: inspectionCompletions.id, itemId: inspectionCompletions.itemId, doneOn: inspectionCompletions.doneOn, hours: inspectionCompletions.hours, expiresOn: inspectionCompletions.expiresOn, meter: inspectionCompletions.meter })
+    .from(inspectionCompletions)
+    .where(and(eq(inspectionCompletions.clubId, clubId), eq(inspectionCompletions.aircraftId, aircraftId)))
+    .all();
+}
+
+/** Maintenance's readings of this aircraft's completions on another meter, oldest first. */
+export function listCompletionConversions(db: Handle, clubId: string, aircraftId: string): FleetMeterConversionRecord[] {
+  return db
+    .select({ completionId: meterConversions.completionId, toMeter: meterConversions.toMeter, toReading: meterConversions.toReading })
+    .from(meterConversions)
+    .where(and(eq(meterConversions.clubId, clubId), eq(meterConversions.aircraftId, aircraftId), isNotNull(meterConversions.completionId)))
+    .orderBy(asc(meterConversions.createdAt))
+    .all()
+    .flatMap((v) => (v.completionId ? [{ ...v, completionId: v.completionId }] : []));
 }

@@ -83,6 +83,8 @@ export const inspectionCompletions = sqliteTable(
     /** ISO calendar date in the club's time zone. */
     doneOn: text("done_on").notNull(),
     hours: real("hours"),
+    /** The meter `hours` were read on: the aircraft's maintenance meter when it was recorded. */
+    meter: text("meter", { enum: ["hobbs", "tach"] }),
     expiresOn: text("expires_on"),
     mechanicName: text("mechanic_name").notNull(),
     mechanicCertificate: text("mechanic_certificate").notNull(),
@@ -91,6 +93,32 @@ export const inspectionCompletions = sqliteTable(
     ...timestamps(),
   },
   (t) => [index("inspection_completions_club_id").on(t.clubId), index("inspection_completions_item").on(t.clubId, t.itemId, t.doneOn)],
+);
+
+/**
+ * Meter readings that tie one meter to the other (never a completion). Two kinds:
+ * - completionId null: the aircraft switched the meter its inspections count by; the readings
+ *   of both meters at the switch (from = the old meter, to = the new one).
+ * - completionId set: maintenance recorded where that completion stands on `toMeter`, so the
+ *   hours-based items it governs can be computed on the new meter again.
+ * Append-only (migration 0016).
+ */
+export const meterConversions = sqliteTable(
+  "meter_conversions",
+  {
+    id: id(),
+    clubId: text("club_id").notNull().references(() => clubs.id),
+    aircraftId: text("aircraft_id").notNull().references(() => aircraft.id),
+    completionId: text("completion_id").references(() => inspectionCompletions.id),
+    fromMeter: text("from_meter", { enum: ["hobbs", "tach"] }).notNull(),
+    fromReading: real("from_reading"),
+    toMeter: text("to_meter", { enum: ["hobbs", "tach"] }).notNull(),
+    toReading: real("to_reading").notNull(),
+    note: text("note"),
+    recordedById: text("recorded_by_id").references(() => users.id),
+    ...timestamps(),
+  },
+  (t) => [index("meter_conversions_club_id").on(t.clubId, t.aircraftId)],
 );
 
 export const squawks = sqliteTable(
@@ -200,6 +228,7 @@ export type NewAircraft = typeof aircraft.$inferInsert;
 export type InspectionItemRow = typeof inspectionItems.$inferSelect;
 export type NewInspectionItemRow = typeof inspectionItems.$inferInsert;
 export type InspectionCompletionRow = typeof inspectionCompletions.$inferSelect;
+export type MeterConversionRow = typeof meterConversions.$inferSelect;
 export type SquawkRow = typeof squawks.$inferSelect;
 export type SquawkEventRow = typeof squawkEvents.$inferSelect;
 export type GroundingNoticeRow = typeof groundingNotices.$inferSelect;

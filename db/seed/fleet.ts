@@ -114,6 +114,9 @@ function completionsFor(p: Plane, key: string, today: string, history: History):
   }
 }
 
+/** Every demo aircraft counts its inspections by the tach, and every completion says so. */
+const SEED_MAINTENANCE_METER = "tach" as const;
+
 function seedPlane(tx: Parameters<Parameters<Db["transaction"]>[0]>[0], club: Club, key: string, p: Plane, index: number, members: string[], mechanicUser: string | undefined) {
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const [row] = tx
@@ -121,7 +124,7 @@ function seedPlane(tx: Parameters<Parameters<Db["transaction"]>[0]>[0], club: Cl
     .values({
       clubId: club.id, registration: p.registration, make: p.make, model: p.model, typeGroup: p.typeGroup, homeField: p.homeField,
       serialNumber: `SN-0${index + 1}${p.registration.slice(-3)}`, year: 1998 + index * 3, hourlyRateMinor: p.rate * 100,
-      currentHobbs: p.hobbs, currentTach: p.tach, usedForInstruction: Boolean(p.instruction), ifrEquipped: Boolean(p.ifr), usedForIfr: Boolean(p.ifr),
+      maintenanceMeter: SEED_MAINTENANCE_METER, currentHobbs: p.hobbs, currentTach: p.tach, usedForInstruction: Boolean(p.instruction), ifrEquipped: Boolean(p.ifr), usedForIfr: Boolean(p.ifr),
       engineTboHours: 2000, engineTimeSinceOverhaul: roundHours(600 + index * 211.4),
     })
     .returning({ id: aircraft.id })
@@ -134,7 +137,7 @@ function seedPlane(tx: Parameters<Parameters<Db["transaction"]>[0]>[0], club: Cl
   const history = flightHistory({ count: 40, days: 70, today, hobbs: p.hobbs, tach: p.tach, pilots: members.length, seed: index * 97 + p.hobbs, metric });
   const done = items.flatMap((item, i) =>
     completionsFor(p, item.key, today, history).map((c) => ({
-      clubId: club.id, aircraftId, itemId: item.id, doneOn: c.doneOn, hours: c.hours, expiresOn: c.expiresOn ?? null,
+      clubId: club.id, aircraftId, itemId: item.id, doneOn: c.doneOn, hours: c.hours, meter: SEED_MAINTENANCE_METER, expiresOn: c.expiresOn ?? null,
       mechanicName: mechanics[i % mechanics.length]!.name, mechanicCertificate: mechanics[i % mechanics.length]!.certificate,
       notes: item.key === "annual" ? "Found airworthy. Logbook entry signed." : null, recordedById: mechanicUser ?? null,
     })),

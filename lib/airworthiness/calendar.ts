@@ -12,11 +12,18 @@ export function calendarDue(lastDone: string, months: number): string {
   return endOfMonthAfter(lastDone, months);
 }
 
-/** Last day still within `days` days of lastDone: the day it was done is day 0, so a check
- *  done on 1 May is good through 31 May for a 30-day period. */
+/**
+ * Last day on which something done on `lastDone` is still "within the preceding `days` days"
+ * (the VOR check, 14 CFR 91.171(a)(2); any club item counted in days). One convention for every
+ * such window in Hangarline: the day it was done is day 1, so a check done on 1 May is good
+ * through 30 May for a 30-day window. The same as passenger currency's `lastDayOfWindow`
+ * (lib/currency/passenger-currency.ts); a unit test holds the two equal. The regulation does
+ * not settle whether the day itself counts; counting it as day 1 is the reading that never
+ * gives a day more than the words allow.
+ */
 export function daysDue(lastDone: IsoDate, days: number): IsoDate {
-  if (!Number.isInteger(days) || days < 0) {
-    throw new RangeError(`days must be a whole number of days, got ${days}`);
+  if (!Number.isInteger(days) || days < 1) {
+    throw new RangeError(`days must be a whole number of days ≥ 1, got ${days}`);
   }
-  return addDays(lastDone, days);
+  return addDays(lastDone, days - 1);
 }

@@ -2,8 +2,8 @@
 // They inform the pilot in command, who still decides airworthiness before every flight.
 
 export { calendarDue, daysDue } from "./calendar";
-export { hoursDue, roundHours, formatHours } from "./hours";
-export { nextDue, collectCompletions, isHoursBased } from "./next-due";
+export { hoursDue, hoursLateness, roundHours, formatHours } from "./hours";
+export { nextDue, collectCompletions, hoursChain, isHoursBased } from "./next-due";
 export { aircraftStatus, itemApplies } from "./status";
 export { defaultInspectionItems, usesHundredHour, usesIfr, DEFAULT_DUE_SOON } from "./defaults";
 export type * from "./types";

@@ -2,7 +2,7 @@
 
 import { formatHours } from "./hours";
 import { makeReason, type RankedReason, type ReasonEffect } from "./reason";
-import type { DueSoonThresholds, InspectionItem, MissingData, NextDue } from "./types";
+import type { DueSoonThresholds, InspectionItem, MeterName, MissingData, NextDue } from "./types";
 
 function cite(item: InspectionItem): string {
   return item.source ? ` (${item.source})` : "";
@@ -14,7 +14,20 @@ const MISSING_TEXT: Record<MissingData, { code: string; text: string }> = {
   "no-current-hours": { code: "hours-unknown", text: "current meter hours not known" },
   "no-expiry-date": { code: "expiry-unknown", text: "no expiry date recorded with the last completion" },
   "no-use-record": { code: "use-unknown", text: "cumulative use not recorded" },
+  "other-meter": { code: "other-meter", text: "the last completion was read on another meter" },
 };
+
+const METER_WORD: Record<MeterName, string> = { hobbs: "Hobbs", tach: "tach" };
+
+/** Both meters named: the pilot sees why, maintenance sees what to record. */
+function otherMeterText(next: NextDue): string | null {
+  const m = next.meterMismatch;
+  if (!m) return null;
+  const at = next.lastDone?.hours;
+  const reading = typeof at === "number" ? ` at ${formatHours(at)} h` : "";
+  return `last done${reading} on the ${METER_WORD[m.completionMeter]}, but inspections now count by the ${METER_WORD[m.currentMeter]}; ` +
+    `its due point on the ${METER_WORD[m.currentMeter]} is not known until maintenance records the reading on the ${METER_WORD[m.currentMeter]}`;
+}
 
 function missingReasons(item: InspectionItem, next: NextDue): RankedReason[] {
   const effect: ReasonEffect = item.required ? "unknown" : "advisory";
@@ -22,7 +35,8 @@ function missingReasons(item: InspectionItem, next: NextDue): RankedReason[] {
   const gaps: MissingData[] = next.missing.includes("no-completion") ? ["no-completion"] : next.missing;
   return gaps.map((gap) => {
     const { code, text } = MISSING_TEXT[gap];
-    return makeReason(effect, code, `${item.name}: ${text}${cite(item)}`);
+    const detail = gap === "other-meter" ? (otherMeterText(next) ?? text) : text;
+    return makeReason(effect, code, `${item.name}: ${detail}${cite(item)}`);
   });
 }
 
@@ -31,8 +45,10 @@ function hoursOverdueText(next: NextDue, currentHours: number): string {
   const limit = next.overrunLimitHours ?? due;
   const base = `due at ${formatHours(due)} h, meter now ${formatHours(currentHours)} h`;
   if (limit <= due) return base;
+  // The overrun is a limitation of a grounded aircraft (14 CFR 91.409(b)), never a permission
+  // to fly: the words say "grounded" first and what alone remains allowed.
   if (currentHours <= limit) {
-    return `${base}; may be flown only to reach a place where it can be done, up to ${formatHours(limit)} h`;
+    return `${base}; grounded — only a ferry flight of up to ${formatHours(limit - currentHours)} h (to ${formatHours(limit)} h) to reach the inspection`;
   }
   return `${base}, beyond the overrun allowance of ${formatHours(limit)} h`;
 }

@@ -2,8 +2,8 @@
 
 import { compareIsoDates, daysBetween, type IsoDate } from "@/lib/dates";
 import { calendarDue, daysDue } from "./calendar";
-import { hoursDue, roundHours } from "./hours";
-import type { Completion, InspectionItem, MissingData, NextDue } from "./types";
+import { hoursDue, hoursLateness, roundHours } from "./hours";
+import type { Completion, InspectionItem, LateCompletion, MeterName, MissingData, NextDue } from "./types";
 
 function hasHours(c: Completion): c is Completion & { hours: number } {
   return typeof c.hours === "number" && Number.isFinite(c.hours);
@@ -22,22 +22,40 @@ export function collectCompletions(item: InspectionItem, siblings: InspectionIte
   });
 }
 
-/** The due point after the latest completion, carrying 91.409(b) excess through the history.
- *  A completion without a meter reading breaks the chain: the next one starts afresh. */
-function chainHoursDue(
-  completions: Completion[],
-  intervalHours: number,
-  overrunHours: number | undefined,
-): { dueAt: number; overrunLimitAt: number } | null {
-  let previous: { dueAt: number; overrunLimitAt: number } | null = null;
+/** Two readings are comparable unless both meters are known and differ. */
+function sameMeter(a: MeterName | null | undefined, b: MeterName | null | undefined): boolean {
+  return !a || !b || a === b;
+}
+
+type ChainPoint = { dueAt: number; overrunLimitAt: number; late: LateCompletion | null };
+
+/** One step per completion with hours, oldest first: the due point it set and how late it
+ *  was against the one before. A completion without a meter reading, or read on another meter
+ *  than the one before, breaks the chain: the next one starts afresh. */
+export function hoursChain(completions: Completion[], intervalHours: number, overrunHours: number | undefined): { completion: Completion; point: ChainPoint | null }[] {
+  let previous: ChainPoint | null = null;
+  let previousMeter: MeterName | null | undefined;
+  const out: { completion: Completion; point: ChainPoint | null }[] = [];
   for (const c of completions) {
     if (!hasHours(c)) {
       previous = null;
+      out.push({ completion: c, point: null });
       continue;
     }
-    previous = hoursDue({ lastDoneAt: c.hours, intervalHours, overrunHours, previousDueAt: previous?.dueAt });
+    if (previous && !sameMeter(previousMeter, c.meter)) previous = null;
+    const due = hoursDue({ lastDoneAt: c.hours, intervalHours, overrunHours, previousDueAt: previous?.dueAt });
+    const lateness = hoursLateness({ lastDoneAt: c.hours, previousDueAt: previous?.dueAt, overrunHours });
+    const late: LateCompletion | null = previous && lateness.lateHours > 0 ? { ...lateness, fellDueAt: previous.dueAt, countsFromDuePoint: due.dueAt === roundHours(previous.dueAt + intervalHours) } : null;
+    previous = { ...due, late };
+    previousMeter = c.meter ?? previousMeter;
+    out.push({ completion: c, point: previous });
   }
-  return previous;
+  return out;
+}
+
+/** The due point after the latest completion, carrying 91.409(b) excess through the history. */
+function chainHoursDue(completions: Completion[], intervalHours: number, overrunHours: number | undefined): ChainPoint | null {
+  return hoursChain(completions, intervalHours, overrunHours).at(-1)?.point ?? null;
 }
 
 function dueDateOf(item: InspectionItem, last: Completion, missing: MissingData[]): IsoDate | null {
@@ -63,13 +81,24 @@ export function isHoursBased(item: InspectionItem): boolean {
 /**
  * Next due date and/or hours for one item. `siblings` are the aircraft's other items, needed
  * only when this item is satisfied by another (an annual counts as a 100-hour, 91.409(b)).
- * currentHours may be null or NaN when the meter reading is not known.
+ * currentHours may be null or NaN when the meter reading is not known; `meter` is the meter it
+ * is read on.
+ *
+ * Meter provenance: when the governing completion was read on another meter than `meter`
+ * (the aircraft switched from Hobbs to tach, or back), its due point cannot be placed on the
+ * meter now read: the two run at different rates and nothing in the completion says where it
+ * stands on the other. The hours part is then "other-meter" (Check status) until maintenance
+ * records a reading on the new meter. When either meter is absent or null (records from
+ * before meters were stored, callers that do not say), the completion is taken as read on
+ * the meter now: the behaviour before this rule, kept so that old callers see no change; the
+ * app itself stores a meter on every completion, so it always has both.
  */
 export function nextDue(
   item: InspectionItem,
   today: IsoDate,
   currentHours: number | null,
   siblings: InspectionItem[] = [],
+  meter?: MeterName,
 ): NextDue {
   const completions = collectCompletions(item, siblings);
   const last = completions.at(-1) ?? null;
@@ -87,6 +116,8 @@ export function nextDue(
     useLeftHours: null,
     overdue: false,
     missing,
+    meterMismatch: null,
+    late: null,
   };
 
   if (item.usage) {
@@ -107,11 +138,15 @@ export function nextDue(
   const rule = item.rule;
   if (rule.kind === "hours" || rule.kind === "months-or-hours") {
     if (!hasHours(last)) missing.push("no-completion-hours");
-    else {
+    else if (!sameMeter(last.meter, meter)) {
+      missing.push("other-meter");
+      result.meterMismatch = { completionMeter: last.meter as MeterName, currentMeter: meter as MeterName };
+    } else {
       const due = chainHoursDue(completions, rule.hours, rule.overrunHours);
       if (due) {
         result.dueHours = due.dueAt;
         result.overrunLimitHours = due.overrunLimitAt;
+        result.late = due.late;
       }
     }
     const meterKnown = typeof currentHours === "number" && Number.isFinite(currentHours);

@@ -38,7 +38,7 @@ export function aircraftStatus(
   ];
   for (const item of input.items) {
     if (!itemApplies(item, input.flags)) continue;
-    const next = nextDue(item, today, currentHours, input.items);
+    const next = nextDue(item, today, currentHours, input.items, input.meter);
     reasons.push(...itemReasons(item, next, currentHours, soon));
   }
   // Stable sort: the worst first, in input order within each kind.

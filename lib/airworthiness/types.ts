@@ -28,10 +28,18 @@ export type InspectionRule =
   /** Counted to the day: due `days` days after the day it was done. */
   | { kind: "days"; days: number };
 
+/** The two meters hours can be read on. */
+export type MeterName = "hobbs" | "tach";
+
 export interface Completion {
+  /** The record's id, when it has one (lets the app point at the governing completion). */
+  id?: string;
   date: IsoDate;
   /** Meter hours when it was done; needed by hours-based items. */
   hours?: number | null;
+  /** The meter `hours` were read on. Absent or null: not recorded (taken as the aircraft's
+   *  current meter, the behaviour from before meters were stored; see nextDue). */
+  meter?: MeterName | null;
   /** For fixed-date items: the expiry this completion set (battery 50 % life, registration). */
   expiresOn?: IsoDate | null;
 }
@@ -101,6 +109,9 @@ export interface AircraftStatusInput {
   notices?: GroundingNotice[];
   /** Defaults to DEFAULT_DUE_SOON when the club has not set its own. */
   dueSoon?: DueSoonThresholds;
+  /** The meter `currentHours` is read on (the one the hours-based items count). Absent: every
+   *  completion is taken as read on it (the behaviour from before meters were stored). */
+  meter?: MeterName;
   /** ISO instant of "now" for notice effective times; without it, a notice counts from the
    *  start of its effective date (earlier, never later, than the real instant). */
   now?: string;
@@ -120,7 +131,19 @@ export interface AircraftStatusResult {
 }
 
 export type MissingData =
-  "no-completion" | "no-completion-hours" | "no-current-hours" | "no-expiry-date" | "no-use-record";
+  "no-completion" | "no-completion-hours" | "no-current-hours" | "no-expiry-date" | "no-use-record" | "other-meter";
+
+/** How late the governing completion of an hours-based item was done (14 CFR 91.409(b)). */
+export interface LateCompletion {
+  /** Hours flown past the point where it fell due. */
+  lateHours: number;
+  /** Later than the due point plus the overrun allowance. */
+  beyondOverrun: boolean;
+  /** The due point it was late against. */
+  fellDueAt: number;
+  /** The next interval counts from fellDueAt (false: a whole interval late, counted afresh). */
+  countsFromDuePoint: boolean;
+}
 
 /** What comes due next for one item; null fields do not apply or cannot be computed. */
 export interface NextDue {
@@ -140,4 +163,8 @@ export interface NextDue {
   useLeftHours: number | null;
   overdue: boolean;
   missing: MissingData[];
+  /** Set with "other-meter": the governing completion's meter and the aircraft's meter now. */
+  meterMismatch?: { completionMeter: MeterName; currentMeter: MeterName } | null;
+  /** Set when the governing completion was done after the item fell due (hours-based). */
+  late?: LateCompletion | null;
 }

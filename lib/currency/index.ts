@@ -9,5 +9,5 @@ export {
   type CurrencyStatus,
   type LandingEntry,
 } from "./passenger-currency";
-export { ageOn, basicMedStatus, medicalDurationMonths, medicalExpiry } from "./medical";
+export { ageOn, basicMedStatus, medicalDurationMonths, medicalExpiry, medicalMonthsFor, medicalPrivilegeDates, MEDICAL_PRIVILEGES, type MedicalPrivilege } from "./medical";
 export { documentExpiryStatus, flightReviewDue, type DocumentStatus } from "./flight-review";

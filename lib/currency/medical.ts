@@ -19,18 +19,60 @@ export function medicalDurationMonths(ageOnExamDate: number): 24 | 60 {
   return ageOnExamDate < 40 ? 60 : 24;
 }
 
+/** The privileges a medical can carry: ATP (first class), commercial (second), private (third). */
+export type MedicalPrivilege = "private" | "commercial" | "atp";
+export const MEDICAL_PRIVILEGES: readonly MedicalPrivilege[] = ["atp", "commercial", "private"];
+
 /**
- * Last day of private-pilot privileges on a medical certificate, 14 CFR 61.23(d): any class
- * (first and second revert to third-class privileges) lasts 60 calendar months when the
- * pilot is under 40 on the exam date, 24 when 40 or older, and expires at the end of the
- * last day of the Nth month after the month of the exam.
+ * Calendar months a medical of `medicalClass` lasts for `privilege`, or null when that class
+ * cannot carry that privilege; 14 CFR 61.23(d):
+ * - first class: ATP 12 months under 40, 6 months 40 or over (61.23(d)(1)(i), (ii)); commercial
+ *   12 months at any age (61.23(d)(1)(iii)); private 60 / 24 (61.23(d)(1)(iv), (v));
+ * - second class: commercial 12 (61.23(d)(2)(i)); private 60 / 24 (61.23(d)(2)(ii), (iii)); no ATP;
+ * - third class: private 60 / 24 (61.23(d)(3)); no commercial, no ATP (61.23(a)).
+ * Age is the age on the exam date. (The 61.23(d) rows for flight instructor and other
+ * third-class operations come to the same as "private".)
  */
-export function medicalExpiry(input: { medicalClass: 1 | 2 | 3; examDate: IsoDate; birthDate: IsoDate }): IsoDate {
+export function medicalMonthsFor(medicalClass: 1 | 2 | 3, privilege: MedicalPrivilege, ageOnExamDate: number): number | null {
+  const under40 = ageOnExamDate < 40;
+  switch (privilege) {
+    case "atp":
+      return medicalClass === 1 ? (under40 ? 12 : 6) : null;
+    case "commercial":
+      return medicalClass === 1 || medicalClass === 2 ? 12 : null;
+    case "private":
+      return medicalDurationMonths(ageOnExamDate);
+  }
+}
+
+type MedicalExpiryInput = { medicalClass: 1 | 2 | 3; examDate: IsoDate; birthDate: IsoDate };
+
+/**
+ * Last day of `privilege` (default "private") on a medical certificate, 14 CFR 61.23(d): the
+ * end of the last day of the Nth calendar month after the month of the exam, N from
+ * `medicalMonthsFor` (age on the exam date); null when the class cannot carry that privilege
+ * (a third class never carries commercial privileges, only a first class carries ATP ones).
+ * A first or second class that has run out for its higher privilege still carries the lower
+ * ones to their own dates.
+ */
+export function medicalExpiry(input: MedicalExpiryInput & { privilege?: "private" }): IsoDate;
+export function medicalExpiry(input: MedicalExpiryInput & { privilege?: MedicalPrivilege }): IsoDate | null;
+export function medicalExpiry(input: MedicalExpiryInput & { privilege?: MedicalPrivilege }): IsoDate | null {
   if (input.medicalClass !== 1 && input.medicalClass !== 2 && input.medicalClass !== 3) {
     throw new RangeError(`Medical class must be 1, 2 or 3, got ${String(input.medicalClass)}`);
   }
-  const months = medicalDurationMonths(ageOn(input.birthDate, input.examDate));
-  return endOfMonthAfter(input.examDate, months);
+  const privilege = input.privilege ?? "private";
+  if (!MEDICAL_PRIVILEGES.includes(privilege)) throw new RangeError(`Privilege must be private, commercial or atp, got ${String(privilege)}`);
+  const months = medicalMonthsFor(input.medicalClass, privilege, ageOn(input.birthDate, input.examDate));
+  return months === null ? null : endOfMonthAfter(input.examDate, months);
+}
+
+/** Every privilege the class carries, highest first, with its last day (14 CFR 61.23(d)). */
+export function medicalPrivilegeDates(input: MedicalExpiryInput): { privilege: MedicalPrivilege; lastDay: IsoDate }[] {
+  return MEDICAL_PRIVILEGES.flatMap((privilege) => {
+    const lastDay = medicalExpiry({ ...input, privilege });
+    return lastDay ? [{ privilege, lastDay }] : [];
+  });
 }
 
 // Plain months (not calendar months): the same day number N months later, or the month's last

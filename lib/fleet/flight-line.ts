@@ -15,9 +15,11 @@ import type {
   FleetAircraftRecord,
   FleetCompletionRecord,
   FleetItemRecord,
+  FleetMeterConversionRecord,
   FleetNoticeRecord,
   FleetSquawkRecord,
   FlightLineEntry,
+  MeterName,
 } from "./types";
 
 export interface FleetRecords {
@@ -28,6 +30,8 @@ export interface FleetRecords {
   squawks: FleetSquawkRecord[];
   /** Notices not lifted. */
   notices: FleetNoticeRecord[];
+  /** Completion readings on another meter (meter provenance); absent means none. */
+  conversions?: FleetMeterConversionRecord[];
 }
 
 function groupBy<T>(rows: T[], key: (row: T) => string): Map<string, T[]> {
@@ -74,11 +78,11 @@ export function pickNextDue(due: DueSummary[], min = 3): DueSummary[] {
 }
 
 /** The due list of one aircraft's applicable items. */
-export function summarizeDue(items: InspectionItem[], flags: ReturnType<typeof toFlags>, today: string, hours: number | null, soon: DueSoonThresholds): DueSummary[] {
+export function summarizeDue(items: InspectionItem[], flags: ReturnType<typeof toFlags>, today: string, hours: number | null, soon: DueSoonThresholds, meter?: MeterName): DueSummary[] {
   const list: DueSummary[] = [];
   for (const item of items) {
     if (!itemApplies(item, flags)) continue;
-    const next = nextDue(item, today, hours, items);
+    const next = nextDue(item, today, hours, items, meter);
     const daysSoon = next.daysLeft !== null && next.daysLeft >= 0 && next.daysLeft <= soon.days;
     const hoursSoon = next.hoursLeft !== null && next.hoursLeft >= 0 && next.hoursLeft <= soon.hours;
     list.push({
@@ -87,6 +91,9 @@ export function summarizeDue(items: InspectionItem[], flags: ReturnType<typeof t
       source: item.source ?? null,
       lastDoneOn: next.lastDone?.date ?? null,
       lastDoneHours: next.lastDone?.hours ?? null,
+      lastDoneMeter: next.lastDone?.meter ?? null,
+      otherMeter: next.meterMismatch ?? null,
+      late: next.late ?? null,
       dueDate: next.dueDate,
       daysLeft: next.daysLeft,
       dueHours: next.dueHours,
@@ -112,7 +119,7 @@ function cannotCompute(error: unknown): AircraftStatusResult {
 }
 
 export function buildFlightLineEntry(
-  records: { aircraft: FleetAircraftRecord; items: FleetItemRecord[]; completions: FleetCompletionRecord[]; squawks: FleetSquawkRecord[]; notices: FleetNoticeRecord[] },
+  records: { aircraft: FleetAircraftRecord; items: FleetItemRecord[]; completions: FleetCompletionRecord[]; squawks: FleetSquawkRecord[]; notices: FleetNoticeRecord[]; conversions?: FleetMeterConversionRecord[] },
   today: string,
   now: string,
   dueSoon: DueSoonThresholds,
@@ -124,7 +131,7 @@ export function buildFlightLineEntry(
   try {
     const input = buildStatusInput({ ...records, dueSoon, now });
     result = aircraftStatus(input, today, hours);
-    due = summarizeDue(input.items, input.flags, today, hours, dueSoon);
+    due = summarizeDue(input.items, input.flags, today, hours, dueSoon, input.meter);
   } catch (error) {
     result = cannotCompute(error);
   }
@@ -161,7 +168,7 @@ export function buildFlightLine(records: FleetRecords, today: string, now: strin
   const notices = groupBy(records.notices, (n) => n.aircraftId);
   return records.aircraft.map((a) =>
     buildFlightLineEntry(
-      { aircraft: a, items: items.get(a.id) ?? [], completions: completions.get(a.id) ?? [], squawks: squawks.get(a.id) ?? [], notices: notices.get(a.id) ?? [] },
+      { aircraft: a, items: items.get(a.id) ?? [], completions: completions.get(a.id) ?? [], squawks: squawks.get(a.id) ?? [], notices: notices.get(a.id) ?? [], conversions: records.conversions },
       today,
       now,
       dueSoon,

@@ -10,7 +10,7 @@ import type {
   InspectionRule,
   Squawk,
 } from "@/lib/airworthiness";
-import type { FleetAircraftRecord, FleetCompletionRecord, FleetItemRecord, FleetNoticeRecord, FleetSquawkRecord } from "./types";
+import type { FleetAircraftRecord, FleetCompletionRecord, FleetItemRecord, FleetMeterConversionRecord, FleetNoticeRecord, FleetSquawkRecord, MeterName } from "./types";
 
 export class RuleConfigError extends Error {}
 
@@ -42,7 +42,19 @@ export function toFlags(a: Pick<FleetAircraftRecord, "usedForHire" | "usedForIns
   return { usedForHire: a.usedForHire, usedForInstruction: a.usedForInstruction, ifrEquipped: a.ifrEquipped, usedForIfr: a.usedForIfr };
 }
 
-export function toInspectionItem(item: FleetItemRecord, completions: FleetCompletionRecord[]): InspectionItem {
+/**
+ * A completion as the rules see it. When maintenance has recorded where it stands on the meter
+ * the aircraft counts by now (a meter conversion of that completion), that reading is used;
+ * the completion row itself is never changed (append-only).
+ */
+export function toCompletion(c: FleetCompletionRecord, meterNow?: MeterName, conversions: FleetMeterConversionRecord[] = []): Completion {
+  const own: Completion = { id: c.id, date: c.doneOn, hours: c.hours, expiresOn: c.expiresOn, meter: c.meter ?? null };
+  if (!meterNow || !c.id || !c.meter || c.meter === meterNow) return own;
+  const converted = conversions.findLast((v) => v.completionId === c.id && v.toMeter === meterNow);
+  return converted ? { ...own, hours: converted.toReading, meter: converted.toMeter } : own;
+}
+
+export function toInspectionItem(item: FleetItemRecord, completions: FleetCompletionRecord[], meterNow?: MeterName, conversions: FleetMeterConversionRecord[] = []): InspectionItem {
   return {
     key: item.key,
     name: item.name,
@@ -55,7 +67,7 @@ export function toInspectionItem(item: FleetItemRecord, completions: FleetComple
     source: item.source ?? undefined,
     completions: completions
       .filter((c) => c.itemId === item.id)
-      .map((c): Completion => ({ date: c.doneOn, hours: c.hours, expiresOn: c.expiresOn })),
+      .map((c) => toCompletion(c, meterNow, conversions)),
   };
 }
 
@@ -88,6 +100,7 @@ export function buildStatusInput(input: {
   completions: FleetCompletionRecord[];
   squawks: FleetSquawkRecord[];
   notices: FleetNoticeRecord[];
+  conversions?: FleetMeterConversionRecord[];
   dueSoon: DueSoonThresholds;
   now: string;
 }): AircraftStatusInput {
@@ -100,10 +113,11 @@ export function buildStatusInput(input: {
   }
   return {
     flags: toFlags(input.aircraft),
-    items: input.items.filter((i) => i.aircraftId === id).map((i) => toInspectionItem(i, byItem.get(i.id) ?? [])),
+    items: input.items.filter((i) => i.aircraftId === id).map((i) => toInspectionItem(i, byItem.get(i.id) ?? [], input.aircraft.maintenanceMeter, input.conversions)),
     squawks: input.squawks.filter((s) => s.aircraftId === id).map(toSquawk),
     notices: input.notices.filter((n) => n.aircraftId === id).map(toNotice),
     dueSoon: input.dueSoon,
+    meter: input.aircraft.maintenanceMeter,
     now: input.now,
   };
 }

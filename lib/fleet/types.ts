@@ -1,7 +1,7 @@
 // Plain record shapes the fleet rules work on. The database layer maps its rows to these, so
 // lib/fleet stays free of the framework and the database.
 
-import type { AircraftStatus, StatusReason } from "@/lib/airworthiness";
+import type { AircraftStatus, LateCompletion, StatusReason } from "@/lib/airworthiness";
 
 export type RuleKind = "calendar-months" | "hours" | "months-or-hours" | "fixed-date" | "days";
 export type MeterName = "hobbs" | "tach";
@@ -44,10 +44,20 @@ export interface FleetItemRecord {
 }
 
 export interface FleetCompletionRecord {
+  id?: string;
   itemId: string;
   doneOn: string;
   hours: number | null;
   expiresOn: string | null;
+  /** The meter `hours` were read on (stored with every completion since migration 0016). */
+  meter?: MeterName | null;
+}
+
+/** Maintenance's reading of one completion on another meter (meter_conversions with a completion). */
+export interface FleetMeterConversionRecord {
+  completionId: string;
+  toMeter: MeterName;
+  toReading: number;
 }
 
 export interface FleetSquawkRecord {
@@ -80,6 +90,12 @@ export interface DueSummary {
   source: string | null;
   lastDoneOn: string | null;
   lastDoneHours: number | null;
+  /** The meter lastDoneHours were read on, when recorded. */
+  lastDoneMeter?: MeterName | null;
+  /** The last completion was read on another meter than the one inspections count by now. */
+  otherMeter?: { completionMeter: MeterName; currentMeter: MeterName } | null;
+  /** The last completion was done after the item fell due (hours-based, 14 CFR 91.409(b)). */
+  late?: LateCompletion | null;
   dueDate: string | null;
   daysLeft: number | null;
   dueHours: number | null;

@@ -130,7 +130,18 @@ export const updateAircraftSchema = z.object({
   ...aircraftFields,
   currentHobbs: hoursField("the current Hobbs"),
   currentTach: hoursField("the current tach"),
+  /** Required when "Inspections count by" changes: the reading on the new meter at the switch. */
+  conversionReading: optionalHours("the reading on the new meter"),
+  /** Required when a current reading is lowered (maintenance only). */
+  readingChangeReason: optionalText("the reason", 500),
   photo: filesField("photo", 1),
+});
+
+/** Maintenance records where one completion stands on the meter the aircraft counts by now. */
+export const recordMeterConversionSchema = z.object({
+  itemId: id("an inspection item"),
+  reading: hoursField("the reading on the new meter"),
+  note: optionalText("the note", 500),
 });
 
 // ---------------------------------------------------------------- inspection items

@@ -44,6 +44,8 @@ export const recordCompletion = clubAction({
         itemId: item.id,
         doneOn: input.doneOn,
         hours: input.hours,
+        // Meter provenance: the reading is on the meter the aircraft's inspections count by now.
+        meter: plane.maintenanceMeter,
         expiresOn: item.ruleKind === "fixed-date" ? input.expiresOn : null,
         mechanicName: input.mechanicName,
         mechanicCertificate: input.mechanicCertificate,

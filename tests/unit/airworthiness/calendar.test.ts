@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { calendarDue, daysDue } from "@/lib/airworthiness";
+import { lastDayOfWindow } from "@/lib/currency";
 
 describe("calendarDue: calendar months run to the end of the month", () => {
   it("gives the examples of the annual and the ELT inspection", () => {
@@ -42,20 +43,30 @@ describe("calendarDue: calendar months run to the end of the month", () => {
 });
 
 describe("daysDue: periods in days are counted to the day, not in calendar months", () => {
-  it("keeps a 30-day VOR check good through day 30", () => {
-    // 14 CFR 91.171(a) "preceding 30 days"; the check day is day 0 (our reading, own arithmetic)
-    expect(daysDue("2026-05-01", 30)).toBe("2026-05-31");
-    expect(daysDue("2026-04-10", 30)).toBe("2026-05-10"); // not the end of May: days, not calendar months
+  it("keeps a 30-day VOR check good through day 30, the check day being day 1", () => {
+    // 14 CFR 91.171(a)(2) "within the preceding 30 days"; the check day is day 1 (our one convention)
+    expect(daysDue("2026-05-01", 30)).toBe("2026-05-30");
+    expect(daysDue("2026-04-10", 30)).toBe("2026-05-09"); // not the end of May: days, not calendar months
+    expect(daysDue("2026-05-01", 1)).toBe("2026-05-01"); // own arithmetic: a 1-day window is the day itself
   });
 
   it("counts across a leap day and across the new year", () => {
-    expect(daysDue("2024-02-10", 30)).toBe("2024-03-11"); // 14 CFR 91.171(a); 2024 has 29 February
-    expect(daysDue("2025-02-10", 30)).toBe("2025-03-12"); // 14 CFR 91.171(a); 2025 does not
-    expect(daysDue("2025-12-15", 30)).toBe("2026-01-14"); // 14 CFR 91.171(a); own arithmetic
+    expect(daysDue("2024-02-10", 30)).toBe("2024-03-10"); // 14 CFR 91.171(a)(2); 2024 has 29 February
+    expect(daysDue("2025-02-10", 30)).toBe("2025-03-11"); // 14 CFR 91.171(a)(2); 2025 does not
+    expect(daysDue("2025-12-15", 30)).toBe("2026-01-13"); // 14 CFR 91.171(a)(2); own arithmetic
   });
 
-  it("refuses fractional or negative days", () => {
+  it("uses the same day count as passenger currency's window", () => {
+    // 14 CFR 61.57(a) and 91.171(a)(2) both say "preceding N days": one convention for both
+    for (const date of ["2024-02-10", "2025-12-15", "2026-05-01", "2026-03-31"]) {
+      for (const n of [1, 2, 30, 90, 365]) expect(daysDue(date, n)).toBe(lastDayOfWindow(date, n));
+    }
+    expect(lastDayOfWindow("2026-05-01", 90)).toBe("2026-07-29"); // 14 CFR 61.57(a): day 1 + 89
+  });
+
+  it("refuses fractional, zero or negative days", () => {
     expect(() => daysDue("2026-05-01", 0.5)).toThrow(RangeError);
+    expect(() => daysDue("2026-05-01", 0)).toThrow(RangeError);
     expect(() => daysDue("2026-05-01", -30)).toThrow(RangeError);
   });
 });

@@ -18,7 +18,7 @@ const CURRENT: Record<string, Completion[]> = {
   "elt-battery": [{ date: "2024-09-01", expiresOn: "2028-09-30" }],
   transponder: [{ date: "2025-01-20" }], // good through 2027-01-31
   "altimeter-static": [{ date: "2025-02-01" }], // good through 2027-02-28
-  "vor-check": [{ date: "2026-05-10" }], // good through 2026-06-09
+  "vor-check": [{ date: "2026-05-10" }], // good through 2026-06-08 (the check day is day 1)
   "oil-change": [{ date: "2026-04-01", hours: 1050 }], // due 2026-08-31 or 1100.0
 };
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatHours, hoursDue, roundHours } from "@/lib/airworthiness";
+import { formatHours, hoursDue, hoursLateness, roundHours } from "@/lib/airworthiness";
 
 const HUNDRED = { intervalHours: 100, overrunHours: 10 }; // 14 CFR 91.409(b): 100 h, up to 10 h excess
 
@@ -31,10 +31,34 @@ describe("hoursDue: the 100-hour inspection", () => {
     expect(hoursDue({ lastDoneAt: 1100, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1200);
   });
 
-  it("starts from when it was done once the overrun allowance was exceeded", () => {
-    // Our documented choice: 14 CFR 91.409(b) carries only excess within the 10 hours
-    expect(hoursDue({ lastDoneAt: 1110.1, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1210.1);
-    expect(hoursDue({ lastDoneAt: 1125, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1225);
+  it("counts from where it fell due even when done beyond the overrun: the late time is not handed back", () => {
+    // 14 CFR 91.409(b) "excess time ... must be included in computing the next 100 hours"; issue 11's example
+    expect(hoursDue({ lastDoneAt: 1112, intervalHours: 100, overrunHours: 10, previousDueAt: 1100 }).dueAt).toBe(1200);
+    // 14 CFR 91.409(b); own arithmetic: 0.1 h beyond the overrun
+    expect(hoursDue({ lastDoneAt: 1110.1, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1200);
+    // 14 CFR 91.409(b); own arithmetic: 25 h late, the next still at 1200.0, overrun limit 1210.0
+    expect(hoursDue({ lastDoneAt: 1125, previousDueAt: 1100, ...HUNDRED })).toEqual({ dueAt: 1200, overrunLimitAt: 1210 });
+  });
+
+  it("starts afresh when done a whole interval or more after it fell due (a gap in the records)", () => {
+    // Our documented choice beside hoursDue: no 100-hour is skipped lawfully (14 CFR 91.409(b)), so the
+    // history cannot place a due point across the gap; the lateness is still flagged (hoursLateness)
+    expect(hoursDue({ lastDoneAt: 1200, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1300);
+    expect(hoursDue({ lastDoneAt: 1250.5, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1350.5);
+    // own arithmetic: 99.9 h late still counts from the due point
+    expect(hoursDue({ lastDoneAt: 1199.9, previousDueAt: 1100, ...HUNDRED }).dueAt).toBe(1200);
+  });
+
+  it("says how late an inspection was, for the records", () => {
+    // 14 CFR 91.409(b): 1112.0 done against 1100.0 due is 12.0 h late, beyond the 10-hour overrun
+    expect(hoursLateness({ lastDoneAt: 1112, previousDueAt: 1100, overrunHours: 10 })).toEqual({ lateHours: 12, beyondOverrun: true });
+    // 14 CFR 91.409(b): 6.0 h late is within the 10-hour overrun
+    expect(hoursLateness({ lastDoneAt: 1106, previousDueAt: 1100, overrunHours: 10 })).toEqual({ lateHours: 6, beyondOverrun: false });
+    // 14 CFR 91.409(b): exactly at the overrun limit is still within it
+    expect(hoursLateness({ lastDoneAt: 1110, previousDueAt: 1100, overrunHours: 10 })).toEqual({ lateHours: 10, beyondOverrun: false });
+    // own arithmetic: early or on time is not late
+    expect(hoursLateness({ lastDoneAt: 1090, previousDueAt: 1100, overrunHours: 10 })).toEqual({ lateHours: 0, beyondOverrun: false });
+    expect(hoursLateness({ lastDoneAt: 1000 })).toEqual({ lateHours: 0, beyondOverrun: false });
   });
 
   it("has no overrun unless one is given", () => {

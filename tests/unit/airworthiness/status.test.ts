@@ -76,8 +76,8 @@ describe("aircraftStatus: the 100-hour", () => {
     const result = aircraftStatus(trainer([{ date: "2026-03-02", hours: 1020 }]), TODAY, 1125);
     expect(result.status).toBe("grounded"); // 14 CFR 91.409(b): due 1120.0, allowance to 1130.0 for the ferry only
     expect(result.reasons[0]?.text).toBe(
-      "100-hour inspection overdue: due at 1120.0 h, meter now 1125.0 h; may be flown only to reach a place where " +
-        "it can be done, up to 1130.0 h (14 CFR 91.409(b))",
+      "100-hour inspection overdue: due at 1120.0 h, meter now 1125.0 h; grounded — only a ferry flight of up to " +
+        "5.0 h (to 1130.0 h) to reach the inspection (14 CFR 91.409(b))",
     );
     const beyond = aircraftStatus(trainer([{ date: "2026-03-02", hours: 1020 }]), TODAY, 1131.2);
     expect(beyond.reasons[0]?.text).toContain("beyond the overrun allowance of 1130.0 h"); // 14 CFR 91.409(b)
@@ -193,8 +193,8 @@ describe("aircraftStatus: IFR-only tests", () => {
   it("counts the VOR check in days", () => {
     const items = changeItem(currentItems(IFR_TRAINER), "vor-check", { completions: [{ date: "2026-04-10" }] });
     const input = aircraft(IFR_TRAINER, { items });
-    expect(aircraftStatus(input, "2026-05-10", METER).status).toBe("flyable"); // 14 CFR 91.171(a): day 30
-    expect(aircraftStatus(input, "2026-05-11", METER).status).toBe("limited"); // 14 CFR 91.171(a): day 31
+    expect(aircraftStatus(input, "2026-05-09", METER).status).toBe("flyable"); // 14 CFR 91.171(a)(2): day 30, the check day being day 1
+    expect(aircraftStatus(input, "2026-05-10", METER).status).toBe("limited"); // 14 CFR 91.171(a)(2): day 31
   });
 });
 

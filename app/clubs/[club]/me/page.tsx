@@ -9,10 +9,17 @@ import { PageHeader } from "@/components/ui/page-header";
 import { getMemberCurrency } from "@/db/queries/currency";
 import { listCheckouts, listFleetTypeGroups, listOutsideFlights } from "@/db/queries/safety-checkouts";
 import { getCurrentMedical, getOwnBirthDate, listMemberDocuments } from "@/db/queries/safety-documents";
+import { medicalPrivilegeDates, type MedicalPrivilege } from "@/lib/currency";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "My currency & documents" };
+
+const PRIVILEGE_WORDS: Record<MedicalPrivilege, string> = {
+  atp: "Airline transport pilot privileges",
+  commercial: "Commercial pilot privileges",
+  private: "Private pilot privileges",
+};
 
 export default async function MePage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
@@ -25,6 +32,11 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
   const mine = listCheckouts(db, club.id, { userId: user.id, includeRevoked: true });
   const outside = listOutsideFlights(db, club.id, user.id);
   const typeGroups = listFleetTypeGroups(db, club.id);
+  // 14 CFR 61.23(d): a first or second class lasts for each privilege it carries to its own date.
+  const cls = medical?.kind === "faa_class" ? medical.medicalClass : null;
+  const privilegeDates = medical && birthDate && (cls === 1 || cls === 2 || cls === 3)
+    ? medicalPrivilegeDates({ medicalClass: cls, examDate: medical.examDate, birthDate })
+    : null;
   return (
     <div className="max-w-5xl">
       <PageHeader title="My currency & documents" lead={`As of ${today}. Computed from the club's flight log and the flights you add from elsewhere. You stay responsible for your own currency.`} />
@@ -55,7 +67,11 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
               <dt className="font-bold">Kind</dt><dd>{medical.kind === "basicmed" ? "BasicMed" : `Class ${medical.medicalClass}`}</dd>
               <dt className="font-bold">Exam</dt><dd className="font-mono tabular">{medical.examDate}</dd>
               {medical.courseDate ? <><dt className="font-bold">Course</dt><dd className="font-mono tabular">{medical.courseDate}</dd></> : null}
-              <dt className="font-bold">Valid through</dt><dd className="font-mono tabular">{medical.expiresOn}</dd>
+              {privilegeDates ? privilegeDates.map((p) => (
+                <div key={p.privilege} className="contents" data-privilege={p.privilege}>
+                  <dt className="font-bold">{PRIVILEGE_WORDS[p.privilege]} through</dt><dd className="font-mono tabular">{p.lastDay}</dd>
+                </div>
+              )) : <><dt className="font-bold">{medical.kind === "basicmed" ? "Valid through" : "Private pilot privileges through"}</dt><dd className="font-mono tabular">{medical.expiresOn}</dd></>}
               {medical.limitations ? <><dt className="font-bold">Limitations</dt><dd>{medical.limitations}</dd></> : null}
               {birthDate ? <><dt className="font-bold">Date of birth (only you see it)</dt><dd className="font-mono tabular">{birthDate}</dd></> : null}
             </dl>

@@ -6,7 +6,7 @@ import { CompletionHistory } from "@/components/fleet/completion-history";
 import { DueTable } from "@/components/fleet/due-table";
 import { FlightsTable } from "@/components/fleet/flights-table";
 import { LogFlightForm } from "@/components/fleet/flight-forms";
-import { CreateItemForm, RecordCompletionForm, UpdateItemForm } from "@/components/fleet/inspection-forms";
+import { CreateItemForm, MeterConversionForm, RecordCompletionForm, UpdateItemForm } from "@/components/fleet/inspection-forms";
 import { IssueNoticeForm } from "@/components/fleet/notice-forms";
 import { NoticeList } from "@/components/fleet/notice-list";
 import { ReportSquawkForm } from "@/components/fleet/squawk-forms";
@@ -98,15 +98,19 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
         <DueTable due={entry.due} caption={`Inspection items of ${plane.registration}`} />
         {may.record || may.editItem ? (
           <div className="mt-3 space-y-2">
-            {items.filter((i) => dueKeys.has(i.key)).map((item) => (
+            {items.filter((i) => dueKeys.has(i.key)).map((item) => {
+              const otherMeter = entry.due.find((d) => d.key === item.key && d.otherMeter);
+              return (
               <details key={item.id} className="rounded border border-sand-300 bg-white p-3">
                 <summary className="cursor-pointer font-bold text-fin-600">Record or update: {item.name}</summary>
                 <div className="mt-3 grid gap-4 md:grid-cols-2">
                   {may.record ? <RecordCompletionForm slug={club.slug} itemId={item.id} itemName={item.name} today={entry.today} hoursBased={item.ruleKind === "hours" || item.ruleKind === "months-or-hours"} fixedDate={item.ruleKind === "fixed-date"} meterName={plane.maintenanceMeter} meterNow={meterNow} /> : null}
                   {may.editItem && (item.usageLimitHours !== null || item.origin !== "regulation") ? <UpdateItemForm slug={club.slug} itemId={item.id} hasUsage={item.usageLimitHours !== null} canRetire={item.origin !== "regulation"} /> : null}
+                  {may.record && otherMeter?.otherMeter ? <MeterConversionForm slug={club.slug} itemId={item.id} itemName={item.name} fromMeter={otherMeter.otherMeter.completionMeter} toMeter={otherMeter.otherMeter.currentMeter} lastHours={otherMeter.lastDoneHours} /> : null}
                 </div>
               </details>
-            ))}
+              );
+            })}
           </div>
         ) : null}
         {may.addItem ? (
@@ -151,7 +155,7 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
       ) : null}
 
       <Section id="history" title="Inspection history">
-        <CompletionHistory slug={club.slug} rows={history} files={completionFiles} />
+        <CompletionHistory slug={club.slug} rows={history} files={completionFiles} due={entry.due} />
       </Section>
 
       <Section id="record" title="Aircraft record">
