@@ -5,7 +5,7 @@ import { checkbox, hoursField } from "./fleet";
 // Bookings, dispatch and check-in. Times are typed in the club's time zone as "YYYY-MM-DDTHH:MM"
 // (a datetime-local field) and turned into UTC instants by the action.
 
-const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "medicalExpired", "inArrears", "statusUnknown"] as const;
+const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "flightReview", "medicalExpired", "inArrears", "statusUnknown", "limitations"] as const;
 
 const id = (what: string) => recordId(`Choose ${what}.`);
 
