@@ -114,14 +114,22 @@ function aircraftFindings(input: GuardInput): GuardFinding[] {
   return out;
 }
 
+/**
+ * The limitations an aircraft flies under ("flyable with limits"), as the flight line words
+ * them: deferred items with their limitation (14 CFR 91.213(d)) and lapsed IFR-only checks.
+ * Booking quotes them; dispatch shows them again and needs the pilot's tick.
+ */
+export function limitationTexts(reasons: readonly StatusReason[]): string[] {
+  const texts: string[] = [];
+  for (const r of reasons) if (!r.grounding && LIMITATION_CODES.has(r.code) && !texts.includes(r.text)) texts.push(r.text);
+  return texts;
+}
+
 /** Each limitation now or by the end of the booking, quoted as the flight line words it. */
 function limitationFindings(input: GuardInput): GuardFinding[] {
   const { aircraft } = input;
   if (aircraft.statusNow.status === "grounded") return [];
-  const texts: string[] = [];
-  for (const r of [...aircraft.statusNow.reasons, ...(aircraft.statusAtEnd?.reasons ?? [])]) {
-    if (!r.grounding && LIMITATION_CODES.has(r.code) && !texts.includes(r.text)) texts.push(r.text);
-  }
+  const texts = limitationTexts([...aircraft.statusNow.reasons, ...(aircraft.statusAtEnd?.reasons ?? [])]);
   if (!texts.length) return [];
   return [{ guard: "limitations", reason: `${aircraft.registration} is flyable with limits. ${texts.map((t) => `“${t}”`).join(" ")} Plan this flight within each limitation; you will be asked again at dispatch.` }];
 }

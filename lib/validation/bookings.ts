@@ -66,6 +66,8 @@ export const dispatchBookingSchema = z
     preflightRecordId: id("the preflight record"),
     confirmPreflight: checkbox,
     acceptFindings: checkbox,
+    /** The pilot read the aircraft's limitations again and will fly within them (14 CFR 91.213(d)). */
+    acceptLimitations: checkbox,
   })
   .superRefine((v, ctx) => {
     if (!v.confirmPreflight) ctx.addIssue({ code: "custom", path: ["confirmPreflight"], message: "Confirm that you did this preflight and that the record is yours." });
