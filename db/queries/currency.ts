@@ -120,3 +120,33 @@ export function getCurrencyBoard(db: Reader, club: Pick<Club, "id" | "settings">
     .filter((m) => isClubMember(m.roles))
     .map((m) => ({ userId: m.userId, name: m.name, email: m.email, roles: [...m.roles], currency: summarizeCurrency(inputFor(g, club, m.userId, today)) }));
 }
+
+export type ClaimRow = {
+  kind: "flight_review" | "medical" | "outside_flight";
+  id: string;
+  userId: string;
+  /** What the claim says, in the words the board may show (a medical: its expiry date only). */
+  what: string;
+  /** The member's own file on the record (a document's upload), if any. */
+  uploadId: string | null;
+};
+
+/**
+ * Every claim waiting for verification in the club: flight reviews, medicals and outside flights
+ * members recorded about themselves and nobody has verified yet. Oldest claim first.
+ */
+export function listClaims(db: Reader, clubId: string): ClaimRow[] {
+  const rows: (ClaimRow & { at: number })[] = [];
+  for (const r of db.select().from(memberDocuments).where(and(eq(memberDocuments.clubId, clubId), eq(memberDocuments.kind, "flight_review"), isNull(memberDocuments.verifiedAt))).all()) {
+    rows.push({ kind: "flight_review", id: r.id, userId: r.userId, what: `Flight review of ${r.issuedOn}${r.details ? ` (${r.details})` : ""}`, uploadId: r.uploadId, at: r.createdAt.getTime() });
+  }
+  for (const r of db.select().from(medicalCertificates).where(and(eq(medicalCertificates.clubId, clubId), isNull(medicalCertificates.verifiedAt))).all()) {
+    rows.push({ kind: "medical", id: r.id, userId: r.userId, what: `Medical valid through ${r.expiresOn}`, uploadId: null, at: r.createdAt.getTime() });
+  }
+  for (const r of db.select().from(outsideFlightEntries).where(and(eq(outsideFlightEntries.clubId, clubId), isNull(outsideFlightEntries.verifiedAt))).all()) {
+    const cls = r.category && r.classRating ? `${r.category}, ${r.classRating}${r.tailwheel ? ", tailwheel" : ""}` : "class not recorded";
+    const full = r.dayFullStopLandings === null ? "" : ` (${r.dayFullStopLandings} to a full stop)`;
+    rows.push({ kind: "outside_flight", id: r.id, userId: r.userId, what: `Flight of ${r.flownOn} in ${r.aircraftDescription} (${cls}): ${r.dayLandings} day landings${full}, ${r.nightFullStopLandings} night full stops`, uploadId: null, at: r.createdAt.getTime() });
+  }
+  return rows.sort((a, b) => a.at - b.at).map(({ at: _at, ...r }) => r);
+}

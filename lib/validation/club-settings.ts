@@ -41,3 +41,37 @@ export type ClubSettings = z.infer<typeof clubSettingsSchema>;
 export function defaultClubSettings(overrides: Partial<ClubSettings> = {}): ClubSettings {
   return clubSettingsSchema.parse(overrides);
 }
+
+const blank = (v: unknown) => v === undefined || v === null || (typeof v === "string" && v.trim() === "");
+
+function coordinate(label: string, limit: number) {
+  return z.preprocess(
+    (v) => (blank(v) ? null : typeof v === "string" ? v.trim() : v),
+    z
+      .union([
+        z.null(),
+        z
+          .string()
+          .refine((v) => /^-?\d{1,3}(\.\d{1,7})?$/.test(v), { error: `Enter the ${label} in decimal degrees, like ${limit === 90 ? "41.9732" : "-87.9073"}.` })
+          .transform(Number)
+          .refine((v) => Math.abs(v) <= limit, { error: `The ${label} must be between −${limit} and ${limit} degrees.` }),
+      ])
+      .optional(),
+  ).transform((v) => v ?? null);
+}
+
+/**
+ * The home field's position, for sunrise and sunset (night under 14 CFR 61.57(b)). Both or
+ * neither: clearing both makes night "cannot be computed" again.
+ */
+export const homePositionSchema = z
+  .object({
+    homeLatitude: coordinate("latitude", 90),
+    homeLongitude: coordinate("longitude", 180),
+  })
+  .superRefine((v, ctx) => {
+    if ((v.homeLatitude === null) !== (v.homeLongitude === null)) {
+      const path = v.homeLatitude === null ? "homeLatitude" : "homeLongitude";
+      ctx.addIssue({ code: "custom", path: [path], message: "Enter both the latitude and the longitude, or clear both." });
+    }
+  });
