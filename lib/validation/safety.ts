@@ -143,7 +143,8 @@ export const outsideFlightSchema = z
     classRating: z.enum(AIRCRAFT_CLASSES, { error: "Choose the class of the aircraft you flew." }),
     tailwheel: checkbox,
     dayLandings: landingCount("day landings"),
-    dayFullStopLandings: landingCount("day full-stop landings"),
+    // Empty: not recorded (counts no day landings toward tailwheel currency).
+    dayFullStopLandings: z.preprocess((v) => (v === undefined || v === null || (typeof v === "string" && v.trim() === "") ? undefined : v), landingCount("day full-stop landings").optional()).transform((v) => v ?? null),
     nightFullStopLandings: landingCount("night full-stop landings"),
     note: optionalText(500, "Keep the note to 500 characters."),
   })
