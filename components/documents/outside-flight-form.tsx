@@ -30,7 +30,7 @@ export function OutsideFlightForm({ slug, today, typeGroups }: { slug: string; t
         </SelectField>
         <CheckboxField label="Tailwheel airplane" name="tailwheel" errors={e.tailwheel} hint="In a tailwheel airplane only full-stop landings count (14 CFR 61.57(a)(1)(ii))." />
         <Field label="Day landings" name="dayLandings" type="number" min={0} max={99} inputMode="numeric" defaultValue="0" errors={e.dayLandings} />
-        <Field label="Of the day landings, to a full stop" name="dayFullStopLandings" type="number" min={0} max={99} inputMode="numeric" defaultValue="" errors={e.dayFullStopLandings} hint="Leave empty if not known; a tailwheel airplane needs full stops." />
+        <Field label="Full stops among them" name="dayFullStopLandings" type="number" min={0} max={99} inputMode="numeric" defaultValue="" errors={e.dayFullStopLandings} hint="Leave empty if not known; a tailwheel airplane needs full stops." />
         <Field label="Night full-stop landings" name="nightFullStopLandings" type="number" min={0} max={99} inputMode="numeric" defaultValue="0" errors={e.nightFullStopLandings} />
         <SelectField label="Same type group as a club aircraft? (optional)" name="typeGroup" defaultValue="" errors={e.typeGroup}>
           <option value="">No / not sure</option>
