@@ -28,6 +28,8 @@ const GRANTS: Record<Role, (b: Builder, userId: string) => void> = {
   },
   instructor: ({ can }) => {
     can("read", ["CurrencyBoard", "Currency", "MemberDocument"]);
+    // Verify a member's claimed flight review, medical or outside flight against the logbook.
+    can("verify", "Currency");
     can(["create", "update"], "Checkout");
     can(["create", "update"], ["Booking", "Flight"]);
   },
@@ -36,6 +38,7 @@ const GRANTS: Record<Role, (b: Builder, userId: string) => void> = {
     can(["read", "readDetails", "triage", "update"], "SafetyReport");
     can(["create", "lift"], "GroundingNotice");
     can("read", ["CurrencyBoard", "Currency", "MemberDocument"]);
+    can("verify", "Currency");
   },
   treasurer: ({ can }) => {
     can(["read", "create", "export"], "Ledger");

@@ -5,6 +5,7 @@ export const ACTIONS = [
   "triage", "close", "lift", "record",
   "publish", "acknowledge", "readAcknowledgements",
   "readDetails", "pay", "refund", "reconcile", "export",
+  "verify",
 ] as const;
 export type Action = (typeof ACTIONS)[number];
 

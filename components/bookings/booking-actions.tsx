@@ -50,7 +50,7 @@ export function CancelBookingForm({ slug, bookingId, lateNote }: { slug: string;
   );
 }
 
-export function DispatchForm({ slug, bookingId, records }: { slug: string; bookingId: string; records: { id: string; label: string }[] }) {
+export function DispatchForm({ slug, bookingId, records, limitations = [] }: { slug: string; bookingId: string; records: { id: string; label: string }[]; limitations?: string[] }) {
   const form = useFormAction(dispatchBooking);
   const { state } = form;
   const e = state.fieldErrors;
@@ -62,6 +62,14 @@ export function DispatchForm({ slug, bookingId, records }: { slug: string; booki
         {records.map((r) => <option key={r.id} value={r.id}>{r.label}</option>)}
       </SelectField>
       <CheckboxField label="I did this preflight myself, and as pilot in command I find the aircraft fit for this flight." name="confirmPreflight" errors={e.confirmPreflight} />
+      {limitations.length || e.acceptLimitations ? (
+        <fieldset className="mb-3 rounded border-l-4 border-sock-500 bg-sock-100 px-3 py-2 text-sm" aria-label="Limitations of this aircraft">
+          <legend className="sr-only">Limitations of this aircraft</legend>
+          <h4 className="font-bold text-sock-700">▲ This aircraft flies with limits</h4>
+          <ul className="mb-2 list-disc pl-5">{(e.acceptLimitations ?? limitations).map((l) => <li key={l}>{l}</li>)}</ul>
+          <CheckboxField label="I have read each limitation and will fly this flight within them." name="acceptLimitations" />
+        </fieldset>
+      ) : null}
       {e.acceptFindings ? (
         <div className="mb-3 rounded border-l-4 border-sock-500 bg-sock-100 px-3 py-2 text-sm" role="alert">
           <ul className="list-disc pl-5">{e.acceptFindings.map((c) => <li key={c}>{c}</li>)}</ul>

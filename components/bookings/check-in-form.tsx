@@ -24,6 +24,7 @@ export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, ch
         <Field label="Tach out" name="tachOut" inputMode="decimal" defaultValue={tach?.toFixed(1) ?? ""} errors={e.tachOut} />
         <Field label="Tach in" name="tachIn" inputMode="decimal" errors={e.tachIn} />
         <Field label="Day landings" name="dayLandings" inputMode="numeric" defaultValue="1" errors={e.dayLandings} />
+        <Field label="Full stops among them (optional)" name="dayFullStopLandings" inputMode="numeric" defaultValue="" errors={e.dayFullStopLandings} hint="Counts for tailwheel currency (14 CFR 61.57(a)(1)(ii))." />
         <Field label="Night full-stop landings" name="nightFullStopLandings" inputMode="numeric" defaultValue="0" errors={e.nightFullStopLandings} />
         <Field label={`Fuel added (${metric ? "litres" : "US gal"})`} name="fuelAdded" inputMode="decimal" defaultValue="0" errors={e.fuelAdded} />
         <Field label={`Oil added (${metric ? "litres" : "quarts"})`} name="oilAdded" inputMode="decimal" defaultValue="0" errors={e.oilAdded} />

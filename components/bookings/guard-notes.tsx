@@ -5,6 +5,8 @@ const GUARD_LABELS: Record<string, string> = {
   inspectionDue: "Inspection comes due",
   notCheckedOut: "No checkout in the type",
   notCurrent: "Not current",
+  flightReview: "Flight review",
+  limitations: "Flies with limits",
   medicalExpired: "Medical",
   inArrears: "Account in arrears",
   statusUnknown: "Check status",

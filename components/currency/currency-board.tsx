@@ -4,7 +4,7 @@ import {
 } from "@tanstack/react-table";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
-import type { CurrencyItem } from "@/lib/safety/currency-summary";
+import { CURRENCY_STATE_LABELS, type CurrencyItem } from "@/lib/safety/currency-summary";
 import { CurrencyStateBadge } from "./state-badge";
 
 export type BoardRow = { userId: string; name: string; email: string; items: CurrencyItem[]; next: CurrencyItem | null; attention: number };
@@ -12,14 +12,25 @@ export type BoardRow = { userId: string; name: string; email: string; items: Cur
 const col = createColumnHelper<BoardRow>();
 const STATE_RANK = { expired: 0, missing: 1, expiring: 2, current: 3 } as const;
 
-function Cell({ item }: { item: CurrencyItem | undefined }) {
+function Cell({ item, prefix }: { item: CurrencyItem | undefined; prefix?: string }) {
   if (!item) return <span className="text-ink-500">—</span>;
   return (
     <span className="flex flex-col items-start gap-1">
-      <CurrencyStateBadge state={item.state} />
+      <span className="flex flex-wrap items-center gap-1">{prefix ? <span className="text-xs">{prefix}</span> : null}<CurrencyStateBadge state={item.state} /></span>
       <span className="font-mono text-xs tabular text-ink-700">{item.lastDay ?? "—"}</span>
+      {item.claim ? (
+        <span className="text-xs text-ink-700">◇ Claimed: {CURRENCY_STATE_LABELS[item.claim.state].toLowerCase()}{item.claim.lastDay ? ` to ${item.claim.lastDay}` : ""}, not verified</span>
+      ) : null}
     </span>
   );
+}
+
+/** The classes the club flies, as the items name them ("passenger_day:<class>"). */
+function passengerClasses(rows: BoardRow[]): { key: string; label: string }[] {
+  const first = rows[0]?.items ?? [];
+  return first
+    .filter((i) => i.key.startsWith("passenger_day"))
+    .map((i) => ({ key: i.key.slice("passenger_day".length), label: i.label.includes(" — ") ? i.label.split(" — ")[1]! : "any aircraft" }));
 }
 
 const byKey = (row: BoardRow, key: string) => row.items.find((i) => i.key === key);
@@ -33,6 +44,8 @@ export function CurrencyBoard({ rows }: { rows: BoardRow[] }) {
   const q = params.get("q") ?? "";
   const sortParam = params.get("sort") ?? "next";
   const sorting: SortingState = [{ id: sortParam.replace(/^-/, ""), desc: sortParam.startsWith("-") }];
+  const classKeys = passengerClasses(rows).map((c) => `${c.key}|${c.label}`).join(",");
+  const classes = useMemo(() => (classKeys ? classKeys.split(",").map((k) => ({ key: k.split("|")[0]!, label: k.split("|")[1]! })) : []), [classKeys]);
 
   function setParams(next: Record<string, string | null>) {
     const sp = new URLSearchParams(params.toString());
@@ -55,8 +68,19 @@ export function CurrencyBoard({ rows }: { rows: BoardRow[] }) {
         },
       }),
       col.accessor((r) => r.attention, { id: "attention", header: "Needs attention", cell: (c) => <span className="tabular">{c.getValue()}</span> }),
-      col.accessor((r) => itemSortValue(byKey(r, "passenger_day")), { id: "day", header: "Passengers by day", cell: (c) => <Cell item={byKey(c.row.original, "passenger_day")} /> }),
-      col.accessor((r) => itemSortValue(byKey(r, "passenger_night")), { id: "night", header: "At night", cell: (c) => <Cell item={byKey(c.row.original, "passenger_night")} /> }),
+      // Passenger currency per category and class the club flies (14 CFR 61.57(a)(1)(i)).
+      ...classes.map((cls, i) =>
+        col.accessor((r) => itemSortValue(byKey(r, `passenger_day${cls.key}`)), {
+          id: `passengers-${i}`,
+          header: `Passengers: ${cls.label}`,
+          cell: (c) => (
+            <span className="flex flex-col gap-2">
+              <Cell item={byKey(c.row.original, `passenger_day${cls.key}`)} prefix="Day" />
+              <Cell item={byKey(c.row.original, `passenger_night${cls.key}`)} prefix="Night" />
+            </span>
+          ),
+        }),
+      ),
       col.accessor((r) => itemSortValue(byKey(r, "flight_review")), { id: "review", header: "Flight review", cell: (c) => <Cell item={byKey(c.row.original, "flight_review")} /> }),
       col.accessor((r) => itemSortValue(byKey(r, "medical")), { id: "medical", header: "Medical (expiry)", cell: (c) => <Cell item={byKey(c.row.original, "medical")} /> }),
       col.display({
@@ -75,7 +99,7 @@ export function CurrencyBoard({ rows }: { rows: BoardRow[] }) {
         },
       }),
     ],
-    [],
+    [classes],
   );
 
   const table = useReactTable({

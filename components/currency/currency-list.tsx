@@ -1,9 +1,19 @@
-import type { CurrencyItem } from "@/lib/safety/currency-summary";
+import { CURRENCY_STATE_LABELS, type CurrencyItem } from "@/lib/safety/currency-summary";
 import { CurrencyStateBadge } from "./state-badge";
 
 function until(item: CurrencyItem): string {
   if (!item.lastDay) return item.key.startsWith("passenger") || item.key.startsWith("recency") ? "No qualifying flights logged" : "Nothing recorded";
   return item.state === "expired" ? `Lapsed after ${item.lastDay}` : `Through ${item.lastDay}`;
+}
+
+/** What the member's own unverified entries would make of an item: shown, never counted. */
+export function ClaimNote({ item }: { item: CurrencyItem }) {
+  if (!item.claim) return null;
+  return (
+    <span className="basis-full text-xs text-ink-700">
+      ◇ Claimed, not verified: {CURRENCY_STATE_LABELS[item.claim.state].toLowerCase()}{item.claim.lastDay ? ` through ${item.claim.lastDay}` : ""}. Counts once an instructor or the safety officer verifies it.
+    </span>
+  );
 }
 
 /** One member's currency, item by item: a word, a shape and the last good day. */
@@ -17,6 +27,7 @@ export function CurrencyList({ items }: { items: CurrencyItem[] }) {
             <span className="font-mono tabular text-ink-700">{until(item)}</span>
             <CurrencyStateBadge state={item.state} />
           </span>
+          {item.claim ? <ClaimNote item={item} /> : null}
         </li>
       ))}
     </ul>

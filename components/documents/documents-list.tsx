@@ -18,6 +18,7 @@ export function DocumentsList({ slug, docs, today, warnDays }: { slug: string; d
             <span className="min-w-0">
               <span className="font-bold">{DOCUMENT_KIND_LABELS[d.kind]}</span>
               {superseded ? <span className="ml-2 text-xs text-ink-500">(earlier record)</span> : null}
+              {d.kind === "flight_review" ? <span className="ml-2 text-xs">{d.verifiedAt ? "✓ Verified" : "◇ Claimed: counts once an instructor or the safety officer verifies it"}</span> : null}
               <span className="block break-words text-sm text-ink-700">
                 {[d.reference, d.details].filter(Boolean).join(" · ") || "—"} · issued {d.issuedOn}
               </span>

@@ -5,6 +5,7 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { createAircraft } from "@/lib/actions/fleet/create-aircraft";
 import { updateAircraft } from "@/lib/actions/fleet/update-aircraft";
 import { CheckboxField, Field, FileField, SelectField, TextAreaField } from "@/components/ui/field";
+import { AIRCRAFT_CATEGORIES, AIRCRAFT_CLASSES } from "@/lib/currency/aircraft-class";
 
 export type AircraftFormValues = {
   id: string;
@@ -14,6 +15,7 @@ export type AircraftFormValues = {
   typeGroup: string;
   category: string;
   classRating: string;
+  tailwheel: boolean;
   serialNumber: string | null;
   year: number | null;
   homeField: string | null;
@@ -45,8 +47,13 @@ export function AircraftForm({ slug, currency, values }: { slug: string; currenc
         <Field label="Type group (for checkouts)" name="typeGroup" defaultValue={v?.typeGroup} errors={e.typeGroup} />
         <Field label="Make" name="make" defaultValue={v?.make} errors={e.make} />
         <Field label="Model" name="model" defaultValue={v?.model} errors={e.model} />
-        <Field label="Category" name="category" defaultValue={v?.category ?? "Airplane"} errors={e.category} />
-        <Field label="Class" name="classRating" defaultValue={v?.classRating ?? "Single-engine land"} errors={e.classRating} />
+        <SelectField label="Category" name="category" defaultValue={v?.category ?? "Airplane"} errors={e.category}>
+          {AIRCRAFT_CATEGORIES.map((c) => <option key={c} value={c}>{c}</option>)}
+        </SelectField>
+        <SelectField label="Class" name="classRating" defaultValue={v?.classRating ?? "Single-engine land"} errors={e.classRating} hint="Passenger currency counts landings in the same category and class (14 CFR 61.57(a)).">
+          {AIRCRAFT_CLASSES.map((c) => <option key={c} value={c}>{c}</option>)}
+        </SelectField>
+        <CheckboxField label="Tailwheel airplane" name="tailwheel" defaultChecked={v?.tailwheel ?? false} errors={e.tailwheel} hint="Passengers need three full-stop landings in a tailwheel airplane (14 CFR 61.57(a)(1)(ii))." />
         <Field label="Serial number" name="serialNumber" defaultValue={v?.serialNumber ?? ""} errors={e.serialNumber} />
         <Field label="Year" name="year" inputMode="numeric" defaultValue={v?.year?.toString() ?? ""} errors={e.year} />
         <Field label="Home field" name="homeField" defaultValue={v?.homeField ?? ""} errors={e.homeField} />

@@ -85,20 +85,19 @@ export function UpdateItemForm({ slug, itemId, hasUsage, canRetire }: { slug: st
 
 /** After a meter switch: maintenance records where the item's last completion stands on the new meter. */
 export function MeterConversionForm({ slug, itemId, itemName, fromMeter, toMeter, lastHours }: { slug: string; itemId: string; itemName: string; fromMeter: "hobbs" | "tach"; toMeter: "hobbs" | "tach"; lastHours: number | null }) {
-  const [state, action] = useActionState(recordMeterConversion, initialActionState);
+  const form = useFormAction(recordMeterConversion);
+  const { state } = form;
   const e = state.fieldErrors;
   const word = (m: "hobbs" | "tach") => (m === "hobbs" ? "Hobbs" : "tach");
   const p = `mc-${itemId}`;
   return (
-    <form action={action} noValidate aria-label={`Record ${itemName} on the ${word(toMeter)}`}>
-      <IdempotencyKeyField answer={state} />
-      <FormMessage state={state} />
+    <FormShell form={form} label={`Record ${itemName} on the ${word(toMeter)}`}>
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="itemId" value={itemId} />
       <Field label={`Last completion on the ${word(toMeter)}`} name="reading" id={`${p}-reading`} inputMode="decimal" errors={e.reading}
         hint={`It was recorded${lastHours !== null ? ` at ${lastHours.toFixed(1)} h` : ""} on the ${word(fromMeter)}. From the logbooks, enter the ${word(toMeter)} reading it corresponds to.`} />
       <TextAreaField label="Note (optional)" name="note" id={`${p}-note`} rows={2} errors={e.note} />
       <SubmitButton>Record the {word(toMeter)} reading</SubmitButton>
-    </form>
+    </FormShell>
   );
 }

@@ -18,6 +18,7 @@ export function clubNavItems(slug: string, ability: AppAbility, userId: string):
     { href: `${base}/account`, label: "My account", description: "Balance, statements, pay", show: canOn(ability, "pay", "Account", { userId }) },
     { href: `${base}/money`, label: "Money", description: "Ledger, billing and reconciliation", show: can(ability, "read", "Ledger") },
     { href: `${base}/tools`, label: "Pilot tools", description: "Weight and balance, fuel, density altitude", show: can(ability, "read", "Tools") },
+    { href: `${base}/settings`, label: "Club settings", description: "Home field position and other rules", show: can(ability, "update", "ClubSettings") },
     { href: `${base}/audit`, label: "Audit log", description: "Every privileged change", show: can(ability, "read", "AuditLog") },
     { href: `${base}/outbox`, label: "Outbox", description: "E-mail sent on the club's behalf", show: can(ability, "read", "Outbox") },
   ];

@@ -4,6 +4,8 @@ import type { Db, Tx } from "@/db/client";
 import { flights, type Aircraft, type Club } from "@/db/schema";
 import { averageFlightHours, DEFAULT_FLIGHT_HOURS, projectedMeterHours } from "@/lib/bookings/average-flight";
 import type { GuardInput } from "@/lib/bookings/guards";
+import { bookingTouchesNight } from "@/lib/bookings/night";
+import { aircraftClassKey } from "@/lib/currency";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { aircraftStatus, type AircraftStatusResult } from "@/lib/airworthiness";
 import type { FleetRecords } from "@/lib/fleet/flight-line";
@@ -74,8 +76,17 @@ export function loadGuardInput(
 ): GuardInput {
   const today = isoDateInTimeZone(now, club.timeZone);
   const status = aircraftStatusNowAndAtEnd(db, club, args.plane, args, now, args.excludeBookingId);
-  const currency = getMemberCurrency(db, club, args.memberId, today);
+  // Passenger currency in the booked aircraft's category and class (14 CFR 61.57(a)(1)(i)),
+  // from verified records only: a member's own claim never clears a guard.
+  const planeClass = { category: args.plane.category, classRating: args.plane.classRating, tailwheel: args.plane.tailwheel };
+  const currency = getMemberCurrency(db, club, args.memberId, today, [planeClass]);
   const item = (key: string) => currency.items.find((i) => i.key === key);
+  const classKey = aircraftClassKey(planeClass);
+  // Night (61.57(b)) at the home field. When the position is not recorded, night cannot be
+  // computed; with passengers the booking is treated as touching night and the reason says
+  // why (a careful chief instructor assumes the worse case rather than the convenient one).
+  const night = bookingTouchesNight(args, { latitude: club.settings.homeLatitude, longitude: club.settings.homeLongitude });
+  const nightFlight = night.computed ? night.night : args.carryingPassengers;
   const checkedOut = Boolean(findStandingCheckout(db, club.id, args.memberId, args.plane.typeGroup));
   const arrears = memberArrears(db, club.id, args.memberId, today);
   return {
@@ -87,10 +98,13 @@ export function loadGuardInput(
       recencyLastDay: item(`recency:${normalizeTypeGroup(args.plane.typeGroup)}`)?.lastDay ?? null,
       flightReviewLastDay: item("flight_review")?.lastDay ?? null,
       medicalLastDay: item("medical")?.lastDay ?? null,
-      passengerDayLastDay: item("passenger_day")?.lastDay ?? null,
+      passengerDayLastDay: item(`passenger_day:${classKey}`)?.lastDay ?? null,
+      passengerNightLastDay: item(`passenger_night:${classKey}`)?.lastDay ?? null,
       arrears: { inArrears: arrears.inArrears, owedText: formatMoney(arrears.balanceMinor, club.currency), oldestDueDate: arrears.oldestDueDate },
     },
     withInstructor: args.withInstructor,
     carryingPassengers: args.carryingPassengers,
+    nightFlight,
+    nightUnknown: !night.computed,
   };
 }

@@ -19,6 +19,8 @@ export const aircraft = sqliteTable(
     typeGroup: text("type_group").notNull(),
     category: text("category").notNull().default("Airplane"),
     classRating: text("class_rating").notNull().default("Single-engine land"),
+    /** A tailwheel (conventional gear) airplane: 14 CFR 61.57(a)(1)(ii) full-stop currency. */
+    tailwheel: integer("tailwheel", { mode: "boolean" }).notNull().default(false),
     serialNumber: text("serial_number"),
     year: integer("year"),
     homeField: text("home_field"),
@@ -201,6 +203,8 @@ export const flights = sqliteTable(
     tachIn: real("tach_in").notNull(),
     dayLandings: integer("day_landings").notNull().default(0),
     nightFullStopLandings: integer("night_full_stop_landings").notNull().default(0),
+    /** How many of the day landings were to a full stop; null when not recorded (14 CFR 61.57(a)(1)(ii)). */
+    dayFullStopLandings: integer("day_full_stop_landings"),
     /** In the club's unit: US gallons / quarts (imperial) or litres (metric), see fuelUnit. */
     fuelAdded: real("fuel_added").notNull().default(0),
     oilAdded: real("oil_added").notNull().default(0),

@@ -144,6 +144,14 @@ export const medicalCertificates = sqliteTable(
     /** The expiry date a reminder was last queued for, so each expiry is reminded once. */
     reminderSentFor: text("reminder_sent_for"),
     recordedById: text("recorded_by_id").notNull().references(() => users.id),
+    /**
+     * Who verified the record against the logbook page or certificate, and when. Null: the
+     * member's own claim, which is shown but never clears a booking guard.
+     */
+    verifiedAt: integer("verified_at", { mode: "timestamp_ms" }),
+    verifiedById: text("verified_by_id").references(() => users.id),
+    /** The logbook page or certificate seen when verifying (an upload of the member's). */
+    verificationUploadId: text("verification_upload_id").references(() => uploads.id),
     ...timestamps(),
   },
   (t) => [index("medical_certificates_club_user").on(t.clubId, t.userId)],
@@ -165,6 +173,14 @@ export const memberDocuments = sqliteTable(
     uploadId: text("upload_id").references(() => uploads.id),
     reminderSentFor: text("reminder_sent_for"),
     recordedById: text("recorded_by_id").notNull().references(() => users.id),
+    /**
+     * Who verified the record against the logbook page or certificate, and when. Null: the
+     * member's own claim, which is shown but never clears a booking guard.
+     */
+    verifiedAt: integer("verified_at", { mode: "timestamp_ms" }),
+    verifiedById: text("verified_by_id").references(() => users.id),
+    /** The logbook page or certificate seen when verifying (an upload of the member's). */
+    verificationUploadId: text("verification_upload_id").references(() => uploads.id),
     ...timestamps(),
   },
   (t) => [index("member_documents_club_user").on(t.clubId, t.userId, t.kind)],
@@ -182,7 +198,21 @@ export const outsideFlightEntries = sqliteTable(
     aircraftDescription: text("aircraft_description").notNull(),
     dayLandings: integer("day_landings").notNull(),
     nightFullStopLandings: integer("night_full_stop_landings").notNull(),
+    /** Category, class and gear of the aircraft flown (14 CFR 61.57(a)(1)); null on older entries. */
+    category: text("category"),
+    classRating: text("class_rating"),
+    tailwheel: integer("tailwheel", { mode: "boolean" }),
+    /** How many of the day landings were to a full stop; null when not recorded. */
+    dayFullStopLandings: integer("day_full_stop_landings"),
     note: text("note"),
+    /**
+     * Who verified the record against the logbook page or certificate, and when. Null: the
+     * member's own claim, which is shown but never clears a booking guard.
+     */
+    verifiedAt: integer("verified_at", { mode: "timestamp_ms" }),
+    verifiedById: text("verified_by_id").references(() => users.id),
+    /** The logbook page or certificate seen when verifying (an upload of the member's). */
+    verificationUploadId: text("verification_upload_id").references(() => uploads.id),
     ...timestamps(),
   },
   (t) => [index("outside_flight_entries_club_user").on(t.clubId, t.userId)],

@@ -21,6 +21,8 @@ export type SeedFlight = {
   tachIn: number;
   dayLandings: number;
   nightFullStopLandings: number;
+  /** Every seeded day landing is to a full stop (the demo club does not log touch-and-goes). */
+  dayFullStopLandings: number;
   fuelAdded: number;
   oilAdded: number;
   pilotIndex: number;
@@ -48,6 +50,7 @@ export function flightHistory(opts: { count: number; days: number; today: string
       tachOut: roundHours(tachIn - tachTime),
       tachIn,
       dayLandings: landings,
+      dayFullStopLandings: landings,
       nightFullStopLandings: rand() < 0.15 ? 3 : 0,
       fuelAdded: rand() < 0.5 ? roundHours((opts.metric ? 40 : 10) + Math.round(rand() * 200) / 10) : 0,
       oilAdded: rand() < 0.1 ? 1 : 0,

@@ -24,6 +24,8 @@ type Plane = {
   tach: number;
   instruction?: boolean;
   ifr?: boolean;
+  /** Conventional (tailwheel) gear: 14 CFR 61.57(a)(1)(ii). All are airplanes, single-engine land. */
+  tailwheel?: boolean;
   /** Months since the annual; 12 → due at the end of this month. */
   annualMonthsAgo: number;
   /** Hours left on the 100-hour (instruction aircraft) and the oil change. */
@@ -39,13 +41,13 @@ const FLEET: Record<string, Plane[]> = {
   lakeshore: [
     { registration: "N0512L", make: "Kestrel Aero", model: "K160", typeGroup: "Kestrel K160", homeField: "Lakeshore Field (X01)", rate: 152, hobbs: 5230.7, tach: 4410.2, instruction: true, annualMonthsAgo: 4, hundredLeft: 38.9, oilLeft: 22.5 },
     { registration: "N0527L", make: "Kestrel Aero", model: "K160", typeGroup: "Kestrel K160", homeField: "Lakeshore Field (X01)", rate: 152, hobbs: 4871.2, tach: 4102.8, instruction: true, annualMonthsAgo: 7, hundredLeft: 63.0, oilLeft: 40.1 },
-    { registration: "N0534L", make: "Brightwing", model: "BW-4 Tourer", typeGroup: "Brightwing BW-4", homeField: "Lakeshore Field (X01)", rate: 189, hobbs: 2954.3, tach: 2511.0, annualMonthsAgo: 12, oilLeft: 28.0 },
-    { registration: "N0549L", make: "Brightwing", model: "BW-4 Tourer IFR", typeGroup: "Brightwing BW-4", homeField: "Lakeshore Field (X01)", rate: 198, hobbs: 3318.6, tach: 2820.9, ifr: true, annualMonthsAgo: 2, oilLeft: 35.6 },
+    { registration: "N0534L", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer", typeGroup: "Brightwing BW-4", homeField: "Lakeshore Field (X01)", rate: 189, hobbs: 2954.3, tach: 2511.0, annualMonthsAgo: 12, oilLeft: 28.0 },
+    { registration: "N0549L", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer IFR", typeGroup: "Brightwing BW-4", homeField: "Lakeshore Field (X01)", rate: 198, hobbs: 3318.6, tach: 2820.9, ifr: true, annualMonthsAgo: 2, oilLeft: 35.6 },
     { registration: "N0556L", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Lakeshore Field (X01)", rate: 126, hobbs: 6012.5, tach: 5110.6, instruction: true, annualMonthsAgo: 9, hundredLeft: 82.4, oilLeft: 44.0 },
   ],
   silberau: [
     { registration: "D-0SLA", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Flugplatz Silberau (X02)", rate: 139, hobbs: 2210.8, tach: 1879.2, instruction: true, annualMonthsAgo: 6, hundredLeft: 55.0, oilLeft: 26.7 },
-    { registration: "D-0SLB", make: "Brightwing", model: "BW-4 Tourer", typeGroup: "Brightwing BW-4", homeField: "Flugplatz Silberau (X02)", rate: 176, hobbs: 1785.3, tach: 1517.5, annualMonthsAgo: 3, oilLeft: 33.3 },
+    { registration: "D-0SLB", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer", typeGroup: "Brightwing BW-4", homeField: "Flugplatz Silberau (X02)", rate: 176, hobbs: 1785.3, tach: 1517.5, annualMonthsAgo: 3, oilLeft: 33.3 },
   ],
 };
 
@@ -125,6 +127,7 @@ function seedPlane(tx: Parameters<Parameters<Db["transaction"]>[0]>[0], club: Cl
       clubId: club.id, registration: p.registration, make: p.make, model: p.model, typeGroup: p.typeGroup, homeField: p.homeField,
       serialNumber: `SN-0${index + 1}${p.registration.slice(-3)}`, year: 1998 + index * 3, hourlyRateMinor: p.rate * 100,
       maintenanceMeter: SEED_MAINTENANCE_METER, currentHobbs: p.hobbs, currentTach: p.tach, usedForInstruction: Boolean(p.instruction), ifrEquipped: Boolean(p.ifr), usedForIfr: Boolean(p.ifr),
+      category: "Airplane", classRating: "Single-engine land", tailwheel: Boolean(p.tailwheel),
       engineTboHours: 2000, engineTimeSinceOverhaul: roundHours(600 + index * 211.4),
     })
     .returning({ id: aircraft.id })

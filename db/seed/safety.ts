@@ -91,44 +91,51 @@ function seedLakeshoreReports(tx: Tx, clubId: string, u: Ids, today: string, pla
   }).run();
 }
 
-function medical(tx: Tx, clubId: string, userId: string, m: { cls: 1 | 2 | 3; exam: string; birth: string; limitations?: string }) {
+// The demo's records were entered by the members and verified by the safety officer against
+// the certificate or logbook (verifiedBy); one outside flight is left as the member's claim.
+function medical(tx: Tx, clubId: string, userId: string, m: { cls: 1 | 2 | 3; exam: string; birth: string; limitations?: string; verifiedBy: string }) {
   tx.insert(memberPrivateRecords).values({ clubId, userId, birthDate: m.birth }).run();
   tx.insert(medicalCertificates).values({
-    clubId, userId, kind: "faa_class", medicalClass: m.cls, examDate: m.exam, limitations: m.limitations ?? null, recordedById: userId,
+    clubId, userId, kind: "faa_class", medicalClass: m.cls, examDate: m.exam, limitations: m.limitations ?? null, recordedById: userId, verifiedById: m.verifiedBy, verifiedAt: ago(2),
     expiresOn: medicalExpiry({ medicalClass: m.cls, examDate: m.exam, birthDate: m.birth }),
   }).run();
 }
 
-function doc(tx: Tx, clubId: string, userId: string, d: { kind: (typeof memberDocuments.$inferInsert)["kind"]; issuedOn: string; expiresOn?: string | null; reference?: string; details?: string }) {
+function doc(tx: Tx, clubId: string, userId: string, d: { kind: (typeof memberDocuments.$inferInsert)["kind"]; issuedOn: string; expiresOn?: string | null; reference?: string; details?: string; verifiedBy: string }) {
   const expiresOn = d.kind === "flight_review" ? flightReviewDue(d.issuedOn) : (d.expiresOn ?? null);
-  tx.insert(memberDocuments).values({ clubId, userId, kind: d.kind, issuedOn: d.issuedOn, expiresOn, reference: d.reference ?? null, details: d.details ?? null, recordedById: userId }).run();
+  tx.insert(memberDocuments).values({ clubId, userId, kind: d.kind, issuedOn: d.issuedOn, expiresOn, reference: d.reference ?? null, details: d.details ?? null, recordedById: userId, verifiedById: d.verifiedBy, verifiedAt: ago(2) }).run();
 }
 
 function seedLakeshorePeople(tx: Tx, clubId: string, u: Ids, today: string) {
   const member = u["member@hangarline.test"]!;
   const instructor = u["instructor@hangarline.test"]!;
+  const officer = u["safety@hangarline.test"]!;
   // Under 40 on the exam date: 60 calendar months (14 CFR 61.23(d)).
-  medical(tx, clubId, member, { cls: 3, exam: monthsBefore(today, 30, 12), birth: "1991-08-17" });
+  medical(tx, clubId, member, { cls: 3, exam: monthsBefore(today, 30, 12), birth: "1991-08-17", verifiedBy: officer });
   // 40 or older, exam 24 months back: runs out at the end of this month — "ends soon".
-  medical(tx, clubId, instructor, { cls: 2, exam: monthsBefore(today, 24, 9), birth: "1972-04-03", limitations: "Must wear corrective lenses" });
+  medical(tx, clubId, instructor, { cls: 2, exam: monthsBefore(today, 24, 9), birth: "1972-04-03", limitations: "Must wear corrective lenses", verifiedBy: officer });
   // 40 or older, exam 26 months back: lapsed two months ago.
-  medical(tx, clubId, u["pilot2@hangarline.test"]!, { cls: 3, exam: monthsBefore(today, 26, 15), birth: "1966-11-21" });
-  medical(tx, clubId, u["safety@hangarline.test"]!, { cls: 3, exam: monthsBefore(today, 11, 4), birth: "1979-02-28" });
-  medical(tx, clubId, u["student@hangarline.test"]!, { cls: 3, exam: monthsBefore(today, 7, 20), birth: "2002-06-30" });
+  medical(tx, clubId, u["pilot2@hangarline.test"]!, { cls: 3, exam: monthsBefore(today, 26, 15), birth: "1966-11-21", verifiedBy: officer });
+  medical(tx, clubId, u["safety@hangarline.test"]!, { cls: 3, exam: monthsBefore(today, 11, 4), birth: "1979-02-28", verifiedBy: instructor });
+  medical(tx, clubId, u["student@hangarline.test"]!, { cls: 3, exam: monthsBefore(today, 7, 20), birth: "2002-06-30", verifiedBy: officer });
 
-  doc(tx, clubId, member, { kind: "pilot_certificate", issuedOn: "2021-05-14", reference: "PP-0041187", details: "Private pilot, airplane single-engine land" });
-  doc(tx, clubId, member, { kind: "flight_review", issuedOn: monthsBefore(today, 13, 8), details: "Imani Ostrowski" });
-  doc(tx, clubId, member, { kind: "renters_insurance", issuedOn: addDays(today, -345), expiresOn: addDays(today, 20), reference: "RI-88-20419", details: "Harbourlight Mutual (invented), 100,000 liability" });
-  doc(tx, clubId, member, { kind: "club_agreement", issuedOn: "2024-03-01", details: "Signed at joining" });
-  doc(tx, clubId, instructor, { kind: "flight_review", issuedOn: monthsBefore(today, 4, 2), details: "Designated examiner (invented)" });
+  doc(tx, clubId, member, { kind: "pilot_certificate", issuedOn: "2021-05-14", reference: "PP-0041187", details: "Private pilot, airplane single-engine land", verifiedBy: officer });
+  doc(tx, clubId, member, { kind: "flight_review", issuedOn: monthsBefore(today, 13, 8), details: "Imani Ostrowski", verifiedBy: officer });
+  doc(tx, clubId, member, { kind: "renters_insurance", issuedOn: addDays(today, -345), expiresOn: addDays(today, 20), reference: "RI-88-20419", details: "Harbourlight Mutual (invented), 100,000 liability", verifiedBy: officer });
+  doc(tx, clubId, member, { kind: "club_agreement", issuedOn: "2024-03-01", details: "Signed at joining", verifiedBy: officer });
+  doc(tx, clubId, instructor, { kind: "flight_review", issuedOn: monthsBefore(today, 4, 2), details: "Designated examiner (invented)", verifiedBy: officer });
   // 25 months ago: the review ran out at the end of last month (14 CFR 61.56(c)).
-  doc(tx, clubId, u["pilot2@hangarline.test"]!, { kind: "flight_review", issuedOn: monthsBefore(today, 25, 19), details: "Imani Ostrowski" });
-  doc(tx, clubId, u["safety@hangarline.test"]!, { kind: "renters_insurance", issuedOn: addDays(today, -370), expiresOn: addDays(today, -5), reference: "RI-77-11802", details: "Harbourlight Mutual (invented)" });
-  doc(tx, clubId, u["safety@hangarline.test"]!, { kind: "flight_review", issuedOn: monthsBefore(today, 9, 22), details: "Imani Ostrowski" });
+  doc(tx, clubId, u["pilot2@hangarline.test"]!, { kind: "flight_review", issuedOn: monthsBefore(today, 25, 19), details: "Imani Ostrowski", verifiedBy: officer });
+  doc(tx, clubId, u["safety@hangarline.test"]!, { kind: "renters_insurance", issuedOn: addDays(today, -370), expiresOn: addDays(today, -5), reference: "RI-77-11802", details: "Harbourlight Mutual (invented)", verifiedBy: instructor });
+  doc(tx, clubId, u["safety@hangarline.test"]!, { kind: "flight_review", issuedOn: monthsBefore(today, 9, 22), details: "Imani Ostrowski", verifiedBy: instructor });
 
   tx.insert(outsideFlightEntries).values([
-    { clubId, userId: member, flownOn: addDays(today, -31), aircraftDescription: "Larkspur L-2 rented at Pinecrest Strip (X03)", typeGroup: "Larkspur L-2", dayLandings: 2, nightFullStopLandings: 3, note: "Night checkout refresher" },
-    { clubId, userId: member, flownOn: addDays(today, -45), aircraftDescription: "Tailwheel trainer, Pinecrest Strip (X03)", dayLandings: 6, nightFullStopLandings: 0 },
+    {
+      clubId, userId: member, flownOn: addDays(today, -31), aircraftDescription: "Larkspur L-2 rented at Pinecrest Strip (X03)", typeGroup: "Larkspur L-2", dayLandings: 2, nightFullStopLandings: 3, note: "Night checkout refresher",
+      category: "Airplane", classRating: "Single-engine land", tailwheel: false, dayFullStopLandings: 2, verifiedById: instructor, verifiedAt: ago(30),
+    },
+    // Still the member's own claim: shown on the board, never counted by a booking guard.
+    { clubId, userId: member, flownOn: addDays(today, -45), aircraftDescription: "Tailwheel trainer, Pinecrest Strip (X03)", dayLandings: 6, nightFullStopLandings: 0, category: "Airplane", classRating: "Single-engine land", tailwheel: true, dayFullStopLandings: 6 },
   ]).run();
 }
 

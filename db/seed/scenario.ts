@@ -6,10 +6,12 @@ export const DEMO_PASSWORD = "hangar-demo-2026";
 
 export const ASSOCIATION = "Prairie Wing Association";
 
+// Home field positions are invented points (no real airfield), near each club's time zone, so
+// that sunrise and sunset (night under 14 CFR 61.57(b)) can be computed in the demo.
 export const DEMO_CLUBS = [
-  { key: "cottonwood", slug: "cottonwood-flyers", name: "Cottonwood Flyers", timeZone: "America/Denver", currency: "USD", unitSystem: "imperial" as const },
-  { key: "lakeshore", slug: "lakeshore-aero", name: "Lakeshore Aero Club", timeZone: "America/Chicago", currency: "USD", unitSystem: "imperial" as const },
-  { key: "silberau", slug: "aeroclub-silberau", name: "Aeroclub Silberau", timeZone: "Europe/Berlin", currency: "EUR", unitSystem: "metric" as const },
+  { key: "cottonwood", slug: "cottonwood-flyers", name: "Cottonwood Flyers", timeZone: "America/Denver", currency: "USD", unitSystem: "imperial" as const, home: { latitude: 39.4127, longitude: -104.6283 } },
+  { key: "lakeshore", slug: "lakeshore-aero", name: "Lakeshore Aero Club", timeZone: "America/Chicago", currency: "USD", unitSystem: "imperial" as const, home: { latitude: 41.7093, longitude: -88.4417 } },
+  { key: "silberau", slug: "aeroclub-silberau", name: "Aeroclub Silberau", timeZone: "Europe/Berlin", currency: "EUR", unitSystem: "metric" as const, home: { latitude: 52.0871, longitude: 13.2164 } },
 ];
 
 export type DemoPerson = { email: string; name: string; operator?: boolean; clubs: Partial<Record<string, Role[]>> };

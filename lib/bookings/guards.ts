@@ -9,11 +9,19 @@
 
 import type { AircraftStatusResult, StatusReason } from "@/lib/airworthiness";
 import { compareIsoDates, type IsoDate } from "@/lib/dates";
-import type { ClubSettings } from "@/lib/validation/club-settings";
+import { defaultClubSettings, type ClubSettings } from "@/lib/validation/club-settings";
+
+// A club whose stored settings predate a guard uses that guard's default (flightReview: refuse).
+const DEFAULT_GUARDS = defaultClubSettings().bookingGuards;
 
 export type GuardKey = keyof ClubSettings["bookingGuards"];
-/** "statusUnknown" is never a refusal: missing records are said out loud, never read as flyable. */
-export type GuardFinding = { guard: GuardKey | "statusUnknown"; reason: string };
+/**
+ * "statusUnknown" is never a refusal: missing records are said out loud, never read as flyable.
+ * "limitations" is never a refusal either: a deferred item with a limitation (14 CFR
+ * 91.213(d)) leaves the aircraft flyable within it, which only the pilot can judge for the
+ * flight; the pilot reads each limitation when booking and ticks it again at dispatch.
+ */
+export type GuardFinding = { guard: GuardKey | "statusUnknown" | "limitations"; reason: string };
 export type GuardOutcome = { refusals: GuardFinding[]; warnings: GuardFinding[] };
 
 export type GuardInput = {
@@ -34,6 +42,16 @@ export type GuardInput = {
     averageFlightHours: number;
   };
   /**
+   * Whether the booking touches night as 14 CFR 61.57(b) counts it: from one hour after sunset
+   * to one hour before sunrise at the club's home field. Computed outside (lib/bookings/night).
+   */
+  nightFlight: boolean;
+  /**
+   * Set when night could not be computed (the club's position is not recorded). The loader then
+   * sets `nightFlight` to true when passengers are planned, and the reason says why.
+   */
+  nightUnknown?: boolean;
+  /**
    * The member's standing, as the currency board computes it (db/queries/currency →
    * lib/currency): each is the last day on which it still holds, or null when not on record.
    */
@@ -44,6 +62,8 @@ export type GuardInput = {
     flightReviewLastDay: IsoDate | null;
     medicalLastDay: IsoDate | null;
     passengerDayLastDay: IsoDate | null;
+    /** 14 CFR 61.57(b), in the booked aircraft's category and class; verified records only. */
+    passengerNightLastDay: IsoDate | null;
     arrears: { inArrears: boolean; owedText: string; oldestDueDate: IsoDate | null } | null;
   };
   withInstructor: boolean;
@@ -51,6 +71,8 @@ export type GuardInput = {
 };
 
 const GROUNDING_NOTICE_CODES = new Set(["notice-active"]);
+/** Reasons that leave the aircraft "flyable with limits" (lib/airworthiness). */
+const LIMITATION_CODES = new Set(["deferred-item", "ifr-test-overdue"]);
 const ITEM_CODES = new Set(["inspection-overdue"]);
 
 function groundingTexts(reasons: StatusReason[]): string[] {
@@ -92,6 +114,26 @@ function aircraftFindings(input: GuardInput): GuardFinding[] {
   return out;
 }
 
+/**
+ * The limitations an aircraft flies under ("flyable with limits"), as the flight line words
+ * them: deferred items with their limitation (14 CFR 91.213(d)) and lapsed IFR-only checks.
+ * Booking quotes them; dispatch shows them again and needs the pilot's tick.
+ */
+export function limitationTexts(reasons: readonly StatusReason[]): string[] {
+  const texts: string[] = [];
+  for (const r of reasons) if (!r.grounding && LIMITATION_CODES.has(r.code) && !texts.includes(r.text)) texts.push(r.text);
+  return texts;
+}
+
+/** Each limitation now or by the end of the booking, quoted as the flight line words it. */
+function limitationFindings(input: GuardInput): GuardFinding[] {
+  const { aircraft } = input;
+  if (aircraft.statusNow.status === "grounded") return [];
+  const texts = limitationTexts([...aircraft.statusNow.reasons, ...(aircraft.statusAtEnd?.reasons ?? [])]);
+  if (!texts.length) return [];
+  return [{ guard: "limitations", reason: `${aircraft.registration} is flyable with limits. ${texts.map((t) => `“${t}”`).join(" ")} Plan this flight within each limitation; you will be asked again at dispatch.` }];
+}
+
 /** Lapsed when there is no last day, or it falls before the booking's last day. */
 function lapses(lastDay: IsoDate | null, endDate: IsoDate): boolean {
   return lastDay === null || compareIsoDates(lastDay, endDate) < 0;
@@ -104,9 +146,14 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
     if (!member.checkedOut) {
       out.push({ guard: "notCheckedOut", reason: `${member.name} is not checked out in the ${aircraft.typeGroup}: book with an instructor, or ask one for a checkout.` });
     }
+    // 14 CFR 61.56(c): without a flight review in the preceding 24 calendar months the pilot
+    // may not act as pilot in command at all, so this is its own guard, refused by default.
+    if (member.flightReviewLastDay === null) {
+      out.push({ guard: "flightReview", reason: `${member.name} may not act as pilot in command: no verified flight review on record (14 CFR 61.56(c)). Book with an instructor, or have an instructor verify your flight review.` });
+    } else if (lapses(member.flightReviewLastDay, window.endDate)) {
+      out.push({ guard: "flightReview", reason: `${member.name} may not act as pilot in command after ${member.flightReviewLastDay}: the flight review runs out before the booking ends (14 CFR 61.56(c)). Book with an instructor for a flight review.` });
+    }
     const current: string[] = [];
-    if (member.flightReviewLastDay === null) current.push("no flight review on record (14 CFR 61.56)");
-    else if (lapses(member.flightReviewLastDay, window.endDate)) current.push(`the flight review runs out on ${member.flightReviewLastDay} (14 CFR 61.56)`);
     if (member.checkedOut && lapses(member.recencyLastDay, window.endDate)) {
       current.push(
         member.recencyLastDay
@@ -118,6 +165,15 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
       current.push("not 3 takeoffs and landings within the preceding 90 days to carry passengers through the booking (14 CFR 61.57(a))");
     }
     if (current.length) out.push({ guard: "notCurrent", reason: `${member.name} is not current: ${current.join("; ")}.` });
+    if (input.carryingPassengers && input.nightFlight && lapses(member.passengerNightLastDay, window.endDate)) {
+      const why = input.nightUnknown
+        ? "Night could not be computed (the club's home field position is not recorded), so this booking is treated as touching night"
+        : "This booking touches night (from one hour after sunset to one hour before sunrise at the home field)";
+      const standing = member.passengerNightLastDay
+        ? `night passenger currency runs out on ${member.passengerNightLastDay}`
+        : "no 3 full-stop night landings within the preceding 90 days on record";
+      out.push({ guard: "notCurrent", reason: `${why}: ${member.name} may not carry passengers then: ${standing} (14 CFR 61.57(b)).` });
+    }
     if (member.medicalLastDay === null) {
       out.push({ guard: "medicalExpired", reason: `${member.name} has no medical certificate on record (14 CFR 61.23).` });
     } else if (lapses(member.medicalLastDay, window.endDate)) {
@@ -133,11 +189,11 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
 
 /** Every finding, sorted into refusals and warnings by the club's setting for its guard. */
 export function evaluateBookingGuards(input: GuardInput, settings: Pick<ClubSettings, "bookingGuards" | "recencyDaysInType">): GuardOutcome {
-  const findings = [...aircraftFindings(input), ...memberFindings(input, settings)];
+  const findings = [...aircraftFindings(input), ...limitationFindings(input), ...memberFindings(input, settings)];
   const refusals: GuardFinding[] = [];
   const warnings: GuardFinding[] = [];
   for (const f of findings) {
-    if (f.guard !== "statusUnknown" && settings.bookingGuards[f.guard] === "refuse") refusals.push(f);
+    if (f.guard !== "statusUnknown" && f.guard !== "limitations" && (settings.bookingGuards[f.guard] ?? DEFAULT_GUARDS[f.guard]) === "refuse") refusals.push(f);
     else warnings.push(f);
   }
   return { refusals, warnings };

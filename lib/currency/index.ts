@@ -6,8 +6,10 @@ export {
   lastDayOfWindow,
   passengerCurrency,
   recencyInType,
+  type CurrencyAircraft,
   type CurrencyStatus,
   type LandingEntry,
 } from "./passenger-currency";
 export { ageOn, basicMedStatus, medicalDurationMonths, medicalExpiry, medicalMonthsFor, medicalPrivilegeDates, MEDICAL_PRIVILEGES, type MedicalPrivilege } from "./medical";
 export { documentExpiryStatus, flightReviewDue, type DocumentStatus } from "./flight-review";
+export { AIRCRAFT_CATEGORIES, AIRCRAFT_CLASSES, aircraftClassKey, aircraftClassLabel, distinctClasses, normalizeClassWord, type AircraftClass } from "./aircraft-class";

@@ -11,7 +11,7 @@ export type AuditAction =
   | "money.bank.ignore" | "money.bank.book" | "money.period.lock" | "money.rates.save" | "money.settings.save"
   | "money.reminders.send" | "money.statement.email"
   | "bulletin.create" | "bulletin.draft.update" | "bulletin.publish" | "bulletin.remind"
-  | "safety_report.triage" | "safety_report.grounding" | "member_document.record" | "member_document.remind" | "medical.record"
+  | "safety_report.triage" | "safety_report.grounding" | "member_document.record" | "member_document.remind" | "medical.record" | "currency.verify"
   | "checkout.record" | "checkout.revoke"
   | "booking.create" | "booking.change" | "booking.cancel" | "booking.dispatch" | "booking.checkin"
   | "calendar.link.create" | "calendar.link.revoke" | "weight-balance.profile.update" | "preflight.template.update" | "preflight.record";

@@ -1,11 +1,11 @@
 import { z } from "zod";
 import { calendarDate, isRecordId, localDateTimeField, recordId } from "./primitives";
-import { checkbox, hoursField } from "./fleet";
+import { checkbox, hoursField, optionalCountField } from "./fleet";
 
 // Bookings, dispatch and check-in. Times are typed in the club's time zone as "YYYY-MM-DDTHH:MM"
 // (a datetime-local field) and turned into UTC instants by the action.
 
-const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "medicalExpired", "inArrears", "statusUnknown"] as const;
+const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "flightReview", "medicalExpired", "inArrears", "statusUnknown", "limitations"] as const;
 
 const id = (what: string) => recordId(`Choose ${what}.`);
 
@@ -66,6 +66,8 @@ export const dispatchBookingSchema = z
     preflightRecordId: id("the preflight record"),
     confirmPreflight: checkbox,
     acceptFindings: checkbox,
+    /** The pilot read the aircraft's limitations again and will fly within them (14 CFR 91.213(d)). */
+    acceptLimitations: checkbox,
   })
   .superRefine((v, ctx) => {
     if (!v.confirmPreflight) ctx.addIssue({ code: "custom", path: ["confirmPreflight"], message: "Confirm that you did this preflight and that the record is yours." });
@@ -101,6 +103,8 @@ export const checkInSchema = z
     tachOut: hoursField("tach out"),
     tachIn: hoursField("tach in"),
     dayLandings: count("the day landings"),
+    /** 14 CFR 61.57(a)(1)(ii): full stops count for a tailwheel airplane; empty = not recorded. */
+    dayFullStopLandings: optionalCountField("the day full-stop landings"),
     nightFullStopLandings: count("the night full-stop landings"),
     fuelAdded: quantity("the fuel added"),
     oilAdded: quantity("the oil added"),
@@ -113,6 +117,7 @@ export const checkInSchema = z
     if (v.hobbsIn - v.hobbsOut > 24) ctx.addIssue({ code: "custom", path: ["hobbsIn"], message: "More than 24 h on one flight: check the Hobbs readings." });
     if (v.tachIn - v.tachOut > 24) ctx.addIssue({ code: "custom", path: ["tachIn"], message: "More than 24 h on one flight: check the tach readings." });
     if (v.dayLandings + v.nightFullStopLandings === 0) ctx.addIssue({ code: "custom", path: ["dayLandings"], message: "Enter the landings: at least one, day or night." });
+    if (v.dayFullStopLandings !== null && v.dayFullStopLandings > v.dayLandings) ctx.addIssue({ code: "custom", path: ["dayFullStopLandings"], message: "Full-stop day landings are part of the day landings: enter no more than the day landings." });
     if (v.squawk !== null && v.squawk.length < 5) ctx.addIssue({ code: "custom", path: ["squawk"], message: "Describe the squawk in a few words (at least 5 characters), or leave it empty." });
   });
 

@@ -15,12 +15,21 @@ export const clubSettingsSchema = z.object({
   lateCancellationHours: z.number().int().min(0).max(168).default(24),
   oilChangeHours: z.number().min(1).max(200).default(50),
   oilChangeMonths: z.number().int().min(1).max(24).default(4),
+  /**
+   * The home field's position (decimal degrees, north and east positive), for sunrise and
+   * sunset: night as 14 CFR 61.57(b) counts it. Null until an admin records it; then night
+   * cannot be computed and the booking guard says so.
+   */
+  homeLatitude: z.number().min(-90).max(90).nullable().default(null),
+  homeLongitude: z.number().min(-180).max(180).nullable().default(null),
   bookingGuards: z
     .object({
       grounded: guard.default("refuse"),
       inspectionDue: guard.default("refuse"),
       notCheckedOut: guard.default("refuse"),
       notCurrent: guard.default("warn"),
+      /** 14 CFR 61.56(c): no flight review, no acting as pilot in command. */
+      flightReview: guard.default("refuse"),
       medicalExpired: guard.default("refuse"),
       inArrears: guard.default("warn"),
     })
@@ -32,3 +41,37 @@ export type ClubSettings = z.infer<typeof clubSettingsSchema>;
 export function defaultClubSettings(overrides: Partial<ClubSettings> = {}): ClubSettings {
   return clubSettingsSchema.parse(overrides);
 }
+
+const blank = (v: unknown) => v === undefined || v === null || (typeof v === "string" && v.trim() === "");
+
+function coordinate(label: string, limit: number) {
+  return z.preprocess(
+    (v) => (blank(v) ? null : typeof v === "string" ? v.trim() : v),
+    z
+      .union([
+        z.null(),
+        z
+          .string()
+          .refine((v) => /^-?\d{1,3}(\.\d{1,7})?$/.test(v), { error: `Enter the ${label} in decimal degrees, like ${limit === 90 ? "41.9732" : "-87.9073"}.` })
+          .transform(Number)
+          .refine((v) => Math.abs(v) <= limit, { error: `The ${label} must be between −${limit} and ${limit} degrees.` }),
+      ])
+      .optional(),
+  ).transform((v) => v ?? null);
+}
+
+/**
+ * The home field's position, for sunrise and sunset (night under 14 CFR 61.57(b)). Both or
+ * neither: clearing both makes night "cannot be computed" again.
+ */
+export const homePositionSchema = z
+  .object({
+    homeLatitude: coordinate("latitude", 90),
+    homeLongitude: coordinate("longitude", 180),
+  })
+  .superRefine((v, ctx) => {
+    if ((v.homeLatitude === null) !== (v.homeLongitude === null)) {
+      const path = v.homeLatitude === null ? "homeLatitude" : "homeLongitude";
+      ctx.addIssue({ code: "custom", path: [path], message: "Enter both the latitude and the longitude, or clear both." });
+    }
+  });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { AIRCRAFT_CATEGORIES, AIRCRAFT_CLASSES } from "@/lib/currency/aircraft-class";
 import { calendarDate, localDateTimeField, recordId } from "./primitives";
 
 // Shared by the fleet actions, handlers and tests. Every field says what is wrong in words.
@@ -60,6 +61,9 @@ function optionalWhole(label: string, min: number, max: number) {
 }
 
 const countField = (label: string) => z.preprocess((v) => (v === undefined || v === "" ? "0" : v), wholeNumber(label, 0, 99));
+/** A count that may be left empty ("not recorded"): null, never 0. */
+export const optionalCountField = (label: string) =>
+  z.preprocess((v) => (v === undefined || v === null || (typeof v === "string" && v.trim() === "") ? undefined : v), wholeNumber(label, 0, 99).optional()).transform((v) => v ?? null);
 const quantityField = (label: string) =>
   z.preprocess(
     (v) => (v === undefined || v === "" ? "0" : v),
@@ -102,8 +106,10 @@ export const aircraftFields = {
   make: text("the make", 1, 60),
   model: text("the model", 1, 60),
   typeGroup: text("the type group (used for checkouts)", 1, 60),
-  category: text("the category", 1, 40),
-  classRating: text("the class", 1, 40),
+  // 14 CFR 61.5 categories and classes: passenger currency counts landings by them (61.57(a)).
+  category: z.enum(AIRCRAFT_CATEGORIES, { error: "Choose the category from the list." }),
+  classRating: z.enum(AIRCRAFT_CLASSES, { error: "Choose the class from the list." }),
+  tailwheel: checkbox,
   serialNumber: optionalText("the serial number", 40),
   year: optionalWhole("the year", 1903, 2100),
   homeField: optionalText("the home field", 60),
@@ -257,6 +263,8 @@ export const logFlightSchema = z
     tachOut: hoursField("tach out"),
     tachIn: hoursField("tach in"),
     dayLandings: countField("the day landings"),
+    /** 14 CFR 61.57(a)(1)(ii): full stops count for a tailwheel airplane; empty = not recorded. */
+    dayFullStopLandings: optionalCountField("the day full-stop landings"),
     nightFullStopLandings: countField("the night full-stop landings"),
     fuelAdded: quantityField("the fuel added"),
     oilAdded: quantityField("the oil added"),
@@ -269,6 +277,7 @@ export const logFlightSchema = z
     if (v.hobbsIn - v.hobbsOut > 24) ctx.addIssue({ code: "custom", path: ["hobbsIn"], message: "More than 24 h on one flight: check the Hobbs readings." });
     if (v.tachIn - v.tachOut > 24) ctx.addIssue({ code: "custom", path: ["tachIn"], message: "More than 24 h on one flight: check the tach readings." });
     if (v.squawk !== null && v.squawk.length < 5) ctx.addIssue({ code: "custom", path: ["squawk"], message: "Describe the squawk in a few words (at least 5 characters), or leave it empty." });
+    if (v.dayFullStopLandings !== null && v.dayFullStopLandings > v.dayLandings) ctx.addIssue({ code: "custom", path: ["dayFullStopLandings"], message: "Full-stop day landings are part of the day landings: enter no more than the day landings." });
   });
 
 export const reviewMeterFlagSchema = z.object({

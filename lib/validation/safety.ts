@@ -3,6 +3,7 @@ import { BULLETIN_AUDIENCES, BULLETIN_URGENCIES, DOCUMENT_KINDS, REPORT_STATUSES
 import { isIsoDate } from "@/lib/dates";
 import { calendarDate, recordId } from "./primitives";
 import { CONTRIBUTING_FACTORS } from "@/lib/safety/labels";
+import { AIRCRAFT_CATEGORIES, AIRCRAFT_CLASSES } from "@/lib/currency/aircraft-class";
 
 // Form fields arrive as strings; an empty text box means "not given".
 const blankToUndefined = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
@@ -132,13 +133,33 @@ const landingCount = (what: string) =>
     z.coerce.number({ error: `Enter the number of ${what}.` }).int({ error: `Enter a whole number of ${what}.` }).min(0, { error: `The number of ${what} cannot be negative.` }).max(99, { error: `Enter at most 99 ${what}.` }),
   );
 
-export const outsideFlightSchema = z.object({
-  flownOn: isoDateField("the date of the flight"),
-  aircraftDescription: z.string({ error: "Describe the aircraft." }).trim().min(2, { error: "Describe the aircraft (type and where you flew it)." }).max(120, { error: "Keep the aircraft to 120 characters." }),
-  typeGroup: z.preprocess(blankToUndefined, typeGroupText.optional()),
-  dayLandings: landingCount("day landings"),
-  nightFullStopLandings: landingCount("night full-stop landings"),
-  note: optionalText(500, "Keep the note to 500 characters."),
+export const outsideFlightSchema = z
+  .object({
+    flownOn: isoDateField("the date of the flight"),
+    aircraftDescription: z.string({ error: "Describe the aircraft." }).trim().min(2, { error: "Describe the aircraft (type and where you flew it)." }).max(120, { error: "Keep the aircraft to 120 characters." }),
+    typeGroup: z.preprocess(blankToUndefined, typeGroupText.optional()),
+    // 14 CFR 61.57(a)(1): landings count toward currency in the same category and class only.
+    category: z.enum(AIRCRAFT_CATEGORIES, { error: "Choose the category of the aircraft you flew." }),
+    classRating: z.enum(AIRCRAFT_CLASSES, { error: "Choose the class of the aircraft you flew." }),
+    tailwheel: checkbox,
+    dayLandings: landingCount("day landings"),
+    // Empty: not recorded (counts no day landings toward tailwheel currency).
+    dayFullStopLandings: z.preprocess((v) => (v === undefined || v === null || (typeof v === "string" && v.trim() === "") ? undefined : v), landingCount("day full-stop landings").optional()).transform((v) => v ?? null),
+    nightFullStopLandings: landingCount("night full-stop landings"),
+    note: optionalText(500, "Keep the note to 500 characters."),
+  })
+  .refine((v) => typeof v.dayFullStopLandings !== "number" || typeof v.dayLandings !== "number" || v.dayFullStopLandings <= v.dayLandings, {
+    error: "Full-stop day landings are part of the day landings: enter no more than the day landings.",
+    path: ["dayFullStopLandings"],
+    ...always,
+  });
+
+/** Verifying a member's claim: which record, and the logbook page or certificate seen. */
+export const verifyRecordSchema = z.object({
+  kind: z.enum(["flight_review", "medical", "outside_flight"], { error: "Choose what is verified." }),
+  recordId: idField,
+  file: optionalFile,
+  evidenceSeen: checkbox.refine((v) => v, { error: "Tick that you checked the record against the logbook page or certificate." }),
 });
 
 export const recordCheckoutSchema = z.object({

@@ -47,7 +47,7 @@ export async function run({ measure }: BenchTools): Promise<BenchResult[]> {
   const db = openDatabase(file);
   try {
     migrateDatabase(db);
-    const settings = defaultClubSettings({ bookingGuards: { grounded: "warn", inspectionDue: "warn", notCheckedOut: "warn", notCurrent: "warn", medicalExpired: "warn", inArrears: "warn" } });
+    const settings = defaultClubSettings({ bookingGuards: { grounded: "warn", inspectionDue: "warn", notCheckedOut: "warn", notCurrent: "warn", flightReview: "warn", medicalExpired: "warn", inArrears: "warn" } });
     const [club] = db.insert(clubs).values({ slug: "bench-club", name: "Bench Club", timeZone: "America/Chicago", currency: "USD", unitSystem: "imperial", settings }).returning().all();
     const [owner] = db.insert(users).values({ email: "bench@hangarline.test", name: "Bench Pilot" }).returning().all();
     db.insert(memberships).values({ clubId: club!.id, userId: owner!.id, roles: ["member"], joinedOn: "2020-01-01" }).run();
@@ -97,7 +97,7 @@ export async function run({ measure }: BenchTools): Promise<BenchResult[]> {
     const createResult = await measure("create a booking (lock, overlap, all guards, insert) with 100,000 bookings", () => {
       const i = sample++;
       const start = first + (nowSlot + i) * SLOT_MS + 2 * 3_600_000 + 15 * 60_000;
-      const input = createBookingSchema.parse({ aircraftId: fleet[i % fleet.length]!.id, startsAt: localInput(start, club!.timeZone), endsAt: localInput(start + 3_600_000, club!.timeZone), acceptedGuards: ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "medicalExpired", "inArrears", "statusUnknown"] });
+      const input = createBookingSchema.parse({ aircraftId: fleet[i % fleet.length]!.id, startsAt: localInput(start, club!.timeZone), endsAt: localInput(start + 3_600_000, club!.timeZone), acceptedGuards: ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "flightReview", "medicalExpired", "inArrears", "statusUnknown", "limitations"] });
       const made = db.transaction((tx) => createBookingInTx(tx, ctx as never, input));
       created.push(made.bookingId);
     }, { samples: 200, warmup: 5 });

@@ -117,6 +117,8 @@ async function flow(page: Page) {
   const dispatch = page.getByRole("form", { name: "Dispatch" });
   await dispatch.getByLabel(/I did this preflight myself/).check();
   await dispatch.getByLabel("I have dealt with every finding listed for this aircraft.").check();
+  // N0527L flies with a deferred landing light: its limitation is ticked again here.
+  await dispatch.getByLabel("I have read each limitation and will fly this flight within them.").check();
   await dispatch.getByRole("button", { name: "Dispatch" }).click();
   await page.getByRole("link", { name: "Check in" }).waitFor();
   await page.getByRole("link", { name: "Check in" }).click();

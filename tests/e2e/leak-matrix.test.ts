@@ -66,7 +66,7 @@ function paramSets(route: Route, facts: SeedFacts, missing: string[], empty: str
 type Request = { viewer: Viewer; kind: string; path: string; headers: Record<string, string>; route: Route; renderFrom?: string };
 type Finding = { viewer: string; kind: string; path: string; status: number; category: string; owner: string; text: string };
 
-const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "medicalExpired", "inArrears", "statusUnknown"];
+const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "flightReview", "medicalExpired", "inArrears", "statusUnknown", "limitations"];
 
 /**
  * Makes sure another member's booking with accepted personal warnings (arrears, currency) exists,
@@ -77,18 +77,21 @@ async function ensureWarnedBooking(): Promise<string> {
   const club = db.prepare("select id, time_zone as tz from clubs where slug = ?").get(CLUB_SLUG) as { id: string; tz: string };
   const existing = db.prepare("select id from bookings where club_id = ? and (accepted_warnings like '%inArrears%' or accepted_warnings like '%notCurrent%') limit 1").get(club.id) as { id: string } | undefined;
   const planes = db.prepare("select id from aircraft where club_id = ? order by registration desc").all(club.id) as { id: string }[];
+  // pilot2 is in arrears; with an instructor aboard (pilot in command) the lapsed flight review
+  // and medical do not refuse the booking, and the arrears warning stays personal.
+  const instructor = (db.prepare("select id from users where email = ?").get("instructor@hangarline.test") as { id: string }).id;
   db.close();
   if (existing) return existing.id;
   const day = (offset: number) => new Intl.DateTimeFormat("en-CA", { timeZone: club.tz, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(Date.now() + offset * 86_400_000));
   const tried: string[] = [];
-  for (const email of ["student@hangarline.test", "pilot2@hangarline.test", "twoclubs@hangarline.test"]) {
+  for (const [email, instructorId] of [["pilot2@hangarline.test", instructor], ["student@hangarline.test", null], ["twoclubs@hangarline.test", null]] as const) {
     const jar = await signInOverHttp(baseUrl, email, DEMO_PASSWORD);
     for (const plane of planes) {
       for (const offset of [9, 10, 12]) {
         const res = await fetch(`${baseUrl}/api/clubs/${CLUB_SLUG}/bookings`, {
           method: "POST",
           headers: { "content-type": "application/json", origin: baseUrl, cookie: [...jar].map(([k, v]) => `${k}=${v}`).join("; ") },
-          body: JSON.stringify({ aircraftId: plane.id, startsAt: `${day(offset)}T05:00`, endsAt: `${day(offset)}T06:00`, purpose: "Leak matrix fixture", acceptedGuards: GUARD_KEYS }),
+          body: JSON.stringify({ aircraftId: plane.id, startsAt: `${day(offset)}T05:00`, endsAt: `${day(offset)}T06:00`, purpose: "Leak matrix fixture", instructorId: instructorId ?? undefined, acceptedGuards: GUARD_KEYS }),
         });
         const body = (await res.json()) as { data?: { id: string; warningsAccepted: { guard: string }[] }; error?: { message: string } };
         if (res.status === 201 && body.data && body.data.warningsAccepted.some((w) => ["inArrears", "notCurrent", "medicalExpired", "notCheckedOut"].includes(w.guard))) return body.data.id;

@@ -27,7 +27,7 @@ async function book(email: string, registration: string, days: number, from: str
 describe("changing and cancelling, the late rule, grounding e-mails, and the JSON routes", () => {
   beforeAll(async () => {
     await seedScenario();
-    setGuards(SLUG, { grounded: "warn", inspectionDue: "warn", notCheckedOut: "warn", notCurrent: "warn", medicalExpired: "warn", inArrears: "warn" }, { lateCancellationHours: 24 });
+    setGuards(SLUG, { grounded: "warn", inspectionDue: "warn", notCheckedOut: "warn", notCurrent: "warn", flightReview: "warn", medicalExpired: "warn", inArrears: "warn" }, { lateCancellationHours: 24 });
   });
 
   it("cancelling well ahead is on time; the aircraft is free again", async () => {

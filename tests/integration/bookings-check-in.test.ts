@@ -81,9 +81,12 @@ describe("weight and balance, preflight, dispatch and check-in on one booking", 
     const recordId = db().select().from(preflightRecordItems).all().at(-1)!.recordId;
     const unconfirmed = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId }));
     expect(unconfirmed.fieldErrors.confirmPreflight?.[0]).toMatch(/Confirm/);
-    const findings = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on" }));
+    // N0527L flies with a deferred landing light (14 CFR 91.213(d)): its limitation first.
+    const limits = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptFindings: "on" }));
+    expect(limits.fieldErrors.acceptLimitations?.join(" ")).toMatch(/No night flight/);
+    const findings = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptLimitations: "on" }));
     expect(findings.fieldErrors.acceptFindings?.join(" ")).toMatch(/tire/);
-    const ok = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptFindings: "on" }));
+    const ok = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptFindings: "on", acceptLimitations: "on" }));
     expect(ok, ok.message).toMatchObject({ ok: true });
     expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!).toMatchObject({ status: "dispatched", preflightRecordId: recordId });
   });

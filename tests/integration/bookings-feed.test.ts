@@ -35,7 +35,7 @@ describe("the member's calendar feed (iCalendar, RFC 5545)", () => {
   beforeAll(async () => {
     await seedScenario();
     // These tests are about the feed, not the guards: every guard only warns, and is accepted.
-    setGuards(SLUG, { grounded: "warn", inspectionDue: "warn", notCheckedOut: "warn", notCurrent: "warn", medicalExpired: "warn", inArrears: "warn" });
+    setGuards(SLUG, { grounded: "warn", inspectionDue: "warn", notCheckedOut: "warn", notCurrent: "warn", flightReview: "warn", medicalExpired: "warn", inArrears: "warn" });
   });
 
   it("holds exactly the person's bookings, as member and as instructor, and none of anyone else's", async () => {

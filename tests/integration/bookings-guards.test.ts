@@ -39,11 +39,22 @@ describe("booking guards: refused or warned as the club decides, always with the
     });
   });
 
-  it("a pilot with everything in order books without any warning", async () => {
-    const state = await attempt("ready@example.test", "N0527L");
+  it("a pilot with everything in order books a flyable aircraft without any warning", async () => {
+    const state = await attempt("ready@example.test", "N0534L");
     expect(state, state.message).toMatchObject({ ok: true });
     const row = db().select().from(bookings).where(eq(bookings.id, (state.data as { bookingId: string }).bookingId)).get()!;
     expect(row.acceptedWarnings).toEqual([]);
+  });
+
+  it("an aircraft flyable with limits: the warning quotes each limitation (14 CFR 91.213(d)); once read it is kept with the booking", async () => {
+    const warned = await attempt("ready@example.test", "N0527L");
+    expect(warned.ok).toBe(false);
+    expect(warned.fieldErrors.warningGuards).toEqual(["limitations"]);
+    expect(warned.fieldErrors.warnings?.[0]).toContain("Limitation: No night flight until the left landing light is repaired");
+    const accepted = await attempt("ready@example.test", "N0527L", { acceptedGuards: ["limitations"] });
+    expect(accepted, accepted.message).toMatchObject({ ok: true });
+    const row = db().select().from(bookings).where(eq(bookings.id, (accepted.data as { bookingId: string }).bookingId)).get()!;
+    expect(row.acceptedWarnings).toEqual([{ guard: "limitations", reason: warned.fieldErrors.warnings![0] }]);
   });
 
   it("grounded: refused with the grounding reason, or warned and then booked once read", async () => {
@@ -96,15 +107,15 @@ describe("booking guards: refused or warned as the club decides, always with the
     expect(dual, dual.message).toMatchObject({ ok: true });
   });
 
-  it("not current (flight review run out): warned by default, refused when the club says so", async () => {
-    setGuards(SLUG, { notCurrent: "warn" });
+  it("flight review run out: refused by default (14 CFR 61.56(c)), warned only when the club says so", async () => {
+    const refused = await attempt("stale@example.test", "N0527L", { acceptedGuards: ["limitations", "flightReview"] });
+    expect(refused.ok).toBe(false);
+    expect(refused.fieldErrors.refusals).toEqual([expect.stringMatching(/^stale may not act as pilot in command after \d{4}-\d{2}-\d{2}: the flight review runs out before the booking ends \(14 CFR 61\.56\(c\)\)/)]);
+    expect(refused.message).toMatch(/^Not booked: stale may not act as pilot in command/);
+    setGuards(SLUG, { flightReview: "warn" });
     const warned = await attempt("stale@example.test", "N0527L");
-    expect(warned.fieldErrors.warningGuards).toEqual(["notCurrent"]);
-    expect(warned.fieldErrors.warnings?.[0]).toMatch(/^stale is not current: the flight review runs out on \d{4}-\d{2}-\d{2} \(14 CFR 61\.56\)/);
-    setGuards(SLUG, { notCurrent: "refuse" });
-    const refused = await attempt("stale@example.test", "N0527L", { acceptedGuards: ["notCurrent"] });
-    expect(refused.fieldErrors.refusals?.[0]).toMatch(/stale is not current/);
-    setGuards(SLUG, { notCurrent: "warn" });
+    expect(warned.fieldErrors.warningGuards).toEqual(["limitations", "flightReview"]);
+    setGuards(SLUG, { flightReview: "refuse" });
   });
 
   it("medical expired: refused or warned, with the expiry date", async () => {
@@ -113,15 +124,15 @@ describe("booking guards: refused or warned as the club decides, always with the
     expect(refused.fieldErrors.refusals?.[0]).toBe(`nomedical's medical certificate runs out on ${addDays(today(), -1)}, before the booking ends (14 CFR 61.23).`);
     setGuards(SLUG, { medicalExpired: "warn" });
     const warned = await attempt("nomedical@example.test", "N0527L");
-    expect(warned.fieldErrors.warningGuards).toEqual(["medicalExpired"]);
+    expect(warned.fieldErrors.warningGuards).toEqual(["limitations", "medicalExpired"]);
     setGuards(SLUG, { medicalExpired: "refuse" });
   });
 
   it("in arrears: warned by default with the amount, refused when the club says so", async () => {
     setGuards(SLUG, { inArrears: "warn" });
     const warned = await attempt("owes@example.test", "N0527L");
-    expect(warned.fieldErrors.warningGuards).toEqual(["inArrears"]);
-    expect(warned.fieldErrors.warnings?.[0]).toMatch(/^owes's account is in arrears: \$180\.00 owed, unpaid since \d{4}-\d{2}-\d{2}\.$/);
+    expect(warned.fieldErrors.warningGuards).toEqual(["limitations", "inArrears"]);
+    expect(warned.fieldErrors.warnings?.[1]).toMatch(/^owes's account is in arrears: \$180\.00 owed, unpaid since \d{4}-\d{2}-\d{2}\.$/);
     setGuards(SLUG, { inArrears: "refuse" });
     const refused = await attempt("owes@example.test", "N0527L", { acceptedGuards: ["inArrears"] });
     expect(refused.fieldErrors.refusals?.[0]).toMatch(/in arrears/);

@@ -13,7 +13,7 @@ export async function seedScenario(): Promise<void> {
   seeded = true;
 }
 
-export const ALL_GUARDS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "medicalExpired", "inArrears", "statusUnknown"];
+export const ALL_GUARDS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "flightReview", "medicalExpired", "inArrears", "statusUnknown", "limitations"];
 
 export function planeId(slug: string, registration: string): string {
   const club = clubBySlug(slug);
@@ -34,27 +34,29 @@ export function setGuards(slug: string, guards: Partial<Club["settings"]["bookin
 
 /**
  * A member of the club with exactly the records asked for: checkouts by type group, a medical
- * running out on `medicalExpiresOn`, a flight review given on `flightReviewOn`.
+ * running out on `medicalExpiresOn`, a flight review given on `flightReviewOn`. The records are
+ * verified by the instructor (they count), unless `claimed` leaves them as the member's claims.
  */
-export function makePilot(slug: string, email: string, records: { checkouts?: string[]; medicalExpiresOn?: string | null; flightReviewOn?: string | null; flewTypeDaysAgo?: number }): string {
+export function makePilot(slug: string, email: string, records: { checkouts?: string[]; medicalExpiresOn?: string | null; flightReviewOn?: string | null; flewTypeDaysAgo?: number; claimed?: boolean }): string {
   const club = clubBySlug(slug);
   const [u] = db().insert(users).values({ email, name: email.split("@")[0]! }).returning({ id: users.id }).all();
   const userId = u!.id;
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   db().insert(memberships).values({ clubId: club.id, userId, roles: ["member"], joinedOn: today }).run();
   const instructor = db().select({ id: users.id }).from(users).where(eq(users.email, "instructor@hangarline.test")).get()!;
+  const verified = records.claimed ? {} : { verifiedById: instructor.id, verifiedAt: new Date() };
   for (const group of records.checkouts ?? []) {
     db().insert(checkouts).values({ clubId: club.id, userId, typeGroup: group, checkedOutOn: addDays(today, -30), instructorId: instructor.id, instructorCertificateNumber: "CFI 0000001" }).run();
   }
   if (records.medicalExpiresOn) {
-    db().insert(medicalCertificates).values({ clubId: club.id, userId, kind: "faa_class", medicalClass: 3, examDate: addDays(today, -400), expiresOn: records.medicalExpiresOn, recordedById: userId }).run();
+    db().insert(medicalCertificates).values({ clubId: club.id, userId, kind: "faa_class", medicalClass: 3, examDate: addDays(today, -400), expiresOn: records.medicalExpiresOn, recordedById: userId, ...verified }).run();
   }
   if (records.flightReviewOn) {
-    db().insert(memberDocuments).values({ clubId: club.id, userId, kind: "flight_review", issuedOn: records.flightReviewOn, recordedById: userId }).run();
+    db().insert(memberDocuments).values({ clubId: club.id, userId, kind: "flight_review", issuedOn: records.flightReviewOn, recordedById: userId, ...verified }).run();
   }
   if (records.flewTypeDaysAgo !== undefined) {
     for (const group of records.checkouts ?? []) {
-      db().insert(outsideFlightEntries).values({ clubId: club.id, userId, flownOn: addDays(today, -records.flewTypeDaysAgo), typeGroup: group, aircraftDescription: `${group} (test)`, dayLandings: 3, nightFullStopLandings: 0 }).run();
+      db().insert(outsideFlightEntries).values({ clubId: club.id, userId, flownOn: addDays(today, -records.flewTypeDaysAgo), typeGroup: group, aircraftDescription: `${group} (test)`, dayLandings: 3, nightFullStopLandings: 0, category: "Airplane", classRating: "Single-engine land", tailwheel: false, ...verified }).run();
     }
   }
   return userId;

@@ -60,17 +60,21 @@ describe("checkouts and currency", () => {
     const club = clubBySlug(CLUB);
     // Today's entries are newer than anything the demo flight log holds, so they decide.
     const flownOn = today();
-    db().insert(flights).values({ clubId: club.id, aircraftId: plane.id, pilotId: student, flownOn, hobbsOut: 1, hobbsIn: 2, tachOut: 1, tachIn: 1.8, dayLandings: 3, nightFullStopLandings: 0, fuelUnit: "gal", oilUnit: "qt" }).run();
+    db().insert(flights).values({ clubId: club.id, aircraftId: plane.id, pilotId: student, flownOn, hobbsOut: 1, hobbsIn: 2, tachOut: 1, tachIn: 1.8, dayLandings: 3, dayFullStopLandings: 3, nightFullStopLandings: 0, fuelUnit: "gal", oilUnit: "qt" }).run();
     signInAs("student@hangarline.test");
-    const night = await recordOutsideFlight(EMPTY, form({ club: CLUB, flownOn: today(), aircraftDescription: "Rental at Pinecrest Strip (X03)", dayLandings: "0", nightFullStopLandings: "3" }));
-    expect(night.ok).toBe(true);
+    const night = await recordOutsideFlight(EMPTY, form({ club: CLUB, flownOn: today(), aircraftDescription: "Rental at Pinecrest Strip (X03)", category: "Airplane", classRating: "Single-engine land", dayLandings: "0", nightFullStopLandings: "3" }));
+    expect(night.ok, night.message).toBe(true);
     const own = await callRoute(memberCurrencyRoute, "/x", { club: CLUB, userId: student });
     expect(own.status).toBe(200);
     const items = (own.body as { items: CurrencyItem[] }).items;
     const by = (key: string) => items.find((i) => i.key === key)!;
     // 14 CFR 61.57(a),(b), day of the landings = day 1: landings on D count through D + 89.
-    expect(by("passenger_night")).toMatchObject({ state: "current", lastDay: addDays(today(), 89) });
-    expect(by("passenger_day")).toMatchObject({ state: "current", lastDay: addDays(today(), 89) });
+    // The outside night flight is the student's own claim: shown beside, not counted.
+    expect(by("passenger_night:airplane/singleengineland")).toMatchObject({ claim: { state: "current", lastDay: addDays(today(), 89) } });
+    expect(by("passenger_night:airplane/singleengineland").lastDay).not.toBe(addDays(today(), 89));
+    // N0534L is a tailwheel airplane of the class: its full stops count for both (61.57(a)(1)).
+    expect(by("passenger_day:airplane/singleengineland")).toMatchObject({ state: "current", lastDay: addDays(today(), 89) });
+    expect(by("passenger_day:airplane/singleengineland/tailwheel")).toMatchObject({ state: "current", lastDay: addDays(today(), 89) });
     // Club setting for Lakeshore: flown the type group within 60 days (seeded recencyDaysInType).
     expect(by("recency:brightwing bw-4")).toMatchObject({ state: "current", lastDay: addDays(flownOn, 59) });
     expect(by("medical")).toMatchObject({ state: "missing", lastDay: null });

@@ -4,6 +4,7 @@ import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
 import { getPreflightRecord } from "@/db/queries/tools-preflight";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
+import { limitationTexts } from "@/lib/bookings/guards";
 import { writeAudit } from "@/lib/server/audit";
 import { dispatchBookingSchema } from "@/lib/validation/bookings";
 import { loadBookingForParty } from "./booking-access";
@@ -29,6 +30,16 @@ export const dispatchBooking = clubAction({
     if (status.status === "grounded") {
       throw new ActionError(`Not dispatched: the aircraft is grounded — ${status.reasons.filter((r) => r.grounding).map((r) => r.text).join("; ")}.`, {}, "conflict");
     }
+    // Flyable with limits: the pilot reads each limitation again here, whatever was accepted
+    // when booking (a limitation may have been added since), and ticks that they will fly
+    // within it (14 CFR 91.213(d)(3)). Without the tick nothing is written.
+    const limitations = limitationTexts(status.reasons);
+    if (limitations.length && !input.acceptLimitations) {
+      throw new ActionError(
+        `Not dispatched: ${status.aircraft.registration} flies with limits. Read each limitation and tick that you will fly within it.`,
+        { acceptLimitations: limitations },
+      );
+    }
     const concerns = [
       ...(record.outcome === "findings" ? record.items.filter((i) => i.result === "finding").map((i) => `Finding: ${i.label}${i.note ? ` — ${i.note}` : ""}`) : []),
       ...(record.outcome === "findings" && record.findingCount > record.items.filter((i) => i.result === "finding").length ? ["The record has fuel, sump or oil findings."] : []),
@@ -39,7 +50,7 @@ export const dispatchBooking = clubAction({
     }
     const now = new Date();
     updateBookingRow(tx, club.id, booking.id, { status: "dispatched", dispatchedAt: now, dispatchedById: user.id, preflightRecordId: record.id });
-    writeAudit(tx, { clubId: club.id, actorId: user.id, action: "booking.dispatch", subjectType: "Booking", subjectId: booking.id, before: { status: booking.status }, after: { status: "dispatched", preflightRecordId: record.id, accepted: concerns } });
+    writeAudit(tx, { clubId: club.id, actorId: user.id, action: "booking.dispatch", subjectType: "Booking", subjectId: booking.id, before: { status: booking.status }, after: { status: "dispatched", preflightRecordId: record.id, accepted: concerns, limitationsAccepted: limitations } });
     return { message: "Dispatched: the aircraft is out on your booking. Check in when you are back.", refresh: true };
   },
 });

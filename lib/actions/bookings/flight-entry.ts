@@ -18,6 +18,8 @@ export type FlightEntry = {
   tachOut: number;
   tachIn: number;
   dayLandings: number;
+  /** How many day landings were to a full stop; null or absent when not recorded. */
+  dayFullStopLandings?: number | null;
   nightFullStopLandings: number;
   fuelAdded: number;
   oilAdded: number;
@@ -43,7 +45,7 @@ export function writeFlightEntry(
     .values({
       clubId: club.id, aircraftId: plane.id, pilotId: who.pilotId, flownOn,
       hobbsOut: entry.hobbsOut, hobbsIn: entry.hobbsIn, tachOut: entry.tachOut, tachIn: entry.tachIn,
-      dayLandings: entry.dayLandings, nightFullStopLandings: entry.nightFullStopLandings,
+      dayLandings: entry.dayLandings, dayFullStopLandings: entry.dayFullStopLandings ?? null, nightFullStopLandings: entry.nightFullStopLandings,
       fuelAdded: entry.fuelAdded, oilAdded: entry.oilAdded, fuelUnit: metric ? "l" : "gal", oilUnit: metric ? "l" : "qt",
       notes: entry.notes, continuity: continuity.status, continuityText, recordedById: who.recordedById,
     })

@@ -11,7 +11,9 @@ import { outsideFlightSchema } from "@/lib/validation/safety";
 export const recordOutsideFlight = clubAction({
   schema: outsideFlightSchema,
   permission: (ability, _input, ctx) => canOn(ability, "create", "Currency", { userId: ctx.user.id }),
-  success: "Flight added to your currency.",
+  // Entered by the member about themselves: a claim until an instructor or the safety officer
+  // verifies it against the logbook (verifiedAt stays null here).
+  success: "Flight added. It shows as claimed, and counts toward your currency once an instructor or the safety officer verifies it against your logbook.",
   run(tx, ctx, input) {
     if (compareIsoDates(input.flownOn, clubToday(ctx)) > 0) throw new ActionError("Some fields need attention; nothing was saved.", { flownOn: ["The date cannot be in the future."] });
     tx.insert(outsideFlightEntries)
@@ -21,7 +23,11 @@ export const recordOutsideFlight = clubAction({
         flownOn: input.flownOn,
         aircraftDescription: input.aircraftDescription,
         typeGroup: input.typeGroup ?? null,
+        category: input.category,
+        classRating: input.classRating,
+        tailwheel: input.tailwheel,
         dayLandings: input.dayLandings,
+        dayFullStopLandings: input.dayFullStopLandings,
         nightFullStopLandings: input.nightFullStopLandings,
         note: input.note ?? null,
       })

@@ -29,7 +29,7 @@ export function discardOnFailure<T>(stored: StoredFile | null, body: () => T): T
 export function insertUploadRow(
   tx: Tx,
   stored: StoredFile,
-  row: { clubId: string; subjectType: "MemberDocument" | "Bulletin"; subjectId: string; ownerUserId: string | null; uploadedById: string },
+  row: { clubId: string; subjectType: "MemberDocument" | "Bulletin" | "Medical"; subjectId: string; ownerUserId: string | null; uploadedById: string },
 ): string {
   const [u] = tx
     .insert(uploads)

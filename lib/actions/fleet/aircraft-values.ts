@@ -23,6 +23,7 @@ export function aircraftValues(club: Club, input: AircraftInput) {
     typeGroup: input.typeGroup,
     category: input.category,
     classRating: input.classRating,
+    tailwheel: input.tailwheel,
     serialNumber: input.serialNumber,
     year: input.year,
     homeField: input.homeField,

@@ -48,6 +48,7 @@ export const logFlight = clubAction({
         tachOut: input.tachOut,
         tachIn: input.tachIn,
         dayLandings: input.dayLandings,
+        dayFullStopLandings: input.dayFullStopLandings,
         nightFullStopLandings: input.nightFullStopLandings,
         fuelAdded: input.fuelAdded,
         oilAdded: input.oilAdded,

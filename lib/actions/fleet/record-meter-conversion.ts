@@ -8,7 +8,6 @@ import { isoDateInTimeZone } from "@/lib/dates";
 import { maintenanceHours, toInspectionItem } from "@/lib/fleet/status-input";
 import { writeAudit } from "@/lib/server/audit";
 import { recordMeterConversionSchema } from "@/lib/validation/fleet";
-import { fleetPaths } from "./paths";
 
 const METER_WORD = { hobbs: "Hobbs", tach: "tach" } as const;
 
@@ -62,7 +61,7 @@ export const recordMeterConversion = clubAction({
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "inspection.meter.convert", subjectType: "InspectionCompletion", subjectId: governing.id, after: { item: item.name, conversionId: row!.id, ...values } });
     return {
       message: `Recorded: the ${item.name.toLowerCase()} of ${governing.date} (${formatHours(governing.hours)} h on the ${METER_WORD[values.fromMeter]}) stands at ${formatHours(input.reading)} h on the ${METER_WORD[meter]}.`,
-      revalidate: fleetPaths(club.slug, plane.id),
+      refresh: true,
     };
   },
 });

@@ -215,6 +215,7 @@ export function readSeedFacts(dbFile: string): SeedFacts {
     inArrears: ["read", "Account"],
     medicalExpired: ["readDetails", "Medical"],
     notCurrent: ["read", "Currency"],
+    flightReview: ["read", "Currency"],
     notCheckedOut: ["read", "Currency"],
   };
   for (const b of all<{ id: string; userId: string; w: string }>("select id, user_id as userId, accepted_warnings as w from bookings where club_id = ? and accepted_warnings != '[]'", clubId)) {

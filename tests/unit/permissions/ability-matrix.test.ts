@@ -14,11 +14,11 @@ const MATRIX: Record<Role, string[]> = {
     "own:read:MemberDocument", "own:create:MemberDocument", "own:update:MemberDocument",
     "own:read:Medical", "own:readDetails:Medical", "own:update:Medical", "own:read:Account", "own:pay:Account",
   ],
-  instructor: ["read:CurrencyBoard", "read:Currency", "read:MemberDocument", "create:Checkout", "update:Checkout", "create:Booking", "update:Booking", "create:Flight", "update:Flight"],
+  instructor: ["read:CurrencyBoard", "read:Currency", "read:MemberDocument", "verify:Currency", "create:Checkout", "update:Checkout", "create:Booking", "update:Booking", "create:Flight", "update:Flight"],
   safety: [
     "create:Bulletin", "publish:Bulletin", "update:Bulletin", "readAcknowledgements:Bulletin", "export:Bulletin",
     "read:SafetyReport", "readDetails:SafetyReport", "triage:SafetyReport", "update:SafetyReport",
-    "create:GroundingNotice", "lift:GroundingNotice", "read:CurrencyBoard", "read:Currency", "read:MemberDocument",
+    "create:GroundingNotice", "lift:GroundingNotice", "read:CurrencyBoard", "read:Currency", "read:MemberDocument", "verify:Currency",
   ],
   treasurer: [
     "read:Ledger", "create:Ledger", "export:Ledger", "read:Account", "export:Account", "create:Payment", "refund:Payment", "read:Payment",

@@ -55,7 +55,10 @@ describe("safety form schemas", () => {
       dayLandings: expect.stringMatching(/negative/),
       nightFullStopLandings: expect.stringMatching(/whole number/),
     });
-    expect(outsideFlightSchema.safeParse({ flownOn: "2026-01-01", aircraftDescription: "Rental", dayLandings: "3", nightFullStopLandings: "" }).data).toMatchObject({ dayLandings: 3, nightFullStopLandings: 0 });
+    expect(outsideFlightSchema.safeParse({ flownOn: "2026-01-01", aircraftDescription: "Rental", category: "Airplane", classRating: "Single-engine land", dayLandings: "3", nightFullStopLandings: "" }).data).toMatchObject({ dayLandings: 3, nightFullStopLandings: 0, dayFullStopLandings: null, tailwheel: false });
+    // 14 CFR 61.57(a)(1)(i): the category and class decide what the landings count toward.
+    expect(errorsOf(outsideFlightSchema.safeParse({ flownOn: "2026-01-01", aircraftDescription: "Rental", dayLandings: "3" }))).toMatchObject({ category: expect.stringMatching(/category/), classRating: expect.stringMatching(/class/) });
+    expect(errorsOf(outsideFlightSchema.safeParse({ flownOn: "2026-01-01", aircraftDescription: "Rental", category: "Airplane", classRating: "Single-engine land", dayLandings: "2", dayFullStopLandings: "3" }))).toMatchObject({ dayFullStopLandings: expect.stringMatching(/no more than the day landings/) });
     expect(errorsOf(recordCheckoutSchema.safeParse({ userId: "", typeGroup: "", checkedOutOn: "", instructorCertificateNumber: "" }))).toMatchObject({
       userId: expect.stringMatching(/member/),
       typeGroup: expect.stringMatching(/type group/),

@@ -72,6 +72,7 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
                   <dt className="font-bold">{PRIVILEGE_WORDS[p.privilege]} through</dt><dd className="font-mono tabular">{p.lastDay}</dd>
                 </div>
               )) : <><dt className="font-bold">{medical.kind === "basicmed" ? "Valid through" : "Private pilot privileges through"}</dt><dd className="font-mono tabular">{medical.expiresOn}</dd></>}
+              <dt className="font-bold">Standing</dt><dd>{medical.verifiedAt ? "✓ Verified" : "◇ Claimed: counts once an instructor or the safety officer has seen the certificate"}</dd>
               {medical.limitations ? <><dt className="font-bold">Limitations</dt><dd>{medical.limitations}</dd></> : null}
               {birthDate ? <><dt className="font-bold">Date of birth (only you see it)</dt><dd className="font-mono tabular">{birthDate}</dd></> : null}
             </dl>
@@ -92,14 +93,14 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
         </section>
         <section className="card min-w-0 lg:col-span-2" aria-labelledby="outside-h">
           <h2 id="outside-h" className="mb-2 text-lg font-bold">Flights from elsewhere</h2>
-          <p className="mb-3 text-sm text-ink-700">Landings you made outside this club (another club, a rental) count toward your passenger currency.</p>
+          <p className="mb-3 text-sm text-ink-700">Landings you made outside this club (another club, a rental) count toward your passenger currency in the same category and class once an instructor or the safety officer has verified them against your logbook. Until then they show as claimed.</p>
           {outside.length ? (
             <div className="mb-4 overflow-x-auto">
               <table className="w-full min-w-[30rem] text-left text-sm">
-                <thead className="bg-sand-200"><tr><th scope="col" className="px-3 py-2">Date</th><th scope="col" className="px-3 py-2">Aircraft</th><th scope="col" className="px-3 py-2">Day</th><th scope="col" className="px-3 py-2">Night full stop</th></tr></thead>
+                <thead className="bg-sand-200"><tr><th scope="col" className="px-3 py-2">Date</th><th scope="col" className="px-3 py-2">Aircraft</th><th scope="col" className="px-3 py-2">Day</th><th scope="col" className="px-3 py-2">Night full stop</th><th scope="col" className="px-3 py-2">Class</th><th scope="col" className="px-3 py-2">Standing</th></tr></thead>
                 <tbody>
                   {outside.map((o) => (
-                    <tr key={o.id} className="border-t border-sand-200"><td className="whitespace-nowrap px-3 py-2 font-mono tabular">{o.flownOn}</td><td className="px-3 py-2">{o.aircraftDescription}{o.typeGroup ? ` (${o.typeGroup})` : ""}</td><td className="px-3 py-2 tabular">{o.dayLandings}</td><td className="px-3 py-2 tabular">{o.nightFullStopLandings}</td></tr>
+                    <tr key={o.id} className="border-t border-sand-200"><td className="whitespace-nowrap px-3 py-2 font-mono tabular">{o.flownOn}</td><td className="px-3 py-2">{o.aircraftDescription}{o.typeGroup ? ` (${o.typeGroup})` : ""}</td><td className="px-3 py-2 tabular">{o.dayLandings}</td><td className="px-3 py-2 tabular">{o.nightFullStopLandings}</td><td className="px-3 py-2">{o.category && o.classRating ? `${o.category}, ${o.classRating}${o.tailwheel ? ", tailwheel" : ""}` : "Not recorded (counts toward no class)"}</td><td className="px-3 py-2">{o.verifiedAt ? "✓ Verified" : "◇ Claimed"}</td></tr>
                   ))}
                 </tbody>
               </table>

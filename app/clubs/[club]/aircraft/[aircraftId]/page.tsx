@@ -72,7 +72,7 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
   return (
     <div className="max-w-5xl">
       <p className="mb-2 text-sm"><Link href={`${base}/flight-line`}>← Flight line</Link></p>
-      <PageHeader title={plane.registration} lead={`${plane.make} ${plane.model} · ${plane.category}, ${plane.classRating}${plane.homeField ? ` · ${plane.homeField}` : ""}`} actions={<StatusBadge status={entry.status} large />} />
+      <PageHeader title={plane.registration} lead={`${plane.make} ${plane.model} · ${plane.category}, ${plane.classRating}${plane.tailwheel ? ", tailwheel" : ""}${plane.homeField ? ` · ${plane.homeField}` : ""}`} actions={<StatusBadge status={entry.status} large />} />
       <SafetyCaution compact />
 
       <div className="mt-4 grid gap-4 md:grid-cols-[1fr_auto]">

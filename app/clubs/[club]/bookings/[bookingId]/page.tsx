@@ -3,6 +3,7 @@ import Link from "next/link";
 import type { ReactNode } from "react";
 import { notFound } from "next/navigation";
 import { CancelBookingForm, ChangeBookingForm, DispatchForm } from "@/components/bookings/booking-actions";
+import { limitationTexts } from "@/lib/bookings/guards";
 import { BOOKING_STATUS_MARK, BOOKING_STATUS_WORDS, dayHeading, localInputValue } from "@/components/bookings/booking-words";
 import { buttonClass } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
@@ -91,7 +92,7 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
           <Step n={3} title="Dispatch" done={booking.status !== "reserved"}>
             {booking.status === "reserved" ? (
               records.length ? (
-                <DispatchForm slug={club.slug} bookingId={booking.id} records={records.map((r) => ({ id: r.id, label: `${formatLocalTime(r.createdAt, tz)} — ${r.outcome === "ok" ? "all OK" : `${r.findingCount} finding(s)`}` }))} />
+                <DispatchForm slug={club.slug} bookingId={booking.id} limitations={status ? limitationTexts(status.reasons) : []} records={records.map((r) => ({ id: r.id, label: `${formatLocalTime(r.createdAt, tz)} — ${r.outcome === "ok" ? "all OK" : `${r.findingCount} finding(s)`}` }))} />
               ) : (
                 <p className="text-sm">Record the preflight first; dispatch confirms it.</p>
               )

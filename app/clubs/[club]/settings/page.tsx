@@ -1,0 +1,26 @@
+import type { Metadata } from "next";
+import { HomePositionForm } from "@/components/clubs/home-position-form";
+import { PageHeader } from "@/components/ui/page-header";
+import { authorizePage } from "@/lib/server/authorize";
+
+export const metadata: Metadata = { title: "Club settings" };
+
+export default async function ClubSettingsPage({ params }: { params: Promise<{ club: string }> }) {
+  const { club: slug } = await params;
+  const { club } = await authorizePage(slug, ["update", "ClubSettings"]);
+  const lat = club.settings.homeLatitude ?? null;
+  const lon = club.settings.homeLongitude ?? null;
+  return (
+    <div className="max-w-3xl">
+      <PageHeader title="Club settings" lead="Settings that the club's rules use." />
+      <section className="card" aria-labelledby="home-h">
+        <h2 id="home-h" className="mb-2 text-lg font-bold">Home field position</h2>
+        <p className="mb-3 text-sm text-ink-700">
+          Sunrise and sunset here decide when a booking touches night: from one hour after sunset to one hour before sunrise (14 CFR 61.57(b)), when
+          passengers need night currency. {lat === null || lon === null ? <strong>Not recorded: night cannot be computed, so every booking with passengers is checked as if it touched night.</strong> : `Recorded: ${lat}, ${lon}.`}
+        </p>
+        <HomePositionForm slug={club.slug} latitude={lat} longitude={lon} />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,106 @@
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { newPage, screenshot, signIn } from "./harness";
+
+// What a booking puts before the pilot: a lapsed flight review refuses it (14 CFR 61.56(c));
+// a deferred item's limitation (14 CFR 91.213(d)) is quoted at booking and ticked again at
+// dispatch. Uses the seeded N0527L (left landing light deferred: "No night flight…") and the
+// seeded pilot2, whose flight review ran out at the end of last month.
+
+const LIMITATION = "No night flight until the left landing light is repaired";
+
+function localDay(daysAhead: number, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(Date.now() + daysAhead * 86_400_000));
+}
+
+async function openBookingForm(page: Page, daysAhead: number, from: string, to: string) {
+  await page.goto("/clubs/lakeshore-aero/bookings/new", { waitUntil: "networkidle" });
+  const form = page.getByRole("form", { name: "Book an aircraft" });
+  const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
+  await form.getByLabel("Aircraft").selectOption(plane!);
+  const day = localDay(daysAhead, "America/Chicago");
+  await form.getByLabel("Start (club time)").fill(`${day}T${from}`);
+  await form.getByLabel("End (club time)").fill(`${day}T${to}`);
+  return form;
+}
+
+async function run(page: Page, name: string, body: (page: Page) => Promise<void>) {
+  try {
+    await body(page);
+  } catch (error) {
+    await screenshot(page, `rules-guards-${name}`);
+    throw error;
+  } finally {
+    await page.context().close();
+  }
+}
+
+describe("rules before the pilot, in the browser", () => {
+  it("a lapsed flight review refuses the booking, citing 14 CFR 61.56(c)", async () => {
+    await run(await newPage("desktop"), "flight-review", async (page) => {
+      await signIn(page, "pilot2@hangarline.test");
+      const form = await openBookingForm(page, 60 + Math.floor(Math.random() * 60), "10:00", "11:00");
+      await form.getByRole("button", { name: "Book", exact: true }).click();
+      // The action's own answer: refused, with the reason in plain words.
+      const answer = form.getByRole("alert").filter({ hasText: /^Not booked:/ });
+      await answer.waitFor();
+      expect(await answer.textContent()).toMatch(/Gus Henneberry may not act as pilot in command after \d{4}-\d{2}-\d{2}: the flight review runs out before the booking ends \(14 CFR 61\.56\(c\)\)/);
+      const refusals = page.getByRole("alert", { name: "Why it cannot be booked" });
+      expect(await refusals.textContent()).toMatch(/may not act as pilot in command/);
+      expect(await refusals.textContent()).not.toMatch(/not current: the flight review/);
+      // Ticking warnings cannot get past a refusal: the boxes are disabled.
+      const boxes = page.getByRole("group", { name: "Warnings to read" }).getByRole("checkbox");
+      for (const box of await boxes.all()) expect(await box.isDisabled()).toBe(true);
+      expect(page.url()).toMatch(/\/bookings\/new$/);
+    });
+  });
+
+  it("the limitation is quoted when booking and must be ticked again at dispatch", async () => {
+    await run(await newPage("desktop"), "limitation", async (page) => {
+      await signIn(page, "member@hangarline.test");
+      const form = await openBookingForm(page, 60 + Math.floor(Math.random() * 60), "12:00", "13:30");
+      await form.getByRole("button", { name: "Book", exact: true }).click();
+      await form.getByRole("alert").filter({ hasText: /^Read the warnings below/ }).waitFor();
+      const warnings = page.getByRole("group", { name: "Warnings to read" });
+      // Its own line (a "Check status" line may quote the same squawk among the aircraft's records).
+      const limitation = warnings.getByRole("listitem").filter({ hasText: /^Flies with limits:/ });
+      expect(await limitation.textContent()).toMatch(/^Flies with limits: N0527L is flyable with limits\. “Deferred, placarded inoperative \(14 CFR 91\.213\(d\)\): Left landing light inoperative\. Limitation: No night flight until the left landing light is repaired”/);
+      // Read and tick every warning shown (the member's own currency may add some), then book.
+      for (const box of await warnings.getByRole("checkbox").all()) await box.check();
+      await form.getByRole("button", { name: "Book", exact: true }).click();
+      await page.waitForURL(/\/bookings\/[\w-]{36}$/);
+      const bookingUrl = page.url();
+      // Kept with the booking.
+      await page.getByText("Warnings read when booked:").waitFor();
+      await page.getByRole("listitem").filter({ hasText: `Limitation: ${LIMITATION}` }).first().waitFor();
+
+      // Preflight, everything OK.
+      await page.goto(`${bookingUrl}/preflight`, { waitUntil: "networkidle" });
+      const pf = page.getByRole("form", { name: "Preflight record" });
+      for (const group of await pf.getByRole("radiogroup").all()) {
+        const name = (await group.getAttribute("aria-label")) ?? "";
+        if (name.startsWith("Sample from")) await group.getByLabel("Clear").check();
+        else await group.getByRole("radio").first().check();
+      }
+      await pf.getByLabel("Wing tanks (US gal)").fill("36");
+      await pf.getByLabel("Oil quantity (qt)").fill("6");
+      await pf.getByRole("button", { name: "Record the preflight" }).click();
+      await pf.getByRole("status").filter({ hasText: "Preflight recorded: everything OK." }).waitFor();
+
+      // Dispatch shows the limitation again; without the tick it is refused with its own words.
+      await page.goto(bookingUrl, { waitUntil: "networkidle" });
+      const dispatch = page.getByRole("form", { name: "Dispatch" });
+      const limits = dispatch.getByRole("group", { name: "Limitations of this aircraft" });
+      expect(await limits.getByRole("listitem").allTextContents()).toEqual([`Deferred, placarded inoperative (14 CFR 91.213(d)): Left landing light inoperative. Limitation: ${LIMITATION}`]);
+      await dispatch.getByLabel(/I did this preflight myself/).check();
+      await dispatch.getByRole("button", { name: "Dispatch" }).click();
+      const refused = dispatch.getByRole("alert").filter({ hasText: /^Not dispatched:/ });
+      await refused.waitFor();
+      expect(await refused.textContent()).toBe("Not dispatched: N0527L flies with limits. Read each limitation and tick that you will fly within it.");
+      await dispatch.getByLabel("I have read each limitation and will fly this flight within them.").check();
+      await dispatch.getByRole("button", { name: "Dispatch" }).click();
+      await page.getByRole("link", { name: "Check in" }).waitFor();
+      await page.getByText(/^Dispatched \d/).waitFor();
+    });
+  });
+});
