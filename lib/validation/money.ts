@@ -198,3 +198,8 @@ export const emailStatementSchema = z.object({ memberUserId: id("a member"), mon
 export const emptySchema = z.object({});
 
 export type BankImportInput = z.output<typeof bankImportSchema>;
+
+export const settleMeterGapSchema = z.object({
+  flightId: id("the flight"),
+  note: z.string({ error: "Say what was decided: the time charged, or the explanation accepted." }).trim().min(3, { error: "Say in a few words what was decided." }).max(1000, { error: "Keep the note under 1000 characters." }),
+});
