@@ -203,3 +203,11 @@ export const settleMeterGapSchema = z.object({
   flightId: id("the flight"),
   note: z.string({ error: "Say what was decided: the time charged, or the explanation accepted." }).trim().min(3, { error: "Say in a few words what was decided." }).max(1000, { error: "Keep the note under 1000 characters." }),
 });
+
+/** The period of the profit and loss (both days inclusive), from the page's query or the CSV link. */
+export const reportPeriodSchema = z
+  .object({ from: isoDateField("the first day"), to: isoDateField("the last day") })
+  .refine((v) => v.from <= v.to, { path: ["to"], error: "The last day must be on or after the first day." });
+
+/** The day of the balance sheet. */
+export const reportAsOfSchema = z.object({ asOf: isoDateField("the day of the balance sheet") });
