@@ -10,12 +10,12 @@ import type { Posting } from "@/lib/money/reports";
  * is folded into "Member receivables" (its parent), as the chart shows it.
  */
 export function reportPostings(db: Db, clubId: string, opts: { to?: string } = {}): Posting[] {
-  const code = sql<string>`coalesce(${ledgerAccounts.parentCode}, ${ledgerAccounts.code})`;
+  const code = sql<string>`case when ${ledgerAccounts.memberUserId} is null then ${ledgerAccounts.code} else ${ledgerAccounts.parentCode} end`;
   const rows = db
     .select({
       date: journalEntries.entryDate,
       accountCode: code,
-      accountName: sql<string>`case when ${ledgerAccounts.parentCode} is null then ${ledgerAccounts.name} else 'Member receivables' end`,
+      accountName: sql<string>`case when ${ledgerAccounts.memberUserId} is null then ${ledgerAccounts.name} else 'Member receivables' end`,
       accountType: ledgerAccounts.type,
       debitMinor: sql<number>`sum(${journalLines.debitMinor})`,
       creditMinor: sql<number>`sum(${journalLines.creditMinor})`,

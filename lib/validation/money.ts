@@ -152,11 +152,11 @@ export const manualMatchSchema = z.object({
     .pipe(z.array(z.string().regex(/^(line|payout|pay|ref):[A-Za-z0-9][A-Za-z0-9_-]{0,63}$/, { error: "Choose items from the books." }))),
 });
 
-export const BOOK_ACCOUNTS = ["bank-fees", "processor-fees", "late-fee-income", "dues-income", "flight-income", "member-credits", "retained-funds"] as const;
 
 export const bookLineSchema = z.object({
   bankLineId: id("a bank line"),
-  account: z.enum(BOOK_ACCOUNTS, { error: "Choose the account for this bank item." }),
+  // Any account of the club's chart, chosen by the treasurer: there is no default.
+  account: z.string({ error: "Choose the account for this bank item." }).trim().min(1, { error: "Choose the account for this bank item." }).max(40, { error: "Choose the account for this bank item." }),
   memo: optionalText(140),
 });
 
@@ -211,3 +211,22 @@ export const reportPeriodSchema = z
 
 /** The day of the balance sheet. */
 export const reportAsOfSchema = z.object({ asOf: isoDateField("the day of the balance sheet") });
+
+const ACCOUNT_TYPES = ["asset", "liability", "equity", "income", "expense"] as const;
+const chartFields = {
+  code: z.string({ error: "Enter the account code." }).trim().toLowerCase().min(1, { error: "Enter the account code." }).max(40, { error: "Keep the code under 40 characters." }),
+  name: text("the account name", 80),
+  type: z.enum(ACCOUNT_TYPES, { error: "Choose asset, liability, equity, income or expense." }),
+  parentCode: z
+    .string()
+    .trim()
+    .max(40, { error: "Choose a parent account from the chart, or none." })
+    .optional()
+    .transform((v) => (v ? v : null)),
+};
+
+/** A new account in the club's chart. */
+export const createChartAccountSchema = z.object(chartFields);
+/** An account of the chart changed (its code and type only while it has no postings). */
+export const updateChartAccountSchema = z.object({ accountId: id("the account"), ...chartFields });
+export const deleteChartAccountSchema = z.object({ accountId: id("the account") });
