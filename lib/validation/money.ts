@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { calendarDate, calendarMonth, recordId } from "./primitives";
+import { filesField } from "./fleet";
 import { DUES_PERIODS, MEMBER_CATEGORIES } from "@/db/schema/money";
 
 // Amounts are typed in major units ("95", "95.50") and turned into minor units of the club's
@@ -230,3 +231,21 @@ export const createChartAccountSchema = z.object(chartFields);
 /** An account of the chart changed (its code and type only while it has no postings). */
 export const updateChartAccountSchema = z.object({ accountId: id("the account"), ...chartFields });
 export const deleteChartAccountSchema = z.object({ accountId: id("the account") });
+
+export const enterBillSchema = z
+  .object({
+    vendor: text("the vendor", 120),
+    billDate: isoDateField("the bill's date"),
+    dueOn: isoDateField("the due date"),
+    accountCode: z.string({ error: "Choose the category." }).trim().min(1, { error: "Choose the category." }).max(40, { error: "Choose the category." }),
+    amount: amountField("the amount"),
+    reference: optionalText(60).transform((v) => v ?? null),
+    attachment: filesField("invoice files", 3),
+  })
+  .refine((v) => v.dueOn >= v.billDate, { path: ["dueOn"], error: "The due date cannot be before the bill's date." });
+
+export const billIdSchema = z.object({ billId: id("the bill") });
+
+export const payBillSchema = z.object({ billId: id("the bill"), paidOn: isoDateField("the day paid") });
+
+export const billApprovalAmountSchema = z.object({ amount: z.string({ error: "Enter the amount." }).trim().transform((v) => v.replace(/,/g, "")).pipe(z.string().regex(/^\d{1,9}(\.\d{1,2})?$/, { error: "Enter the amount as a number, like 500 or 500.00 (0: every bill needs a second officer)." })) });

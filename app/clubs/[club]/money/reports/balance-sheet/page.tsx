@@ -33,7 +33,7 @@ export default async function BalanceSheetPage({ params, searchParams }: { param
         lead={`What the club owns and owes at the end of ${asOf}. Equity includes the net income not yet closed into retained funds.`}
         actions={can(ability, "export", "Ledger") ? <a className="inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold" href={csvHref}>Download (CSV)</a> : null}
       />
-      <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/reports`} />
+      <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/reports/profit-and-loss`} />
       <ReportTabs slug={club.slug} current="balance-sheet" />
       <PeriodPicker
         errors={errors}

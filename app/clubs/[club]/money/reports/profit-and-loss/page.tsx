@@ -32,7 +32,7 @@ export default async function ProfitAndLossPage({ params, searchParams }: { para
         lead={`Income and expenses from ${period.from} to ${period.to}, both days included. Member charges count as income when charged, not when paid.`}
         actions={can(ability, "export", "Ledger") ? <a className="inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold" href={csvHref}>Download (CSV)</a> : null}
       />
-      <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/reports`} />
+      <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/reports/profit-and-loss`} />
       <ReportTabs slug={club.slug} current="profit-and-loss" />
       <PeriodPicker
         errors={errors}
