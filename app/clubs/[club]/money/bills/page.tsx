@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { ActionButton, ActionForm } from "@/components/money/action-form";
+import { ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
@@ -30,6 +30,8 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
   const threshold = billApprovalOverMinor(db, club.id);
   const list = listBills(db, club.id);
   const categories = canEnter ? billCategories(db, club.id) : [];
+  const toApprove = list.filter((b) => b.status === "awaiting_approval" && b.enteredById !== user.id);
+  const toPay = list.filter((b) => b.status === "approved");
   return (
     <>
       <PageHeader title="Bills" lead={`What the club owes its vendors. A bill is booked to its category when entered and paid from the bank; bills above ${formatMoney(threshold, club.currency)} need a second officer's approval first.`} />
@@ -51,20 +53,36 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
                 {b.attachments.length ? (
                   <p className="text-sm">Invoice: {b.attachments.map((f) => <a key={f.id} className="mr-2" href={`/api/clubs/${club.slug}/uploads/${f.id}`}>{f.name}</a>)}</p>
                 ) : <p className="text-sm text-ink-500">No invoice attached.</p>}
-                <div className="mt-2 flex flex-wrap gap-2">
-                  {b.status === "awaiting_approval" && canApprove && b.enteredById !== user.id ? (
-                    <ActionButton action={approveBillAction} slug={club.slug} hidden={{ billId: b.id }} label={`Approve the bill from ${b.vendor}`} variant="primary" />
-                  ) : null}
-                  {b.status === "awaiting_approval" && b.enteredById === user.id ? <p className="text-sm text-ink-700">Another officer approves this bill.</p> : null}
-                  {b.status === "approved" && canEnter ? (
-                    <ActionForm action={payBillAction} slug={club.slug} label={`Pay the bill from ${b.vendor}`} submitLabel="Pay from the bank" hidden={{ billId: b.id }} fields={[{ name: "paidOn", label: "Paid on", type: "date", defaultValue: today }]} />
-                  ) : null}
-                </div>
+                {b.status === "awaiting_approval" && b.enteredById === user.id ? <p className="text-sm text-ink-700">Another officer approves this bill.</p> : null}
               </li>
             ))}
           </ul>
         )}
       </section>
+      {/* Approving and paying sit outside the list, so each form's answer stays on the page after the list changes. */}
+      {canApprove && toApprove.length ? (
+        <section className="card mb-8 max-w-2xl" aria-labelledby="approve-h">
+          <h2 id="approve-h" className="mb-3 text-lg font-bold">Approve a bill</h2>
+          <ActionForm action={approveBillAction} slug={club.slug} label="Approve a bill" submitLabel="Approve" fields={[{ name: "billId", label: "Bill", type: "select", options: toApprove.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency)} · due ${b.dueOn}` })) }]} />
+        </section>
+      ) : null}
+      {canEnter ? (
+        <section className="card mb-8 max-w-2xl" aria-labelledby="pay-h">
+          <h2 id="pay-h" className="mb-3 text-lg font-bold">Pay a bill from the bank</h2>
+          {toPay.length === 0 ? <p className="text-sm text-ink-700">No approved bill is waiting to be paid.</p> : null}
+          <ActionForm
+            action={payBillAction}
+            slug={club.slug}
+            label="Pay a bill"
+            submitLabel="Pay from the bank"
+            grid
+            fields={[
+              { name: "billId", label: "Bill", type: "select", options: toPay.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency)} · due ${b.dueOn}` })) },
+              { name: "paidOn", label: "Paid on", type: "date", defaultValue: today },
+            ]}
+          />
+        </section>
+      ) : null}
       {canEnter ? (
         <section className="card mb-8 max-w-2xl" aria-labelledby="enter-h">
           <h2 id="enter-h" className="mb-3 text-lg font-bold">Enter a bill</h2>
