@@ -46,6 +46,7 @@ const GRANTS: Record<Role, (b: Builder, userId: string) => void> = {
     can(["create", "refund", "read"], "Payment");
     can(["read", "reconcile"], "Reconciliation");
     can(["read", "update"], "Rates");
+    can(["read", "create", "approve"], "Bill");
     can("read", "Member");
   },
   maintenance: ({ can }) => {
@@ -64,6 +65,8 @@ const GRANTS: Record<Role, (b: Builder, userId: string) => void> = {
     can("read", ["CurrencyBoard", "Currency", "MemberDocument"]);
     can(["read", "readDetails"], "Medical");
     can(["read", "export"], ["Account", "Ledger"]);
+    // A second officer for bills above the club's approval amount.
+    can(["read", "approve"], "Bill");
     can(["create", "update"], "Aircraft");
   },
   // A mechanic sees the aircraft records of this one club and nothing about its people or money.

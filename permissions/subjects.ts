@@ -4,7 +4,7 @@ export const ACTIONS = [
   "invite", "assignRoles", "deactivate",
   "triage", "close", "lift", "record",
   "publish", "acknowledge", "readAcknowledgements",
-  "readDetails", "pay", "refund", "reconcile", "export",
+  "readDetails", "pay", "refund", "reconcile", "export", "approve",
   "verify",
 ] as const;
 export type Action = (typeof ACTIONS)[number];
@@ -13,7 +13,7 @@ export const SUBJECTS = [
   "Club", "ClubSettings", "Member", "Invitation", "AuditLog", "Outbox",
   "Aircraft", "Inspection", "Squawk", "GroundingNotice", "Flight", "Upload",
   "Booking", "Bulletin", "SafetyReport", "CurrencyBoard", "Currency", "MemberDocument", "Medical", "Checkout",
-  "Ledger", "Account", "Payment", "Reconciliation", "Rates", "Tools",
+  "Ledger", "Account", "Payment", "Reconciliation", "Rates", "Tools", "Bill",
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 

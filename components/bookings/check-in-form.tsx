@@ -31,7 +31,8 @@ export function CheckInForm({ slug, bookingId, hobbs, tach, metric, rateText, ch
       </div>
       <TextAreaField label="Squawk (optional)" name="squawk" errors={e.squawk} hint="Anything wrong with the aircraft: it goes to maintenance with this flight." />
       <TextAreaField label="Notes (optional)" name="notes" errors={e.notes} rows={2} />
-      <p className="mb-3 text-sm text-ink-700">The flight is charged at {rateText} and posted to your account once.</p>
+      <TextAreaField label="Meter explanation (only when the meters do not continue)" name="meterExplanation" errors={e.meterExplanation} rows={2} hint="Needed when your Hobbs or tach out differs from the aircraft's last in reading; it is recorded on this flight for maintenance and the treasurer." />
+      <p className="mb-3 text-sm text-ink-700">The flight is charged at {rateText} and posted to your account once. Out readings that do not continue from the aircraft&apos;s last in reading need an explanation.</p>
       <SubmitButton pendingText="Checking in…">Check in</SubmitButton>
     </FormShell>
   );

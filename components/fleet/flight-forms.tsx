@@ -40,6 +40,7 @@ export function LogFlightForm({ slug, aircraft, today, metric, fixedAircraftId }
       </div>
       <TextAreaField label="Squawk found (optional)" name="squawk" rows={2} errors={e.squawk} hint="Becomes a squawk for maintenance to triage. Use the aircraft page to add photos." />
       <Field label="Notes (optional)" name="notes" errors={e.notes} />
+      <TextAreaField label="Meter explanation (only when the meters do not continue)" name="meterExplanation" rows={2} errors={e.meterExplanation} hint="Needed when Hobbs or tach out differs from where the previous flight came in; the treasurer sees it." />
       <SubmitButton pendingText="Logging…">Log flight</SubmitButton>
     </FormShell>
   );

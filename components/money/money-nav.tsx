@@ -13,6 +13,10 @@ export function MoneyNav({ slug, ability, current }: { slug: string; ability: Ap
     { href: `${base}/reconciliation`, label: "Bank reconciliation", show: can(ability, "read", "Reconciliation") },
     { href: `${base}/ageing`, label: "Ageing", show: canAll(ability, "read", "Account") },
     { href: `${base}/rates`, label: "Hourly rates", show: can(ability, "read", "Rates") },
+    { href: `${base}/bills`, label: "Bills", show: can(ability, "read", "Bill") },
+    { href: `${base}/reports/profit-and-loss`, label: "Reports", show: can(ability, "read", "Ledger") },
+    { href: `${base}/accounts`, label: "Chart of accounts", show: can(ability, "read", "Ledger") },
+    { href: `${base}/meter-gaps`, label: "Meter gaps", show: can(ability, "read", "Ledger") },
   ].filter((i) => i.show);
   return (
     <nav aria-label="Money sections" className="mb-5 overflow-x-auto">

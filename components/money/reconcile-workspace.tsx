@@ -45,7 +45,9 @@ function MatchForm({ slug, line, data, currency }: { slug: string; line: Workspa
   );
 }
 
-function BookForm({ slug, line }: { slug: string; line: WorkspaceLine }) {
+const TYPE_GROUPS = { expense: "Expenses", income: "Income", liability: "Liabilities", asset: "Assets", equity: "Equity" } as const;
+
+function BookForm({ slug, line, accounts }: { slug: string; line: WorkspaceLine; accounts: Data["bookableAccounts"] }) {
   const form = useFormAction(bookLine);
   const { state } = form;
   return (
@@ -53,15 +55,15 @@ function BookForm({ slug, line }: { slug: string; line: WorkspaceLine }) {
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bankLineId" value={line.id} />
       <label className="text-sm"><span className="field-label">Account</span>
-        <select name="account" className="field-input" defaultValue={line.amountMinor < 0 ? "bank-fees" : "retained-funds"}>
-          <option value="bank-fees">Bank fees</option>
-          <option value="processor-fees">Card processing fees</option>
-          <option value="dues-income">Dues income</option>
-          <option value="flight-income">Flight income</option>
-          <option value="late-fee-income">Late fees</option>
-          <option value="member-credits">Member prepayments</option>
-          <option value="retained-funds">Retained funds (interest, other)</option>
+        <select name="account" className="field-input" defaultValue="" aria-invalid={state.fieldErrors.account?.length ? true : undefined}>
+          <option value="" disabled>Choose an account…</option>
+          {(["expense", "income", "liability", "asset", "equity"] as const).map((type) => (
+            <optgroup key={type} label={TYPE_GROUPS[type]}>
+              {accounts.filter((a) => a.type === type).map((a) => <option key={a.code} value={a.code}>{a.name}</option>)}
+            </optgroup>
+          ))}
         </select>
+        {state.fieldErrors.account?.length ? <span className="field-error block">{state.fieldErrors.account.join(" ")}</span> : null}
       </label>
       <label className="text-sm"><span className="field-label">Memo</span><input name="memo" className="field-input" defaultValue={line.description} /></label>
       <SubmitButton variant="secondary" pendingText="Posting…">Post to the books</SubmitButton>
@@ -91,7 +93,7 @@ function LineRow({ slug, line, data, currency, locked }: { slug: string; line: W
           {!line.match && !line.ignored ? (
             <>
               <details className="w-full rounded border border-sand-300 bg-sand-50 p-2"><summary className="cursor-pointer text-sm font-bold text-fin-600">Match by hand…</summary><MatchForm slug={slug} line={line} data={data} currency={currency} /></details>
-              <details className="w-full rounded border border-sand-300 bg-sand-50 p-2"><summary className="cursor-pointer text-sm font-bold text-fin-600">Not in the books: post it…</summary><BookForm slug={slug} line={line} /></details>
+              <details className="w-full rounded border border-sand-300 bg-sand-50 p-2"><summary className="cursor-pointer text-sm font-bold text-fin-600">Not in the books: post it…</summary><BookForm slug={slug} line={line} accounts={data.bookableAccounts} /></details>
               <ActionButton action={ignoreLine} slug={slug} hidden={{ bankLineId: line.id, ignored: "true" }} label="Set aside" />
             </>
           ) : null}

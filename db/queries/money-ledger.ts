@@ -76,8 +76,8 @@ export type AccountBalanceRow = { code: string; name: string; type: AccountType;
 export function accountBalances(db: Db, clubId: string, asOf?: string): AccountBalanceRow[] {
   const rows = db
     .select({
-      code: sql<string>`coalesce(${ledgerAccounts.parentCode}, ${ledgerAccounts.code})`,
-      name: sql<string>`case when ${ledgerAccounts.parentCode} is null then ${ledgerAccounts.name} else 'Member receivables' end`,
+      code: sql<string>`case when ${ledgerAccounts.memberUserId} is null then ${ledgerAccounts.code} else ${ledgerAccounts.parentCode} end`,
+      name: sql<string>`case when ${ledgerAccounts.memberUserId} is null then ${ledgerAccounts.name} else 'Member receivables' end`,
       type: ledgerAccounts.type,
       balance: sql<number>`coalesce(sum(${journalLines.debitMinor} - ${journalLines.creditMinor}), 0)`,
     })
@@ -91,7 +91,7 @@ export function accountBalances(db: Db, clubId: string, asOf?: string): AccountB
       ),
     )
     .where(eq(ledgerAccounts.clubId, clubId))
-    .groupBy(sql`coalesce(${ledgerAccounts.parentCode}, ${ledgerAccounts.code})`)
+    .groupBy(sql`case when ${ledgerAccounts.memberUserId} is null then ${ledgerAccounts.code} else ${ledgerAccounts.parentCode} end`)
     .all();
   return rows
     .map((r) => ({ code: r.code, name: r.name, type: r.type, balanceMinor: presentBalance(Number(r.balance), r.type) }));

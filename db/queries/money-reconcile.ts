@@ -4,6 +4,7 @@ import type { Db } from "@/db/client";
 import { bankLines, bankStatements, journalEntries, journalLines, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
 import { addDays } from "@/lib/dates";
 import { lockedThrough } from "@/lib/ledger/post-entry";
+import { bookableAccounts } from "./money-chart";
 import { openPayouts, periodReport, unmatchedBookLines } from "@/lib/ledger/reconciliation";
 
 export function listBankStatements(db: Db, clubId: string) {
@@ -63,6 +64,8 @@ export function getReconciliationWorkspace(db: Db, clubId: string, statementId: 
     report: periodReport(db, clubId, statementId),
     period,
     lockedThrough: lockedThrough(db, clubId),
+    /** The chart accounts a bank item not in the books may be posted to (the treasurer chooses; no default). */
+    bookableAccounts: bookableAccounts(db, clubId),
   };
 }
 

@@ -217,6 +217,14 @@ export const flights = sqliteTable(
     continuityReviewedAt: integer("continuity_reviewed_at", { mode: "timestamp_ms" }),
     continuityReviewedById: text("continuity_reviewed_by_id").references(() => users.id),
     continuityReviewNote: text("continuity_review_note"),
+    /** The pilot's explanation of a meter mismatch, required before the flight is recorded. */
+    meterExplanation: text("meter_explanation"),
+    /** The treasurer's settlement of a meter mismatch (time charged, or accepted as explained). */
+    gapSettledAt: integer("gap_settled_at", { mode: "timestamp_ms" }),
+    gapSettledById: text("gap_settled_by_id").references(() => users.id),
+    gapSettledNote: text("gap_settled_note"),
+    /** The booking the flight was flown on; null for a flight entered in the flight log. */
+    bookingId: text("booking_id"),
     recordedById: text("recorded_by_id").references(() => users.id),
     ...timestamps(),
   },
@@ -224,6 +232,7 @@ export const flights = sqliteTable(
     index("flights_club_id").on(t.clubId),
     index("flights_continuity").on(t.clubId, t.aircraftId, t.hobbsOut),
     index("flights_flagged").on(t.clubId, t.continuity),
+    uniqueIndex("flights_booking").on(t.clubId, t.bookingId),
   ],
 );
 

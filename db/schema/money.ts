@@ -32,7 +32,7 @@ export const ledgerAccounts = sqliteTable(
 
 export const ENTRY_KINDS = [
   "opening", "dues", "late-fee", "flight", "adjustment", "card-payment", "card-refund", "manual-payment",
-  "payout-received", "bank-item", "reversal",
+  "payout-received", "bank-item", "reversal", "bill", "bill-payment",
 ] as const;
 export type EntryKind = (typeof ENTRY_KINDS)[number];
 
@@ -335,6 +335,8 @@ export const moneySettings = sqliteTable(
     lateFeeBasisPoints: integer("late_fee_basis_points").notNull().default(0),
     /** Most the club credits per gallon or litre of fuel bought away from home. */
     fuelCreditCapPerUnitMinor: integer("fuel_credit_cap_per_unit_minor").notNull().default(0),
+    /** A bill above this amount is paid only once a second officer has approved it. */
+    billApprovalOverMinor: integer("bill_approval_over_minor").notNull().default(50000),
     ...timestamps(),
   },
 );
@@ -390,3 +392,38 @@ export type ReconciliationMatchRow = typeof reconciliationMatches.$inferSelect;
 export type ReconciliationPeriodRow = typeof reconciliationPeriods.$inferSelect;
 export type MoneySettingsRow = typeof moneySettings.$inferSelect;
 export type RateProfileRow = typeof rateProfiles.$inferSelect;
+
+export const BILL_STATUSES = ["awaiting_approval", "approved", "paid"] as const;
+export type BillStatus = (typeof BILL_STATUSES)[number];
+
+/**
+ * A bill the club owes a vendor (insurance, hangar rent, a fuel invoice, maintenance). Entering
+ * it posts the expense against "Bills to pay"; paying it posts the payment from the bank (matched
+ * later in reconciliation). Above the club's approval amount a second officer approves first.
+ */
+export const bills = sqliteTable(
+  "bills",
+  {
+    id: id(),
+    clubId: clubId(),
+    vendor: text("vendor").notNull(),
+    billDate: text("bill_date").notNull(),
+    dueOn: text("due_on").notNull(),
+    /** The chart account the bill is booked to (its category). */
+    accountCode: text("account_code").notNull(),
+    amountMinor: money("amount_minor"),
+    currency: text("currency").notNull(),
+    reference: text("reference"),
+    status: text("status", { enum: BILL_STATUSES }).notNull(),
+    enteredById: text("entered_by_id").notNull().references(() => users.id),
+    approvedById: text("approved_by_id").references(() => users.id),
+    approvedAt: integer("approved_at", { mode: "timestamp_ms" }),
+    entryId: text("entry_id").notNull().references(() => journalEntries.id),
+    paidOn: text("paid_on"),
+    paidById: text("paid_by_id").references(() => users.id),
+    paymentEntryId: text("payment_entry_id").references(() => journalEntries.id),
+    ...timestamps(),
+  },
+  (t) => [index("bills_club_id").on(t.clubId, t.status, t.dueOn)],
+);
+export type BillRow = typeof bills.$inferSelect;

@@ -1,7 +1,7 @@
 import { and, eq, inArray } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { ledgerAccounts, memberships, users } from "@/db/schema";
-import { DEFAULT_CHART } from "@/lib/money";
+import { DEFAULT_CHART, FLYING_CLUB_CHART } from "@/lib/money";
 import { LedgerError } from "./errors";
 
 export type DbLike = Db | Tx;
@@ -13,10 +13,15 @@ export function memberAccountCode(userId: string): string {
   return `${RECEIVABLES}:${userId}`;
 }
 
-/** Gives the club the default chart of accounts; codes it already has are left alone. */
+/**
+ * Gives the club the accounts the application posts to (codes it already has are left alone);
+ * a club's first chart also gets the flying-club categories, which the treasurer may then
+ * rename or delete while unused without their coming back.
+ */
 export function ensureChart(tx: DbLike, clubId: string): void {
+  const first = !tx.select({ id: ledgerAccounts.id }).from(ledgerAccounts).where(eq(ledgerAccounts.clubId, clubId)).limit(1).get();
   tx.insert(ledgerAccounts)
-    .values(DEFAULT_CHART.map((a) => ({ clubId, code: a.code, name: a.name, type: a.type })))
+    .values([...DEFAULT_CHART, ...(first ? FLYING_CLUB_CHART : [])].map((a) => ({ clubId, code: a.code, name: a.name, type: a.type })))
     .onConflictDoNothing()
     .run();
 }

@@ -4,7 +4,8 @@ import { and, eq, inArray, or, sql } from "drizzle-orm";
 import { cardPayouts, clubs, paymentRefunds, payments, type PaymentRow } from "@/db/schema";
 import { accountId, memberAccountId, type DbLike } from "./accounts";
 import { LedgerError } from "./errors";
-import { postEntry } from "./post-entry";
+import { lockedPeriodNote } from "@/lib/money/open-period";
+import { openPostingDate, postEntry } from "./post-entry";
 import { queueReceipt } from "./receipts";
 import { clubToday } from "./settings";
 
@@ -81,10 +82,12 @@ export function recordCardPayment(tx: DbLike, s: CardPaymentSnapshot): CardPayme
     lines.push({ accountId: accountId(tx, s.clubId, "processor-fees"), debitMinor: s.feeMinor, memo: "Provider's processing fee" });
     lines.push({ accountId: accountId(tx, s.clubId, "card-clearing"), creditMinor: s.feeMinor });
   }
+  // A payment the provider took is never refused: in a locked period it posts on the first open day.
+  const open = openPostingDate(tx, s.clubId, receivedOn);
   const posted = postEntry(tx, s.clubId, {
-    date: receivedOn,
+    date: open.postOn,
     kind: "card-payment",
-    memo: "Card payment",
+    memo: `Card payment${lockedPeriodNote(open)}`,
     lines,
     memberUserId: s.memberUserId,
     sourceType: "payment",
@@ -132,11 +135,12 @@ export function recordCardRefund(tx: DbLike, r: CardRefundInput): "posted" | "al
   const known = tx.select({ id: paymentRefunds.id }).from(paymentRefunds).where(eq(paymentRefunds.providerRefundId, r.refundId)).get();
   if (known) return "already-posted";
   const debit = r.treatment === "absorb" ? accountId(tx, r.clubId, "refunds") : memberAccountId(tx, r.clubId, payment.memberUserId);
-  const date = clubToday(club, r.createdAt);
+  const open = openPostingDate(tx, r.clubId, clubToday(club, r.createdAt));
+  const date = open.postOn;
   const { entryId } = postEntry(tx, r.clubId, {
     date,
     kind: "card-refund",
-    memo: r.treatment === "absorb" ? "Card refund (borne by the club)" : "Card refund",
+    memo: `${r.treatment === "absorb" ? "Card refund (borne by the club)" : "Card refund"}${lockedPeriodNote(open)}`,
     lines: [
       { accountId: debit, debitMinor: r.amountMinor },
       { accountId: accountId(tx, r.clubId, "card-clearing"), creditMinor: r.amountMinor, memo: "Returned to the card" },

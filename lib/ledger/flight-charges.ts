@@ -28,6 +28,11 @@ export type FlightChargeRequest = {
   date: IsoDate;
   /** Shown on the statement, e.g. the registration "N0123X". */
   aircraftLabel?: string;
+  /**
+   * The journal date when it differs from the flight's date: the first open day when the
+   * flight's date sits in a locked period (lib/money/open-period). The memo keeps `date`.
+   */
+  postOn?: IsoDate;
 };
 
 export type FlightChargePosting = {
@@ -90,13 +95,15 @@ export function postFlightCharge(tx: DbLike, ctx: PostingContext, flight: Flight
     lines.push({ accountId: member, creditMinor: fuelCredit, memo: "Fuel credit" });
   }
   const settings = getMoneySettings(tx, ctx.club.id);
+  const postOn = flight.postOn ?? flight.date;
+  const moved = postOn !== flight.date ? `, posted ${postOn} (its day is in a locked period)` : "";
   const { entryId } = postEntry(tx, ctx.club.id, {
-    date: flight.date,
+    date: postOn,
     kind: "flight",
-    memo: `Flight ${label}${flight.date}, ${hours.toFixed(1)} h${fuelCredit > 0 ? " less fuel credit" : ""}`,
+    memo: `Flight ${label}${flight.date}, ${hours.toFixed(1)} h${fuelCredit > 0 ? " less fuel credit" : ""}${moved}`,
     lines,
     memberUserId: flight.memberUserId,
-    dueOn: result.netMinor > 0 ? dueDateFor(flight.date, settings) : null,
+    dueOn: result.netMinor > 0 ? dueDateFor(postOn, settings) : null,
     sourceType: SOURCE,
     sourceId: flight.flightId,
     sourceKey: `${SOURCE}:${flight.flightId}:${revision + 1}`,

@@ -3,6 +3,7 @@ import { clubs, journalEntries, journalLines, ledgerAccounts, reconciliationPeri
 import { newId } from "@/db/schema/columns";
 import { MAX_CALENDAR_YEAR, MIN_CALENDAR_YEAR, isIsoDateInRange, type IsoDate } from "@/lib/dates";
 import { assertBalanced, reversalOf } from "@/lib/money";
+import { firstOpenDay, type OpenPostingDate } from "@/lib/money/open-period";
 import type { DbLike } from "./accounts";
 import { LedgerError, PeriodLockedError } from "./errors";
 
@@ -34,6 +35,15 @@ export function lockedThrough(tx: DbLike, clubId: string): IsoDate | null {
     .where(and(eq(reconciliationPeriods.clubId, clubId), eq(reconciliationPeriods.locked, true)))
     .get();
   return row?.end ?? null;
+}
+
+/**
+ * The day to post money that has arrived (or left) on `date`: `date` itself, or the first open
+ * day after the locked period when `date` is inside it (lib/money/open-period). Money that
+ * moved is never refused because its day is locked; the entry's memo names the original day.
+ */
+export function openPostingDate(tx: DbLike, clubId: string, date: IsoDate): OpenPostingDate {
+  return firstOpenDay(date, lockedThrough(tx, clubId));
 }
 
 /** Throws PeriodLockedError when `date` is inside a locked period. */

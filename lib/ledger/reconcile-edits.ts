@@ -1,10 +1,10 @@
 // The treasurer's hand work in the reconciliation workspace: match (one bank line to one or
 // several book items — a split), book a bank item the books do not have yet, set a line aside,
 // undo a match, and lock the period once it agrees.
-import { and, eq, inArray } from "drizzle-orm";
-import { bankLines, bankStatements, cardPayouts, journalLines, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
+import { and, eq, inArray, isNull } from "drizzle-orm";
+import { bankLines, bankStatements, cardPayouts, journalLines, ledgerAccounts, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
 import { formatMoney } from "@/lib/money";
-import { accountId, type ChartCode, type DbLike } from "./accounts";
+import { accountId, RECEIVABLES, type DbLike } from "./accounts";
 import { LedgerError } from "./errors";
 import { assertDateOpen, postEntry, reverseEntry } from "./post-entry";
 import { getOpenBankLine, matchPayout, openPayouts, periodReport, unmatchedBookLines, type PeriodReport } from "./reconciliation";
@@ -30,14 +30,23 @@ export function matchManually(tx: DbLike, a: Actor, bankLineId: string, bookIds:
   }
 }
 
-export const BOOKABLE_ACCOUNTS = ["bank-fees", "processor-fees", "late-fee-income", "dues-income", "flight-income", "member-credits", "retained-funds"] as const satisfies readonly ChartCode[];
-export type BookableAccount = (typeof BOOKABLE_ACCOUNTS)[number];
-
-/** Posts a bank item the books lack (a bank fee, interest) against `account`, and matches it. */
-export function bookBankLine(tx: DbLike, a: Actor, bankLineId: string, account: BookableAccount, memo: string): string {
+/**
+ * Posts a bank item the books lack (a bank fee, interest, a bill paid) against the chart account
+ * the treasurer chose by its code, and matches it. Nothing is booked by default: the bank
+ * account itself and member receivables are refused (a member's money is matched to the
+ * member, never booked blind).
+ */
+export function bookBankLine(tx: DbLike, a: Actor, bankLineId: string, account: string, memo: string): string {
   const line = getOpenBankLine(tx, a.clubId, bankLineId);
   const bank = accountId(tx, a.clubId, "bank");
-  const other = accountId(tx, a.clubId, account);
+  if (account === "bank" || account === RECEIVABLES) throw new LedgerError("Choose the account the bank item belongs to: not the bank itself, nor member receivables (match a member's payment to the member instead).", "invalid", "account");
+  const chosen = tx
+    .select({ id: ledgerAccounts.id })
+    .from(ledgerAccounts)
+    .where(and(eq(ledgerAccounts.clubId, a.clubId), eq(ledgerAccounts.code, account), isNull(ledgerAccounts.memberUserId)))
+    .get();
+  if (!chosen) throw new LedgerError("That account is not in the club's chart of accounts.", "not-found", "account");
+  const other = chosen.id;
   const amount = Math.abs(line.amountMinor);
   const { entryId } = postEntry(tx, a.clubId, {
     date: line.postedOn,

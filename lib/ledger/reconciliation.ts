@@ -7,7 +7,8 @@ import { addDays, type IsoDate } from "@/lib/dates";
 import { autoMatch, reconciliationSummary, type BookItem, type ReconciliationSummary } from "@/lib/reconcile";
 import { accountId, type DbLike } from "./accounts";
 import { LedgerError } from "./errors";
-import { lockedThrough, postEntries, postEntry } from "./post-entry";
+import { firstOpenDay, lockedPeriodNote } from "@/lib/money/open-period";
+import { lockedThrough, openPostingDate, postEntries, postEntry } from "./post-entry";
 
 export type BookLineItem = { id: string; journalLineId: string; entryId: string; date: IsoDate; amountMinor: number; memo: string; reference: string | null; kind: string };
 export type PayoutItem = { id: string; cardPayoutId: string; payoutId: string; date: IsoDate; amountMinor: number; feeMinor: number; carried: number };
@@ -89,10 +90,11 @@ export function getOpenBankLine(tx: DbLike, clubId: string, bankLineId: string):
 export function matchPayout(tx: DbLike, a: Actor, line: BankLineRow, cardPayoutId: string, kind: "payout" | "manual"): void {
   const payout = tx.select().from(cardPayouts).where(and(eq(cardPayouts.clubId, a.clubId), eq(cardPayouts.id, cardPayoutId), isNull(cardPayouts.receivedEntryId))).get();
   if (!payout) throw new LedgerError("That payout is not waiting for the bank any more.", "not-found", "bookIds");
+  const open = openPostingDate(tx, a.clubId, line.postedOn);
   const { entryId } = postEntry(tx, a.clubId, {
-    date: line.postedOn,
+    date: open.postOn,
     kind: "payout-received",
-    memo: `Card payout ${payout.payoutId} reached the bank`,
+    memo: `Card payout ${payout.payoutId} reached the bank${lockedPeriodNote(open)}`,
     lines: [
       { accountId: accountId(tx, a.clubId, "bank"), debitMinor: payout.netMinor },
       { accountId: accountId(tx, a.clubId, "card-clearing"), creditMinor: payout.netMinor },
@@ -111,19 +113,23 @@ function receivePayouts(tx: DbLike, a: Actor, received: { line: BankLineRow; pay
   if (received.length === 0) return [];
   const bank = accountId(tx, a.clubId, "bank");
   const clearing = accountId(tx, a.clubId, "card-clearing");
+  const through = lockedThrough(tx, a.clubId);
   const posted = postEntries(
     tx,
     a.clubId,
-    received.map(({ line, payout }) => ({
-      date: line.postedOn,
-      kind: "payout-received" as const,
-      memo: `Card payout ${payout.payoutId} reached the bank`,
-      lines: [{ accountId: bank, debitMinor: payout.amountMinor }, { accountId: clearing, creditMinor: payout.amountMinor }],
-      sourceType: "card-payout",
-      sourceId: payout.payoutId,
-      reference: payout.payoutId,
-      createdById: a.userId,
-    })),
+    received.map(({ line, payout }) => {
+      const open = firstOpenDay(line.postedOn, through);
+      return {
+        date: open.postOn,
+        kind: "payout-received" as const,
+        memo: `Card payout ${payout.payoutId} reached the bank${lockedPeriodNote(open)}`,
+        lines: [{ accountId: bank, debitMinor: payout.amountMinor }, { accountId: clearing, creditMinor: payout.amountMinor }],
+        sourceType: "card-payout",
+        sourceId: payout.payoutId,
+        reference: payout.payoutId,
+        createdById: a.userId,
+      };
+    }),
   );
   const entryIds = posted.map((p) => p.entryId);
   const bankLineOf = new Map<string, string>();

@@ -18,7 +18,19 @@ export {
   type LedgerProblem,
   type LedgerProblemCode,
 } from "./ledger";
-export { DEFAULT_CHART, normalSideOf, presentBalance, type AccountType, type ChartAccount } from "./chart";
+export {
+  DEFAULT_CHART,
+  FLYING_CLUB_CHART,
+  SYSTEM_ACCOUNT_CODES,
+  chartChangeProblems,
+  chartDeleteProblem,
+  normalSideOf,
+  presentBalance,
+  type AccountType,
+  type ChartAccount,
+  type ChartAccountRow,
+  type ChartChange,
+} from "./chart";
 export { currencyExponent, formatMoney, minorToDecimalString, toMinorUnits } from "./format";
 export {
   engineReservePerHour,

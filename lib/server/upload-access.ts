@@ -22,6 +22,8 @@ export function canReadUpload(ability: AppAbility, upload: Pick<Upload, "subject
       return canOn(ability, "read", "Account", { userId: upload.ownerUserId ?? "" });
     case "BankStatement":
       return can(ability, "reconcile", "Reconciliation");
+    case "Bill":
+      return can(ability, "read", "Bill");
     default:
       return false;
   }

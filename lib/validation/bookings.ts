@@ -110,6 +110,7 @@ export const checkInSchema = z
     oilAdded: quantity("the oil added"),
     squawk: optionalText("the squawk", 2000),
     notes: optionalText("the notes", 1000),
+    meterExplanation: optionalText("the explanation of the meter readings", 1000),
   })
   .superRefine((v, ctx) => {
     if (v.hobbsIn < v.hobbsOut) ctx.addIssue({ code: "custom", path: ["hobbsIn"], message: "Hobbs in cannot be less than Hobbs out." });

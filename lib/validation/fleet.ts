@@ -270,6 +270,7 @@ export const logFlightSchema = z
     oilAdded: quantityField("the oil added"),
     notes: optionalText("the notes", 1000),
     squawk: optionalText("the squawk", 2000),
+    meterExplanation: optionalText("the explanation of the meter readings", 1000),
   })
   .superRefine((v, ctx) => {
     if (v.hobbsIn < v.hobbsOut) ctx.addIssue({ code: "custom", path: ["hobbsIn"], message: "Hobbs in cannot be less than Hobbs out." });

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { calendarDate, calendarMonth, recordId } from "./primitives";
+import { filesField } from "./fleet";
 import { DUES_PERIODS, MEMBER_CATEGORIES } from "@/db/schema/money";
 
 // Amounts are typed in major units ("95", "95.50") and turned into minor units of the club's
@@ -152,11 +153,11 @@ export const manualMatchSchema = z.object({
     .pipe(z.array(z.string().regex(/^(line|payout|pay|ref):[A-Za-z0-9][A-Za-z0-9_-]{0,63}$/, { error: "Choose items from the books." }))),
 });
 
-export const BOOK_ACCOUNTS = ["bank-fees", "processor-fees", "late-fee-income", "dues-income", "flight-income", "member-credits", "retained-funds"] as const;
 
 export const bookLineSchema = z.object({
   bankLineId: id("a bank line"),
-  account: z.enum(BOOK_ACCOUNTS, { error: "Choose the account for this bank item." }),
+  // Any account of the club's chart, chosen by the treasurer: there is no default.
+  account: z.string({ error: "Choose the account for this bank item." }).trim().min(1, { error: "Choose the account for this bank item." }).max(40, { error: "Choose the account for this bank item." }),
   memo: optionalText(140),
 });
 
@@ -198,3 +199,53 @@ export const emailStatementSchema = z.object({ memberUserId: id("a member"), mon
 export const emptySchema = z.object({});
 
 export type BankImportInput = z.output<typeof bankImportSchema>;
+
+export const settleMeterGapSchema = z.object({
+  flightId: id("the flight"),
+  note: z.string({ error: "Say what was decided: the time charged, or the explanation accepted." }).trim().min(3, { error: "Say in a few words what was decided." }).max(1000, { error: "Keep the note under 1000 characters." }),
+});
+
+/** The period of the profit and loss (both days inclusive), from the page's query or the CSV link. */
+export const reportPeriodSchema = z
+  .object({ from: isoDateField("the first day"), to: isoDateField("the last day") })
+  .refine((v) => v.from <= v.to, { path: ["to"], error: "The last day must be on or after the first day." });
+
+/** The day of the balance sheet. */
+export const reportAsOfSchema = z.object({ asOf: isoDateField("the day of the balance sheet") });
+
+const ACCOUNT_TYPES = ["asset", "liability", "equity", "income", "expense"] as const;
+const chartFields = {
+  code: z.string({ error: "Enter the account code." }).trim().toLowerCase().min(1, { error: "Enter the account code." }).max(40, { error: "Keep the code under 40 characters." }),
+  name: text("the account name", 80),
+  type: z.enum(ACCOUNT_TYPES, { error: "Choose asset, liability, equity, income or expense." }),
+  parentCode: z
+    .string()
+    .trim()
+    .max(40, { error: "Choose a parent account from the chart, or none." })
+    .optional()
+    .transform((v) => (v ? v : null)),
+};
+
+/** A new account in the club's chart. */
+export const createChartAccountSchema = z.object(chartFields);
+/** An account of the chart changed (its code and type only while it has no postings). */
+export const updateChartAccountSchema = z.object({ accountId: id("the account"), ...chartFields });
+export const deleteChartAccountSchema = z.object({ accountId: id("the account") });
+
+export const enterBillSchema = z
+  .object({
+    vendor: text("the vendor", 120),
+    billDate: isoDateField("the bill's date"),
+    dueOn: isoDateField("the due date"),
+    accountCode: z.string({ error: "Choose the category." }).trim().min(1, { error: "Choose the category." }).max(40, { error: "Choose the category." }),
+    amount: amountField("the amount"),
+    reference: optionalText(60).transform((v) => v ?? null),
+    attachment: filesField("invoice files", 3),
+  })
+  .refine((v) => v.dueOn >= v.billDate, { path: ["dueOn"], error: "The due date cannot be before the bill's date." });
+
+export const billIdSchema = z.object({ billId: id("the bill") });
+
+export const payBillSchema = z.object({ billId: id("the bill"), paidOn: isoDateField("the day paid") });
+
+export const billApprovalAmountSchema = z.object({ amount: z.string({ error: "Enter the amount." }).trim().transform((v) => v.replace(/,/g, "")).pipe(z.string().regex(/^\d{1,9}(\.\d{1,2})?$/, { error: "Enter the amount as a number, like 500 or 500.00 (0: every bill needs a second officer)." })) });

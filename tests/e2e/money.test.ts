@@ -70,6 +70,8 @@ describe("money in the browser", () => {
     // The bank's fee is not in the books yet: post it from the statement line.
     const fee = page.getByRole("listitem").filter({ hasText: "ACCOUNT MAINTENANCE FEE" }).first();
     await fee.getByText("Not in the books: post it…").click();
+    // No account is chosen for the treasurer: the item goes where they say.
+    await fee.getByRole("combobox", { name: /^Account/ }).selectOption({ label: "Bank fees" });
     await fee.getByRole("button", { name: "Post to the books" }).click();
     await expect(page.getByText("The two sides agree.").waitFor()).resolves.toBeUndefined();
     await page.getByRole("button", { name: "Lock this period" }).click();

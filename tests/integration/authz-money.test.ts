@@ -21,6 +21,11 @@ import PaymentsPage from "@/app/clubs/[club]/money/payments/page";
 import RatesPage from "@/app/clubs/[club]/money/rates/page";
 import ReconciliationPage from "@/app/clubs/[club]/money/reconciliation/page";
 import StatementWorkspacePage from "@/app/clubs/[club]/money/reconciliation/[statementId]/page";
+import ChartPage from "@/app/clubs/[club]/money/accounts/page";
+import BillsPage from "@/app/clubs/[club]/money/bills/page";
+import MeterGapsPage from "@/app/clubs/[club]/money/meter-gaps/page";
+import BalanceSheetPage from "@/app/clubs/[club]/money/reports/balance-sheet/page";
+import ProfitAndLossPage from "@/app/clubs/[club]/money/reports/profit-and-loss/page";
 import { bankStatements, emailOutbox, users } from "@/db/schema";
 import { emailStatement } from "@/lib/actions/money/email-statement";
 import { postAdjustment } from "@/lib/actions/money/post-adjustment";
@@ -52,6 +57,11 @@ const moneyPages = (): [string, () => Promise<unknown>][] => [
   ["rates", () => RatesPage(params(slug))],
   ["reconciliation", () => ReconciliationPage(params(slug))],
   ["reconciliation statement", () => StatementWorkspacePage(params({ club: CLUB, statementId }))],
+  ["chart of accounts", () => ChartPage(params(slug))],
+  ["bills", () => BillsPage(params(slug))],
+  ["meter gaps", () => MeterGapsPage(params(slug))],
+  ["profit and loss", () => ProfitAndLossPage({ ...params(slug), searchParams: Promise.resolve({ from: "2026-01-01", to: "2026-12-31" }) })],
+  ["balance sheet", () => BalanceSheetPage({ ...params(slug), searchParams: Promise.resolve({ asOf: "2026-12-31" }) })],
   ["another member's account", () => MemberAccountPage(params({ club: CLUB, userId: uid("pilot2@hangarline.test") }))],
   ["another member's statement", () => MemberStatementPage(params({ club: CLUB, userId: uid("pilot2@hangarline.test"), month: month() }))],
 ];

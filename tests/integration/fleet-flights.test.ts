@@ -44,13 +44,22 @@ describe("flight log and meter continuity", () => {
   it("flags a gap with the previous flight instead of accepting it silently, and maintenance sees the stored flag", async () => {
     signInAs("cottonwood.pilot@hangarline.test");
     const plane = planeByRegistration(CLUB, "N0471C");
-    const state = await logFlight(EMPTY, flightForm(plane.id, { hobbsOut: "4122.3", hobbsIn: "4123.5", tachOut: "3489.7", tachIn: "3490.7" }));
+    const readings = { hobbsOut: "4122.3", hobbsIn: "4123.5", tachOut: "3489.7", tachIn: "3490.7" };
+    // Without an explanation the mismatch is refused, naming the readings, and nothing is written.
+    const count = db().select().from(flights).all().length;
+    const refused = await logFlight(EMPTY, flightForm(plane.id, readings));
+    expect(refused.ok).toBe(false);
+    expect(refused.fieldErrors.hobbsOut?.[0]).toMatch(/0\.5 h not logged/);
+    expect(refused.fieldErrors.meterExplanation?.[0]).toMatch(/say why/);
+    expect(db().select().from(flights).all().length).toBe(count);
+    const state = await logFlight(EMPTY, flightForm(plane.id, readings, { meterExplanation: "Ground run after the mag check" }));
     expect(state.ok).toBe(true);
     expect(state.data).toMatchObject({ continuity: "gap" });
     expect(state.message).toMatch(/flagged for maintenance/);
     const flightId = (state.data as { flightId: string }).flightId;
     const row = db().select().from(flights).where(eq(flights.id, flightId)).get()!;
     expect(row.continuity).toBe("gap");
+    expect(row.meterExplanation).toBe("Ground run after the mag check");
     // 4122.3 − 4121.8 = 0.5 h of Hobbs and 3489.7 − 3489.3 = 0.4 h of tach not logged (arithmetic)
     expect(row.continuityText).toBe(
       "Hobbs out 4122.3 is 0.5 h after the previous Hobbs in 4121.8: 0.5 h not logged; Tach out 3489.7 is 0.4 h after the previous Tach in 3489.3: 0.4 h not logged",
@@ -68,11 +77,11 @@ describe("flight log and meter continuity", () => {
   it("flags an overlap (time logged twice), and a late entry is checked against the flight after it too", async () => {
     signInAs("cottonwood.pilot@hangarline.test");
     const plane = planeByRegistration(CLUB, "N0471C");
-    const overlap = await logFlight(EMPTY, flightForm(plane.id, { hobbsOut: "4123.0", hobbsIn: "4124.0", tachOut: "3490.2", tachIn: "3491.0" }));
+    const overlap = await logFlight(EMPTY, flightForm(plane.id, { hobbsOut: "4123.0", hobbsIn: "4124.0", tachOut: "3490.2", tachIn: "3491.0" }, { meterExplanation: "Previous pilot's in reading misread" }));
     expect(overlap.data).toMatchObject({ continuity: "overlap" });
     // Meters never move backwards; this one ends later, so they follow it.
     expect(planeByRegistration(CLUB, "N0471C").currentHobbs).toBe(4124.0);
-    const between = await logFlight(EMPTY, flightForm(plane.id, { hobbsOut: "4121.8", hobbsIn: "4122.0", tachOut: "3489.3", tachIn: "3489.5" }));
+    const between = await logFlight(EMPTY, flightForm(plane.id, { hobbsOut: "4121.8", hobbsIn: "4122.0", tachOut: "3489.3", tachIn: "3489.5" }, { meterExplanation: "Entered late from the paper log" }));
     expect(between.data).toMatchObject({ continuity: "gap" });
     expect(between.message).toMatch(/Next flight: Hobbs out 4122\.3 is 0\.3 h after the previous Hobbs in 4122\.0/);
     expect(planeByRegistration(CLUB, "N0471C").currentHobbs).toBe(4124.0);

@@ -4,17 +4,18 @@ import { getAircraft } from "@/db/queries/fleet";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { isLedgerError } from "@/lib/ledger/errors";
-import { postFlightCharge } from "@/lib/ledger/flight-charges";
+import { recordFlight, type RecordedFlight } from "@/db/queries/flight-record";
 import { formatMoney } from "@/lib/money";
 import { writeAudit } from "@/lib/server/audit";
 import { checkInSchema } from "@/lib/validation/bookings";
 import { loadBookingForParty } from "./booking-access";
-import { writeFlightEntry } from "./flight-entry";
+import { asFlightActionError } from "./flight-entry";
 
-// Check-in, in one transaction: the flight-log entry (meters, landings, fuel, oil, squawk), the
-// aircraft's meters moved on, the flight charge posted to the member's account, the booking
-// closed. A second submit finds the booking checked in and writes nothing: one flight, one charge.
+// Check-in, in one transaction: the flight through the one write path of a flight (recordFlight:
+// meters, landings, fuel, oil, squawk, the aircraft's meters moved on, the charge posted to the
+// member's account), then the booking closed. Meters that do not continue from the aircraft's
+// last "in" reading are flagged on this flight and must be explained before it closes. A second
+// submit finds the booking checked in and writes nothing: one flight, one charge.
 export const checkInBooking = clubAction({
   schema: checkInSchema,
   permission: ["create", "Flight"],
@@ -30,26 +31,26 @@ export const checkInBooking = clubAction({
     const plane = getAircraft(tx, club.id, booking.aircraftId);
     if (!plane) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
     const flownOn = isoDateInTimeZone(booking.dispatchedAt ?? booking.startsAt, club.timeZone);
-    const entry = writeFlightEntry(tx, club, plane, { pilotId: booking.userId, recordedById: user.id }, flownOn, input);
-
-    const [meterOut, meterIn] = plane.rateMeter === "tach" ? [input.tachOut, input.tachIn] : [input.hobbsOut, input.hobbsIn];
-    let charge;
+    let entry: RecordedFlight;
     try {
-      charge = postFlightCharge(tx, ctx, { clubId: club.id, memberUserId: booking.userId, flightId: entry.flightId, meterOut, meterIn, ratePerHourMinor: plane.hourlyRateMinor, date: flownOn, aircraftLabel: plane.registration });
+      entry = recordFlight(tx, ctx, { plane, pilotId: booking.userId, recordedById: user.id, flownOn, readings: input, bookingId: booking.id, via: "check-in" });
     } catch (error) {
-      if (isLedgerError(error)) throw new ActionError(`Not checked in: ${error.message}`, { _form: [error.message] }, "conflict");
-      throw error;
+      asFlightActionError(error, "Not checked in");
     }
+    const charge = entry.charge;
     const now = new Date();
     updateBookingRow(tx, club.id, booking.id, { status: "checked_in", checkedInAt: now, flightId: entry.flightId });
     writeAudit(tx, {
       clubId: club.id, actorId: user.id, action: "booking.checkin", subjectType: "Booking", subjectId: booking.id,
       before: { status: booking.status, hobbs: plane.currentHobbs, tach: plane.currentTach },
-      after: { status: "checked_in", flightId: entry.flightId, continuity: entry.continuity, chargeMinor: charge.netMinor, entryId: charge.entryId },
+      after: { status: "checked_in", flightId: entry.flightId, continuity: entry.continuity, meterExplanation: input.meterExplanation ?? null, chargeMinor: charge.netMinor, entryId: charge.entryId, chargedOn: entry.chargedOn },
     });
-    const flag = entry.continuity === "ok" ? "" : ` The meters do not continue from the previous flight and are flagged for maintenance: ${entry.continuityText}.`;
+    const flag = entry.continuity === "ok" ? "" : ` The meters do not continue from the previous flight: flagged on this flight with your explanation, for maintenance and the treasurer (${entry.continuityText}).`;
+    const charged = charge.entryId
+      ? `${formatMoney(charge.netMinor, club.currency)} charged to the account${entry.chargedOn !== flownOn ? ` on ${entry.chargedOn}, the first open day (${flownOn} is in a locked period)` : ""}`
+      : "no charge posted: the aircraft has no hourly rate (the treasurer sees the flight as uncharged)";
     return {
-      message: `Checked in: flight logged and ${formatMoney(charge.netMinor, club.currency)} charged to the account.${entry.squawkId ? " Your squawk is with maintenance." : ""}${flag}`,
+      message: `Checked in: flight logged and ${charged}.${entry.squawkId ? " Your squawk is with maintenance." : ""}${flag}`,
       data: { flightId: entry.flightId as string | null, chargeMinor: charge.netMinor as number | null, continuity: entry.continuity as string | null, alreadyCheckedIn: false },
       refresh: true,
     };

@@ -50,7 +50,7 @@ export function withStoredFiles<T>(files: StoredFile[], body: () => T): T {
 
 export function insertUploadRows(
   tx: Tx,
-  owner: { clubId: string; subjectType: "Squawk" | "InspectionCompletion" | "Aircraft"; subjectId: string; uploadedById: string },
+  owner: { clubId: string; subjectType: "Squawk" | "InspectionCompletion" | "Aircraft" | "Bill"; subjectId: string; uploadedById: string },
   files: StoredFile[],
 ): string[] {
   const ids: string[] = [];

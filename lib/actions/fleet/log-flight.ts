@@ -1,24 +1,28 @@
 "use server";
 import { and, eq } from "drizzle-orm";
-import { aircraft, flights, memberships, squawks } from "@/db/schema";
+import { memberships } from "@/db/schema";
 import { getAircraft } from "@/db/queries/fleet";
-import { findNeighbourFlights } from "@/db/queries/fleet-flights";
-import { recordSquawkEvent } from "@/db/queries/fleet-squawks";
+import { openDispatchedBooking, recordFlight, type RecordedFlight } from "@/db/queries/flight-record";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
-import { roundHours } from "@/lib/airworthiness";
+import { asFlightActionError } from "@/lib/actions/bookings/flight-entry";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { advanceMeters, checkBetween } from "@/lib/fleet/continuity";
+import { formatMoney } from "@/lib/money";
+import { writeAudit } from "@/lib/server/audit";
 import { logFlightSchema } from "@/lib/validation/fleet";
 import { can } from "@/permissions";
 
-// One transaction: the flight, its continuity flag, the aircraft's current meters (which the
-// flight line reads instead of the flights) and, when one was found, the squawk.
+// A flight entered without a booking goes through the same write path as check-in
+// (recordFlight in db/queries/flight-record.ts): one transaction writes the flight, its
+// continuity flag, the aircraft's meters, the squawk and the pilot's charge at the aircraft's
+// rate. A flight that belongs to a booking still out is refused here: it is checked in on the
+// booking, so it is logged and charged once.
 export const logFlight = clubAction({
   schema: logFlightSchema,
   permission: ["create", "Flight"],
   success: "Flight logged.",
-  run(tx, { club, user, ability }, input) {
+  run(tx, ctx, input) {
+    const { club, user, ability } = ctx;
     const plane = getAircraft(tx, club.id, input.aircraftId);
     if (!plane || plane.retiredAt) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
     const pilotId = input.pilotId ?? user.id;
@@ -30,64 +34,31 @@ export const logFlight = clubAction({
     if (input.flownOn > isoDateInTimeZone(new Date(), club.timeZone)) {
       throw new ActionError("Some fields need attention; nothing was saved.", { flownOn: ["The date cannot be in the future."] });
     }
-
-    const { previous, following } = findNeighbourFlights(tx, club.id, plane.id, input.hobbsOut);
-    // The aircraft's first logged flight continues from the meters on its record.
-    const before = previous ?? (plane.currentHobbs !== null && plane.currentTach !== null && !following ? { hobbsIn: plane.currentHobbs, tachIn: plane.currentTach } : null);
-    const continuity = checkBetween(before, input, following ?? null);
-    const metric = club.unitSystem === "metric";
-    const [row] = tx
-      .insert(flights)
-      .values({
-        clubId: club.id,
-        aircraftId: plane.id,
-        pilotId,
-        flownOn: input.flownOn,
-        hobbsOut: input.hobbsOut,
-        hobbsIn: input.hobbsIn,
-        tachOut: input.tachOut,
-        tachIn: input.tachIn,
-        dayLandings: input.dayLandings,
-        dayFullStopLandings: input.dayFullStopLandings,
-        nightFullStopLandings: input.nightFullStopLandings,
-        fuelAdded: input.fuelAdded,
-        oilAdded: input.oilAdded,
-        fuelUnit: metric ? "l" : "gal",
-        oilUnit: metric ? "l" : "qt",
-        notes: input.notes,
-        continuity: continuity.status,
-        continuityText: continuity.issues.length ? continuity.issues.map((i) => i.text).join("; ") : null,
-        recordedById: user.id,
-      })
-      .returning({ id: flights.id })
-      .all();
-
-    const meters = advanceMeters({ hobbs: plane.currentHobbs, tach: plane.currentTach }, input);
-    const tachAdded = roundHours(meters.tach - (plane.currentTach ?? meters.tach));
-    tx.update(aircraft)
-      .set({
-        currentHobbs: meters.hobbs,
-        currentTach: meters.tach,
-        ...(plane.engineTimeSinceOverhaul !== null && tachAdded > 0 ? { engineTimeSinceOverhaul: roundHours(plane.engineTimeSinceOverhaul + tachAdded) } : {}),
-      })
-      .where(and(eq(aircraft.clubId, club.id), eq(aircraft.id, plane.id)))
-      .run();
-
-    if (input.squawk) {
-      const [sq] = tx
-        .insert(squawks)
-        .values({ clubId: club.id, aircraftId: plane.id, flightId: row!.id, reportedById: user.id, description: input.squawk, foundDuring: "flight" })
-        .returning({ id: squawks.id })
-        .all();
-      recordSquawkEvent(tx, { clubId: club.id, squawkId: sq!.id, kind: "reported", actorId: user.id, toTriage: "untriaged", note: "Reported with the flight log." });
+    if (openDispatchedBooking(tx, club.id, plane.id, pilotId)) {
+      throw new ActionError("This aircraft is out on a booking of this pilot: check the booking in instead, so the flight is logged and charged once. Nothing was saved.", {}, "conflict");
     }
 
-    const flagged = continuity.status !== "ok";
+    let entry: RecordedFlight;
+    try {
+      entry = recordFlight(tx, ctx, { plane, pilotId, recordedById: user.id, flownOn: input.flownOn, readings: input, via: "flight log" });
+    } catch (error) {
+      asFlightActionError(error, "Not logged");
+    }
+    const charge = entry.charge;
+    writeAudit(tx, {
+      clubId: club.id, actorId: user.id, action: "flight.log", subjectType: "Flight", subjectId: entry.flightId,
+      after: { pilotId, continuity: entry.continuity, meterExplanation: input.meterExplanation ?? null, chargeMinor: charge.netMinor, entryId: charge.entryId, chargedOn: entry.chargedOn },
+    });
+
+    const flagged = entry.continuity !== "ok";
+    const charged = charge.entryId
+      ? ` ${formatMoney(charge.netMinor, club.currency)} charged to the pilot's account${entry.chargedOn !== input.flownOn ? ` on ${entry.chargedOn}, the first open day (${input.flownOn} is in a locked period)` : ""}.`
+      : " No charge posted: the aircraft has no hourly rate (the treasurer sees the flight as uncharged).";
     return {
       message: flagged
-        ? `Flight logged, and flagged for maintenance: ${continuity.issues.map((i) => i.text).join("; ")}.`
-        : "Flight logged; the meters continue from the previous flight.",
-      data: { flightId: row!.id, continuity: continuity.status },
+        ? `Flight logged, and flagged for maintenance and the treasurer: ${entry.continuityText}.${charged}`
+        : `Flight logged; the meters continue from the previous flight.${charged}`,
+      data: { flightId: entry.flightId, continuity: entry.continuity, chargeMinor: charge.netMinor, entryId: charge.entryId },
       refresh: true,
     };
   },

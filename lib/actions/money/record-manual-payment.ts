@@ -3,7 +3,8 @@ import { payments } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { kickOutbox } from "@/lib/email/runner";
 import { accountId, memberAccountId } from "@/lib/ledger/accounts";
-import { postEntry } from "@/lib/ledger/post-entry";
+import { openPostingDate, postEntry } from "@/lib/ledger/post-entry";
+import { lockedPeriodNote } from "@/lib/money/open-period";
 import { queueReceipt } from "@/lib/ledger/receipts";
 import { writeAudit } from "@/lib/server/audit";
 import { manualPaymentSchema } from "@/lib/validation/money";
@@ -18,11 +19,13 @@ export const recordManualPayment = clubAction({
   success: "Payment recorded.",
   run(tx, { club, user }, input) {
     const amountMinor = minorOf(input.amount, club.currency, "amount");
+    // Money received is never refused: dated in a locked period, it posts on the first open day.
+    const open = openPostingDate(tx, club.id, input.receivedOn);
     const { entryId } = ledger(() =>
       postEntry(tx, club.id, {
-        date: input.receivedOn,
+        date: open.postOn,
         kind: "manual-payment",
-        memo: `${WORDS[input.method]} payment${input.reference ? ` ${input.reference}` : ""}`,
+        memo: `${WORDS[input.method]} payment${input.reference ? ` ${input.reference}` : ""}${lockedPeriodNote(open)}`,
         lines: [
           { accountId: accountId(tx, club.id, "bank"), debitMinor: amountMinor },
           { accountId: memberAccountId(tx, club.id, input.memberUserId), creditMinor: amountMinor },
@@ -40,7 +43,10 @@ export const recordManualPayment = clubAction({
       .all();
     queueReceipt(tx, club.id, { memberUserId: input.memberUserId, amountMinor, method: input.method, receivedOn: input.receivedOn, reference: input.reference });
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.payment.manual", subjectType: "Payment", subjectId: row!.id, after: { ...input, amountMinor, entryId } });
-    return { refresh: true };
+    return {
+      message: open.moved ? `Payment recorded. ${input.receivedOn} is in a locked period, so it was posted on ${open.postOn}, the first open day; the entry names the day received.` : "Payment recorded.",
+      refresh: true,
+    };
   },
   after: () => kickOutbox(),
 });

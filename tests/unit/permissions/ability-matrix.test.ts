@@ -23,6 +23,7 @@ const MATRIX: Record<Role, string[]> = {
   treasurer: [
     "read:Ledger", "create:Ledger", "export:Ledger", "read:Account", "export:Account", "create:Payment", "refund:Payment", "read:Payment",
     "read:Reconciliation", "reconcile:Reconciliation", "read:Rates", "update:Rates", "read:Member",
+    "read:Bill", "create:Bill", "approve:Bill",
   ],
   maintenance: [
     "create:Aircraft", "update:Aircraft", "create:Inspection", "update:Inspection", "record:Inspection",
@@ -34,6 +35,7 @@ const MATRIX: Record<Role, string[]> = {
     "read:Invitation", "create:Invitation", "update:Invitation", "read:AuditLog", "read:Outbox", "readAcknowledgements:Bulletin",
     "read:CurrencyBoard", "read:Currency", "read:MemberDocument", "read:Medical", "readDetails:Medical",
     "read:Account", "export:Account", "read:Ledger", "export:Ledger", "create:Aircraft", "update:Aircraft",
+    "read:Bill", "approve:Bill",
   ],
   mechanic: [
     "read:Club", "read:Aircraft", "read:Inspection", "read:Squawk", "read:GroundingNotice", "read:Flight", "read:Upload",

@@ -1,0 +1,84 @@
+import Link from "next/link";
+import { Money } from "@/components/money/money-text";
+import type { ReportLine } from "@/lib/money/reports";
+
+const TYPE_WORDS: Record<ReportLine["type"], string> = { asset: "Assets", liability: "Liabilities", equity: "Equity", income: "Income", expense: "Expenses" };
+
+/** The two reports' tabs, the period picker's quick choices and the CSV link. */
+export function ReportTabs({ slug, current }: { slug: string; current: "profit-and-loss" | "balance-sheet" }) {
+  const base = `/clubs/${slug}/money/reports`;
+  return (
+    <nav aria-label="Reports" className="mb-4 flex gap-3 text-sm font-bold">
+      <Link href={`${base}/profit-and-loss`} aria-current={current === "profit-and-loss" ? "page" : undefined}>Profit and loss</Link>
+      <Link href={`${base}/balance-sheet`} aria-current={current === "balance-sheet" ? "page" : undefined}>Balance sheet</Link>
+    </nav>
+  );
+}
+
+/** A plain GET form: the period (or day) is in the address, so a report can be bookmarked and exported. */
+export function PeriodPicker({ fields, presets, errors }: {
+  fields: { name: string; label: string; value: string }[];
+  presets: { label: string; href: string }[];
+  errors: string[];
+}) {
+  return (
+    <section className="card mb-6" aria-labelledby="period-h">
+      <h2 id="period-h" className="mb-2 font-bold">Period</h2>
+      {errors.length ? <p role="alert" className="field-error mb-2">{errors.join(" ")}</p> : null}
+      <form method="get" className="flex flex-wrap items-end gap-3" aria-label="Choose the period">
+        {fields.map((f) => (
+          <div key={f.name}>
+            <label htmlFor={`p-${f.name}`} className="field-label">{f.label}</label>
+            <input id={`p-${f.name}`} type="date" name={f.name} defaultValue={f.value} className="field-input" />
+          </div>
+        ))}
+        <button type="submit" className="min-h-11 rounded bg-fin-600 px-4 font-bold text-white">Show</button>
+      </form>
+      <p className="mt-2 flex flex-wrap gap-3 text-sm">
+        {presets.map((p) => <Link key={p.label} href={p.href}>{p.label}</Link>)}
+      </p>
+    </section>
+  );
+}
+
+export function ReportTable({ caption, lines, currency, groups, totals }: {
+  caption: string;
+  lines: ReportLine[];
+  currency: string;
+  groups: ReportLine["type"][];
+  totals: { label: string; minor: number; strong?: boolean }[];
+}) {
+  return (
+    <table className="w-full max-w-2xl text-sm">
+      <caption className="mb-2 text-left text-lg font-bold">{caption}</caption>
+      {groups.map((type) => {
+        const rows = lines.filter((l) => l.type === type);
+        return (
+          <tbody key={type}>
+            <tr><th colSpan={3} scope="colgroup" className="pt-3 text-left">{TYPE_WORDS[type]}</th></tr>
+            {rows.length === 0 ? (
+              <tr><td colSpan={3} className="py-1 text-ink-500">None in this period.</td></tr>
+            ) : (
+              rows.map((l) => (
+                <tr key={l.code} className="border-t border-sand-200">
+                  <td className="py-1 font-mono text-ink-500">{l.code}</td>
+                  <td className="py-1">{l.name}</td>
+                  <td className="py-1 text-right"><Money minor={l.amountMinor} currency={currency} /></td>
+                </tr>
+              ))
+            )}
+          </tbody>
+        );
+      })}
+      <tfoot>
+        {totals.map((t) => (
+          <tr key={t.label} className={`border-t border-sand-300 ${t.strong ? "font-bold" : ""}`}>
+            <td />
+            <td className="py-1">{t.label}</td>
+            <td className="py-1 text-right"><Money minor={t.minor} currency={currency} /></td>
+          </tr>
+        ))}
+      </tfoot>
+    </table>
+  );
+}
