@@ -6,7 +6,7 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { acceptInvitation } from "@/lib/actions/invitations/accept-invitation";
 
 export function AcceptInvitationForm({ token, needsAccount }: { token: string; needsAccount: boolean }) {
-  const form = useFormAction(acceptInvitation);
+  const form = useFormAction(acceptInvitation, { fullPageLoad: true });
   const { state } = form;
   return (
     <FormShell form={form} label="Accept invitation">

@@ -6,7 +6,7 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { requestMagicLink, signInWithPassword } from "@/lib/actions/auth/sign-in";
 
 export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
-  const form = useFormAction(signInWithPassword);
+  const form = useFormAction(signInWithPassword, { fullPageLoad: true });
   const { state } = form;
   return (
     <FormShell form={form} label="Sign in with password">
