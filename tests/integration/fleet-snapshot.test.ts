@@ -30,7 +30,7 @@ function fromWholeHistory(now: Date) {
   const club = clubBySlug(CLUB);
   const records = loadFleetRecords(db(), club.id);
   const completions = db().$client
-    .prepare("SELECT item_id AS itemId, done_on AS doneOn, hours, expires_on AS expiresOn FROM inspection_completions WHERE club_id = ? ORDER BY rowid")
+    .prepare("SELECT id, item_id AS itemId, done_on AS doneOn, hours, expires_on AS expiresOn, meter FROM inspection_completions WHERE club_id = ? ORDER BY rowid")
     .all(club.id) as FleetCompletionRecord[];
   const today = isoDateInTimeZone(now, club.timeZone);
   return buildFlightLine({ ...records, completions }, today, now.toISOString(), { days: club.settings.dueSoonDays, hours: club.settings.dueSoonHours });

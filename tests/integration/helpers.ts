@@ -77,7 +77,7 @@ export async function expectRedirect(run: () => Promise<unknown>): Promise<strin
 export async function squawkIdOf(run: () => Promise<{ ok: boolean; message: string; data?: unknown; refresh?: boolean }>): Promise<string> {
   const state = await run();
   if (!state.ok) throw new Error(`Expected the squawk to be reported, got: ${state.message}`);
-  if (!/^Squawk reported: “.+”\.$/.test(state.message)) throw new Error(`The answer does not quote the squawk: ${state.message}`);
+  if (!/^Squawk reported: “.+”\.( [^“”]+\.)?$/.test(state.message)) throw new Error(`The answer does not quote the squawk: ${state.message}`);
   const id = (state.data as { squawkId?: unknown } | undefined)?.squawkId;
   if (typeof id !== "string") throw new Error("The answer carries no squawk id");
   return id;

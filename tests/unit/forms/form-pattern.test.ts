@@ -25,19 +25,37 @@ function code(source: string): string {
 
 const files = [...sourceFiles("components"), ...sourceFiles("app")].map((file) => ({ file, source: code(fs.readFileSync(path.join(ROOT, file), "utf8")) }));
 
-/** The source with every `useFormAction(…)` call, and every action handed to a shared form component, taken out. */
-function withoutHookCalls(source: string): string {
-  let out = source.replace(/<(ActionForm|ActionButton)\b[^>]*?\baction=\{\w+\}/g, (m) => m.replace(/\baction=\{\w+\}/, ""));
-  for (let at = out.indexOf("useFormAction("); at !== -1; at = out.indexOf("useFormAction(")) {
+/**
+ * Files that call a server action outside a form, each for a reason of its own:
+ * - the ramp queue sends a write kept on the device through the same action, under the key the
+ *   form made (components/ramp/queue-store.ts), once there is signal;
+ * - sign-out forgets the pages kept for the ramp, then calls the action, all inside useFormAction.
+ */
+const OUTSIDE_A_FORM = new Set([path.join("components", "ramp", "queue-store.ts"), path.join("components", "shell", "sign-out-button.tsx")]);
+
+/** Cuts every call `name(…)` out of a source, replaced by "hooked". */
+function cutCalls(source: string, name: string): string {
+  let out = source;
+  for (let at = out.indexOf(`${name}(`); at !== -1; at = out.indexOf(`${name}(`)) {
     let depth = 0;
-    let j = at + "useFormAction".length;
+    let j = at + name.length;
     for (; j < out.length; j++) {
       if (out[j] === "(") depth++;
       else if (out[j] === ")" && --depth === 0) break;
     }
     out = out.slice(0, at) + "hooked" + out.slice(j + 1);
   }
-  return out.replace(/^import[^;]*;$/gm, "");
+  return out;
+}
+
+/**
+ * The source with every `useFormAction(…)` call, every action handed to a shared form component,
+ * and every ramp wrapper (`rampAction(kind, action, schema)`, whose result goes to useFormAction:
+ * checked below) taken out.
+ */
+function withoutHookCalls(source: string): string {
+  const out = source.replace(/<(ActionForm|ActionButton)\b[^>]*?\baction=\{\w+\}/g, (m) => m.replace(/\baction=\{\w+\}/, ""));
+  return cutCalls(cutCalls(out, "useFormAction"), "rampAction").replace(/^import[^;]*;$/gm, "");
 }
 
 /** Every opening tag of an element in a source: `<name …>` (to the first `>` not inside braces). */
@@ -80,8 +98,12 @@ describe("every form that writes uses the shared hook", () => {
       expect(handle, `${file}: ${tag.slice(0, 80)} needs form={…}`).toBeTruthy();
       expect(source, `${file}: ${handle} must come from useFormAction(…)`).toMatch(new RegExp(`\\b${handle}\\s*=\\s*useFormAction\\(`));
     }
+    // A ramp-wrapped action is used only through the hook.
+    for (const m of source.matchAll(/\bconst\s+(\w+)\s*=\s*rampAction\(/g)) {
+      expect(source, `${file}: ${m[1]} (a ramp-wrapped action) must go to useFormAction(${m[1]})`).toMatch(new RegExp(`useFormAction\\(${m[1]}\\b`));
+    }
     // A client file that imports a server action calls it only through the hook.
-    if (file !== HOOK && /^["']use client["']/.test(source)) {
+    if (file !== HOOK && !OUTSIDE_A_FORM.has(file) && /^["']use client["']/.test(source)) {
       const imported = [...source.matchAll(/import\s*\{([^}]*)\}\s*from\s*"@\/lib\/actions\/(?!action-state)[^"]+"/g)].flatMap((m) => m[1]!.split(",").map((n) => n.trim().replace(/^type\s+/, "")).filter((n) => n && !/^[A-Z]/.test(n)));
       const rest = withoutHookCalls(source);
       for (const name of imported) {
