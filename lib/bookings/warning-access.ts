@@ -1,10 +1,12 @@
 import { canAll, type AppAbility, type SubjectName } from "@/permissions";
 
 // The warnings a member read and accepted when booking name their own standing ("no medical
-// certificate on record", "in arrears: $N owed"). They are shown to the booking's member, the
-// instructor on that booking, and otherwise only warning by warning to roles that read that
-// kind of data for every member (the safety officer and admins for currency and medical, the
-// treasurer and admins for arrears). Everyone else gets the booking without them.
+// certificate on record", "in arrears: $N owed"). They are shown to the booking's member; to the
+// instructor on that booking only the ones about flying (currency, medical, the aircraft's
+// limitations: they fly it with the member), never the member's money; and otherwise only warning
+// by warning to roles that read that kind of data for every member (the safety officer and admins
+// for currency and medical, the treasurer and admins for arrears). Everyone else gets the booking
+// without them.
 
 type Warning = { guard: string; reason: string };
 
@@ -18,6 +20,7 @@ export function visibleBookingWarnings<W extends Warning>(
   viewerId: string,
   booking: { userId: string; instructorId: string | null; acceptedWarnings: readonly W[] },
 ): W[] {
-  if (booking.userId === viewerId || (booking.instructorId !== null && booking.instructorId === viewerId)) return [...booking.acceptedWarnings];
-  return booking.acceptedWarnings.filter((w) => canAll(ability, "read", warningSubject(w.guard)));
+  if (booking.userId === viewerId) return [...booking.acceptedWarnings];
+  const instructorOnIt = booking.instructorId !== null && booking.instructorId === viewerId;
+  return booking.acceptedWarnings.filter((w) => (instructorOnIt && warningSubject(w.guard) !== "Account") || canAll(ability, "read", warningSubject(w.guard)));
 }

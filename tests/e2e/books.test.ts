@@ -29,12 +29,13 @@ describe("the treasurer's books", () => {
     await enter.getByLabel("Category").selectOption({ label: "Hangar and tie-down" });
     await enter.getByLabel(/^Amount/).fill(amount);
     await enter.getByRole("button", { name: "Enter bill" }).click();
-    await expect(enter.getByRole("status").textContent()).resolves.toContain(`Bill from ${vendor} for $${amount} entered and ready to pay.`);
+    // The form's own answer (the status region is there, empty, before it).
+    await enter.getByRole("status").filter({ hasText: `Bill from ${vendor} for $${amount} entered and ready to pay.` }).waitFor();
 
     const pay = page.getByRole("form", { name: "Pay a bill" });
     await pay.getByLabel("Bill").selectOption({ label: `${vendor} · $${amount} · due ${today}` });
     await pay.getByRole("button", { name: "Pay from the bank" }).click();
-    await expect(pay.getByRole("status").textContent()).resolves.toContain(`Paid: $${amount} to ${vendor} from the bank on ${today}.`);
+    await pay.getByRole("status").filter({ hasText: `Paid: $${amount} to ${vendor} from the bank on ${today}.` }).waitFor();
 
     // The bank's statement shows the payment going out; importing it matches the line to the payment.
     await page.goto("/clubs/lakeshore-aero/money/reconciliation");

@@ -112,6 +112,9 @@ describe("rules before the pilot, in the browser", () => {
       await refused.waitFor();
       expect(await refused.textContent()).toBe("Not dispatched: N0527L flies with limits. Read each limitation and tick that you will fly within it.");
       await dispatch.getByLabel("I have read each limitation and will fly this flight within them.").check();
+      // Other browser tests share this server and may have left a squawk awaiting triage on this aircraft:
+      // the pilot then also confirms having dealt with what the records show (harmless when nothing is listed).
+      await dispatch.getByLabel("I have dealt with every finding listed for this aircraft.").check();
       await dispatch.getByRole("button", { name: "Dispatch" }).click();
       await page.getByRole("link", { name: "Check in" }).waitFor();
       await page.getByText(/^Dispatched \d/).waitFor();

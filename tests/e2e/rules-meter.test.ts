@@ -73,9 +73,9 @@ describe("meter provenance, squawk alerts and medical dates in the browser", { r
     await form.getByLabel("Found during").selectOption("preflight");
     await form.getByLabel("I think this may make the aircraft unsafe to fly").check();
     await form.getByRole("button", { name: "Report squawk" }).click();
-    await page.waitForURL(/\?reported=/, ANSWER);
-    const status = page.getByRole("status").filter({ hasText: `Squawk reported: “${description}”` });
-    await status.waitFor();
+    // The form's own answer, in place.
+    const status = form.getByRole("status").filter({ hasText: `Squawk reported: “${description}”` });
+    await status.waitFor(ANSWER);
     expect(await status.textContent()).toMatch(/Maintenance \(2 people\)( and (1 member holding a booking|\d+ members holding bookings) on it)? were e-mailed\./);
     expect(await status.textContent()).not.toMatch(/has been told/);
   });
