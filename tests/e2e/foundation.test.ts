@@ -68,7 +68,8 @@ describe("signing in and the navigation each role sees", () => {
     const page = await newPage("phone");
     await signIn(page, "member@hangarline.test");
     await page.waitForURL(/\/clubs\/lakeshore-aero$/);
-    await page.waitForLoadState("load");
+    // The page streams in behind its loading outline; React reveals it a moment after the load event.
+    await page.getByRole("heading", { level: 1 }).waitFor();
     await expectNoHorizontalOverflow(page);
     const file = await screenshot(page, "home-phone");
     expect(fs.statSync(file).size).toBeGreaterThan(10_000);
