@@ -17,7 +17,7 @@ const NO_UTC_CALENDAR_DATE = {
 };
 
 export default tseslint.config(
-  { ignores: ["node_modules/", ".next/", ".next-*/", "data/", "uploads/", "db/migrations/", "next-env.d.ts", "tests/.artifacts/"] },
+  { ignores: ["node_modules/", ".next/", ".next-*/", "data/", "uploads/", "db/migrations/", "next-env.d.ts", "tests/.artifacts/", "public/sw.js", "public/sw.js.map", "public/swe-worker-*"] },
   ...tseslint.configs.recommended,
   {
     rules: {
