@@ -1,5 +1,6 @@
 "use client";
 import { useQuery } from "@tanstack/react-query";
+import { useRef } from "react";
 import type { FlightLineEntry } from "@/lib/fleet/types";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
 import { StatusShape } from "@/components/ui/status-badge";
@@ -15,12 +16,20 @@ function clock(iso: string, timeZone: string): string {
 
 /** The flight line, kept live from the JSON route; the server-rendered data shows first. */
 export function FlightLineBoard({ slug, initial }: { slug: string; initial: FlightLineData }) {
+  // The tag of the flight line on screen: while it is still current the server answers 304 with
+  // no body, and the records shown are confirmed as of that answer.
+  const held = useRef<{ etag: string; data: FlightLineData } | null>(null);
   const { data, isError, isFetching } = useQuery({
     queryKey: ["flight-line", slug],
     queryFn: async (): Promise<FlightLineData> => {
-      const res = await fetch(`/api/clubs/${slug}/flight-line`, { cache: "no-store" });
+      const kept = held.current;
+      const res = await fetch(`/api/clubs/${slug}/flight-line`, { cache: "no-store", headers: kept ? { "If-None-Match": kept.etag } : {} });
+      if (res.status === 304 && kept) return { ...kept.data, generatedAt: new Date().toISOString() };
       if (!res.ok) throw new Error(`Flight line ${res.status}`);
-      return (await res.json()) as FlightLineData;
+      const fresh = (await res.json()) as FlightLineData;
+      const etag = res.headers.get("etag");
+      held.current = etag ? { etag, data: fresh } : null;
+      return fresh;
     },
     initialData: initial,
     refetchInterval: REFRESH_MS,

@@ -1,4 +1,5 @@
 import "server-only";
+import { randomBytes } from "node:crypto";
 import { and, eq, isNotNull, isNull, sql } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { aircraft, groundingNotices, inspectionItems, meterConversions, squawks, type Club } from "@/db/schema";
@@ -228,7 +229,12 @@ export function loadAircraftRecords(db: Db, clubId: string, aircraftId: string, 
   return kept ? recordsOfAircraft(kept.value, aircraftId) : loadFleetRecords(db, clubId, aircraftId);
 }
 
-type FlightLineSnapshot = { today: string; timeZone: string; entries: FlightLineEntry[]; json?: { head: string; tail: string } };
+type FlightLineSnapshot = { today: string; timeZone: string; entries: FlightLineEntry[]; json?: { head: string; tail: string }; etag?: string };
+
+// Entity tags name one snapshot of this process: a random prefix per process start (a restarted
+// or second process never reuses a tag for other content) and a counter per snapshot built.
+const ETAG_PREFIX = randomBytes(6).toString("base64url");
+let etagCounter = 0;
 
 /**
  * A computed flight line holds while the records do not change (the club data version), on
@@ -271,6 +277,18 @@ export function getFlightLineJson(db: Db, club: Club, now: Date = new Date()): s
     tail: `,"timeZone":${JSON.stringify(snap.timeZone)},"entries":${JSON.stringify(snap.entries)}}`,
   };
   return `${snap.json.head}${JSON.stringify(now.toISOString())}${snap.json.tail}`;
+}
+
+/**
+ * The entity tag of the flight line a poll would receive now: the same tag while the same snapshot
+ * serves it (records, club date and notices' effect unchanged). Everything but `generatedAt`,
+ * the instant of the answer, is the same under one tag, so a poller holding it is answered
+ * 304 Not Modified without a body.
+ */
+export function getFlightLineEtag(db: Db, club: Club, now: Date = new Date()): string {
+  const snap = flightLineSnapshot(db, club, now);
+  snap.etag ??= `"fl-${ETAG_PREFIX}-${++etagCounter}"`;
+  return snap.etag;
 }
 
 /** One aircraft's entry, or undefined when it is not this club's (404). */

@@ -11,7 +11,8 @@
 // Options (environment): BENCH_SECONDS (default 10 per run), BENCH_ROOT (the app folder to build
 // and start, default this repository: a checkout of an older commit can be measured the same
 // way), BENCH_CPU_PROF=<dir> (next start runs under `node --cpu-prof`; the top self-time
-// functions are printed at the end), BENCH_ONLY=<substring> (only the targets whose name has it).
+// functions are printed at the end), BENCH_ONLY=<substring> (only the targets whose name has it),
+// BENCH_DUMP=<dir> (each target's answer is written there, to read what a request carries).
 // Not part of `npm test`; a benchmark reports and never fails on a figure.
 
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
@@ -39,6 +40,7 @@ const root = path.resolve(process.env.BENCH_ROOT ?? repo);
 const distDir = process.env.NEXT_DIST_DIR ?? ".next-bench";
 const seconds = Number(process.env.BENCH_SECONDS ?? 10);
 const only = process.env.BENCH_ONLY;
+const dumpDir = process.env.BENCH_DUMP ? path.resolve(process.env.BENCH_DUMP) : null;
 const cpuProfDir = process.env.BENCH_CPU_PROF ? path.resolve(process.env.BENCH_CPU_PROF) : null;
 const DEMO_CLUB = "lakeshore-aero";
 const DEMO_MEMBER = "member@hangarline.test";
@@ -216,6 +218,7 @@ async function main() {
   const base = `http://127.0.0.1:${appPort}`;
   const nodeArgs = cpuProfDir ? ["--cpu-prof", `--cpu-prof-dir=${cpuProfDir}`] : [];
   if (cpuProfDir) fs.mkdirSync(cpuProfDir, { recursive: true });
+  if (dumpDir) fs.mkdirSync(dumpDir, { recursive: true });
   const children: ChildProcess[] = [];
   const app = spawn(process.execPath, [...nodeArgs, path.join(root, "node_modules/next/dist/bin/next"), "start", "-p", String(appPort), "-H", "127.0.0.1"], {
     cwd: root,
@@ -264,8 +267,11 @@ async function main() {
     await waitFor(`http://127.0.0.1:${barePort}/`);
     console.log(`flight-line JSON for ${BENCH_CLUB}: ${(bytes.length / 1024).toFixed(0)} KB; ${seconds} s per run; ${os.cpus().length} CPUs, load average ${os.loadavg().map((l) => l.toFixed(1)).join(" ")}`);
 
-    const targets: { name: string; url: string; cookie: string | null; html?: boolean }[] = [
+    const targets: { name: string; url: string; cookie: string | null; html?: boolean; floor?: boolean }[] = [
       { name: `bare node:http + better-sqlite3 (same bytes)`, url: `http://127.0.0.1:${barePort}/`, cookie: null },
+      // The framework's own floor on this machine: a small page with no data (the sign-in form).
+      { name: `sign-in page (no data: the framework's floor)`, url: `${base}/sign-in`, cookie: null, html: true, floor: true },
+      { name: `health route (no data: the framework's floor)`, url: `${base}/api/health`, cookie: null, floor: true },
       { name: `flight-line JSON, ${BENCH_CLUB}`, url: `${base}/api/clubs/${BENCH_CLUB}/flight-line`, cookie: benchCookie },
       { name: `flight-line JSON, ${DEMO_CLUB}`, url: `${base}/api/clubs/${DEMO_CLUB}/flight-line`, cookie: demoCookie },
       { name: `flight-line page, ${DEMO_CLUB}`, url: `${base}/clubs/${DEMO_CLUB}/flight-line`, cookie: demoCookie, html: true },
@@ -276,18 +282,21 @@ async function main() {
     const rows: Row[] = [];
     const bareRps: Record<number, number> = {};
     for (const t of targets) {
-      if (only && t.cookie && !t.name.includes(only)) continue;
+      const bare = !t.cookie && !t.floor;
+      if (only && !bare && !t.name.includes(only)) continue;
       // Check the answer is the real page (not a redirect to sign-in), then warm up.
       const check = await fetchRetry(t.url, { headers: t.cookie ? { cookie: t.cookie } : {}, redirect: "manual" });
-      await check.arrayBuffer();
+      const body = Buffer.from(await check.arrayBuffer());
       if (check.status !== 200) throw new Error(`${t.name} answered ${check.status}`);
+      console.log(`  ${t.name}: ${(body.length / 1024).toFixed(1)} KB per answer`);
+      if (dumpDir) fs.writeFileSync(path.join(dumpDir, `${t.name.replace(/[^a-z0-9]+/gi, "-")}.${t.html ? "html" : "json"}`), body);
       const headers: Record<string, string> = t.cookie ? { cookie: t.cookie } : {};
       if (t.html) headers.accept = "text/html";
       await load(t.url, 10, headers, 2);
       for (const connections of [10, 50]) {
         const r = await load(t.url, connections, headers, seconds);
         const row: Row = { name: t.name, connections, rps: r.requests.average, p50: r.latency.p50, p975: r.latency.p97_5, p99: r.latency.p99, errors: r.errors + r.timeouts + r.non2xx };
-        if (!t.cookie) bareRps[connections] = row.rps;
+        if (bare) bareRps[connections] = row.rps;
         else if (bareRps[connections]) row.ratio = bareRps[connections]! / Math.max(row.rps, 0.001);
         rows.push(row);
         console.log(`  ${row.name.padEnd(48)} c=${String(connections).padStart(2)}  ${row.rps.toFixed(0).padStart(6)} req/s  p50 ${String(row.p50).padStart(5)} ms  p97.5 ${String(row.p975).padStart(5)} ms  p99 ${String(row.p99).padStart(5)} ms  errors ${row.errors}${row.ratio ? `  bare/app ${row.ratio.toFixed(1)}×` : ""}`);

@@ -51,6 +51,12 @@ async function expectSnapshotFresh(what: string) {
   expect((res.body as { entries: unknown }).entries, `${what}: route`).toEqual(JSON.parse(JSON.stringify(computeFlightLine(db(), club).entries)));
 }
 
+/** The route's answer to a poll holding `etag` (none: a first poll). */
+async function poll(etag: string | null): Promise<{ status: number; etag: string | null; body: string }> {
+  const res = await flightLineRoute(new Request(`http://app.test/api/clubs/${CLUB}/flight-line`, { headers: etag ? { "If-None-Match": etag } : {} }), { params: Promise.resolve({ club: CLUB }) });
+  return { status: res.status, etag: res.headers.get("etag"), body: await res.text() };
+}
+
 function version() {
   return clubDataVersion(db(), clubBySlug(CLUB).id);
 }
@@ -59,6 +65,11 @@ function version() {
 async function afterWrite(what: string, write: () => unknown) {
   await expectSnapshotFresh(`before ${what}`);
   const before = version();
+  const held = await poll(null);
+  expect(held.status).toBe(200);
+  expect(held.etag, `${what}: the answer carries a tag`).toMatch(/^"fl-/);
+  const unchanged = await poll(held.etag);
+  expect([unchanged.status, unchanged.body, unchanged.etag], `${what}: nothing changed → 304, no body`).toEqual([304, "", held.etag]);
   let result: unknown;
   try {
     result = await write();
@@ -69,6 +80,12 @@ async function afterWrite(what: string, write: () => unknown) {
   if (result && typeof result === "object" && "ok" in result) expect(result, `${what}: ${JSON.stringify(result)}`).toMatchObject({ ok: true });
   expect(version(), `${what} bumps the club data version`).toBeGreaterThan(before);
   await expectSnapshotFresh(`after ${what}`);
+  // The tag held from before the write is not honoured: the poller gets the new flight line whole.
+  const after = await poll(held.etag);
+  expect(after.status, `${what}: a poll with the old tag gets the new flight line`).toBe(200);
+  expect(after.etag).not.toBe(held.etag);
+  expect(JSON.parse(after.body).entries).toEqual(JSON.parse(JSON.stringify(computeFlightLine(db(), clubBySlug(CLUB)).entries)));
+  expect((await poll(after.etag)).status, `${what}: the new tag is honoured`).toBe(304);
 }
 
 describe("flight-line snapshot", () => {
