@@ -5,7 +5,9 @@
 // aircraft, 150,000 flights, 6,000 squawks, 6,490 completions), starts `next start` on it and a
 // bare node:http + better-sqlite3 server that answers with the same flight-line JSON bytes, read
 // from SQLite on every request, and drives both with autocannon at 10 and 50 connections.
-// Prints requests/s, p50 / p97.5 / p99 latency, errors and the ratio to the bare server, then
+// Also measured: the framework's floor (a page and a route handler that read no data) and the
+// flight-line poll while nothing changed (304; there a 200 counts as an error: the tag was not
+// honoured). Prints requests/s, p50 / p97.5 / p99 latency, errors and the ratio to the bare server, then
 // next start's resident memory. Numbers on a shared machine are noisy: read the ratios.
 //
 // Options (environment): BENCH_SECONDS (default 10 per run), BENCH_ROOT (the app folder to build
@@ -267,12 +269,14 @@ async function main() {
     await waitFor(`http://127.0.0.1:${barePort}/`);
     console.log(`flight-line JSON for ${BENCH_CLUB}: ${(bytes.length / 1024).toFixed(0)} KB; ${seconds} s per run; ${os.cpus().length} CPUs, load average ${os.loadavg().map((l) => l.toFixed(1)).join(" ")}`);
 
-    const targets: { name: string; url: string; cookie: string | null; html?: boolean; floor?: boolean }[] = [
+    const targets: { name: string; url: string; cookie: string | null; html?: boolean; floor?: boolean; conditional?: boolean }[] = [
       { name: `bare node:http + better-sqlite3 (same bytes)`, url: `http://127.0.0.1:${barePort}/`, cookie: null },
       // The framework's own floor on this machine: a small page with no data (the sign-in form).
       { name: `sign-in page (no data: the framework's floor)`, url: `${base}/sign-in`, cookie: null, html: true, floor: true },
       { name: `health route (no data: the framework's floor)`, url: `${base}/api/health`, cookie: null, floor: true },
       { name: `flight-line JSON, ${BENCH_CLUB}`, url: `${base}/api/clubs/${BENCH_CLUB}/flight-line`, cookie: benchCookie },
+      // What the flight-line page's poll costs while nothing changed: it names the tag it holds.
+      { name: `flight-line poll, unchanged (304), ${BENCH_CLUB}`, url: `${base}/api/clubs/${BENCH_CLUB}/flight-line`, cookie: benchCookie, conditional: true },
       { name: `flight-line JSON, ${DEMO_CLUB}`, url: `${base}/api/clubs/${DEMO_CLUB}/flight-line`, cookie: demoCookie },
       { name: `flight-line page, ${DEMO_CLUB}`, url: `${base}/clubs/${DEMO_CLUB}/flight-line`, cookie: demoCookie, html: true },
       { name: `club home, ${DEMO_CLUB}`, url: `${base}/clubs/${DEMO_CLUB}`, cookie: demoCookie, html: true },
@@ -292,10 +296,11 @@ async function main() {
       if (dumpDir) fs.writeFileSync(path.join(dumpDir, `${t.name.replace(/[^a-z0-9]+/gi, "-")}.${t.html ? "html" : "json"}`), body);
       const headers: Record<string, string> = t.cookie ? { cookie: t.cookie } : {};
       if (t.html) headers.accept = "text/html";
+      if (t.conditional) headers["if-none-match"] = check.headers.get("etag") ?? "";
       await load(t.url, 10, headers, 2);
       for (const connections of [10, 50]) {
         const r = await load(t.url, connections, headers, seconds);
-        const row: Row = { name: t.name, connections, rps: r.requests.average, p50: r.latency.p50, p975: r.latency.p97_5, p99: r.latency.p99, errors: r.errors + r.timeouts + r.non2xx };
+        const row: Row = { name: t.name, connections, rps: r.requests.average, p50: r.latency.p50, p975: r.latency.p97_5, p99: r.latency.p99, errors: r.errors + r.timeouts + (t.conditional ? r["2xx"] : r.non2xx) };
         if (bare) bareRps[connections] = row.rps;
         else if (bareRps[connections]) row.ratio = bareRps[connections]! / Math.max(row.rps, 0.001);
         rows.push(row);
