@@ -32,7 +32,9 @@ const nextConfig = {
   eslint: { ignoreDuringBuilds: true },
   typescript: { ignoreBuildErrors: true },
   // No allowedOrigins: server actions keep the framework's own same-origin check (Origin vs Host).
-  experimental: { serverActions: { bodySizeLimit: "12mb" } },
+  // NEXT_SERVER_MINIFY=0 keeps server function names readable in CPU profiles (npm run bench:http with
+  // BENCH_CPU_PROF); production builds are minified.
+  experimental: { serverActions: { bodySizeLimit: "12mb" }, serverMinification: process.env.NEXT_SERVER_MINIFY !== "0" },
   async headers() {
     return [
       { source: "/:path*", headers: SECURITY_HEADERS },
