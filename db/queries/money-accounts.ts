@@ -4,7 +4,7 @@ import type { Db } from "@/db/client";
 import { duesPlans, memberDues, memberships, payments, statements, users } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
 import { memberMovements, memberPositions } from "@/lib/ledger/balances";
-import { monthOf } from "@/lib/ledger/months";
+import { monthOf } from "@/lib/money/months";
 import { getMoneySettings } from "@/lib/ledger/settings";
 import { ageReceivables, AGEING_BUCKETS, ageingBucketOf, daysPastDue, isInArrears, type AgeingBucketKey } from "@/lib/money";
 

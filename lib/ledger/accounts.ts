@@ -2,7 +2,7 @@ import { and, eq, inArray } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { ledgerAccounts, memberships, users } from "@/db/schema";
 import { DEFAULT_CHART, FLYING_CLUB_CHART } from "@/lib/money";
-import { LedgerError } from "./errors";
+import { LedgerError } from "@/lib/money/errors";
 
 export type DbLike = Db | Tx;
 

@@ -6,7 +6,7 @@ import type Stripe from "stripe";
 import type { Db, Tx } from "@/db/client";
 import { clubs, paymentEvents, paymentRefunds, payments } from "@/db/schema";
 import { recordCardPayment, recordCardRefund, recordPayoutShare, markCheckoutExpired, type CardPaymentSnapshot, type PayoutShare } from "./card-payments";
-import { isLedgerError } from "./errors";
+import { isLedgerError } from "@/lib/money/errors";
 import { clubToday } from "./settings";
 
 export type EventResult = { handled: "processed" | "duplicate" | "ignored"; detail: string };

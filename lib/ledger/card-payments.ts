@@ -3,7 +3,7 @@
 import { and, eq, inArray, or, sql } from "drizzle-orm";
 import { cardPayouts, clubs, paymentRefunds, payments, type PaymentRow } from "@/db/schema";
 import { accountId, memberAccountId, type DbLike } from "./accounts";
-import { LedgerError } from "./errors";
+import { LedgerError } from "@/lib/money/errors";
 import { lockedPeriodNote } from "@/lib/money/open-period";
 import { openPostingDate, postEntry } from "./post-entry";
 import { queueReceipt } from "./receipts";

@@ -1,8 +1,8 @@
 import type { Db } from "@/db/client";
 import { recordCardPayment } from "./card-payments";
 import { snapshotOfIntent } from "./card-events";
-import { isLedgerError } from "./errors";
-import { getPaymentsClient } from "./payments-client";
+import { isLedgerError } from "@/lib/money/errors";
+import { getPaymentsClient } from "@/lib/payments/client";
 import { logError } from "@/lib/server/log";
 
 /**

@@ -5,7 +5,7 @@ import { journalEntries } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
 import { formatMoney, meterTimeCharge, subtractExact } from "@/lib/money";
 import { accountId, memberAccountId, type DbLike } from "./accounts";
-import { LedgerError } from "./errors";
+import { LedgerError } from "@/lib/money/errors";
 import { postEntry, reverseEntry } from "./post-entry";
 import { dueDateFor, getMoneySettings } from "./settings";
 

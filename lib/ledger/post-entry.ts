@@ -5,7 +5,7 @@ import { MAX_CALENDAR_YEAR, MIN_CALENDAR_YEAR, isIsoDateInRange, type IsoDate } 
 import { assertBalanced, reversalOf } from "@/lib/money";
 import { firstOpenDay, type OpenPostingDate } from "@/lib/money/open-period";
 import type { DbLike } from "./accounts";
-import { LedgerError, PeriodLockedError } from "./errors";
+import { LedgerError, PeriodLockedError } from "@/lib/money/errors";
 
 export type PostLine = { accountId: string; debitMinor?: number; creditMinor?: number; memo?: string };
 

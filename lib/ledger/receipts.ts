@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { clubs, memberships, users } from "@/db/schema";
 import { enqueueEmail } from "@/lib/email/outbox";
-import { moneyFormatter } from "./money-format";
+import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
 import type { DbLike } from "./accounts";
 import { memberBalance } from "./balances";

@@ -2,11 +2,11 @@ import { and, eq } from "drizzle-orm";
 import { clubs, duesReminders, memberships } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
 import { enqueueEmails, type EnqueueInput } from "@/lib/email/outbox";
-import { moneyFormatter } from "./money-format";
+import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
 import type { DbLike } from "./accounts";
 import { memberContacts, memberPositions } from "./balances";
-import { LedgerError } from "./errors";
+import { LedgerError } from "@/lib/money/errors";
 
 /**
  * Reminds every active member with charges past due on `asOf`, through the outbox, at most

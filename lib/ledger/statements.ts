@@ -1,12 +1,12 @@
 import { eq } from "drizzle-orm";
 import { clubs, statements } from "@/db/schema";
 import { enqueueEmails, type EnqueueInput } from "@/lib/email/outbox";
-import { moneyFormatter } from "./money-format";
+import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
 import type { DbLike } from "./accounts";
 import { memberContacts, memberMovements, type MemberMovementRow } from "./balances";
-import { LedgerError } from "./errors";
-import { monthLabel, monthRange } from "./months";
+import { LedgerError } from "@/lib/money/errors";
+import { monthLabel, monthRange } from "@/lib/money/months";
 import { statementFigures, type StatementFigures } from "./statement-lines";
 
 export function statementUrls(slug: string, memberUserId: string, month: string) {

@@ -16,7 +16,7 @@ import { saveMoneySettings } from "@/lib/actions/money/save-rates";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
 import { memberArrears } from "@/lib/ledger/arrears";
 import { memberBalance } from "@/lib/ledger/balances";
-import { LedgerError } from "@/lib/ledger/errors";
+import { LedgerError } from "@/lib/money/errors";
 import { postFlightCharge, reverseFlightCharge } from "@/lib/ledger/flight-charges";
 import { statementFor } from "@/lib/ledger/statements";
 import { EMPTY, clubBySlug, db, form, seedOnce, signInAs } from "./helpers";

@@ -11,7 +11,7 @@ import { seedSafety } from "@/db/seed/safety";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { membersInArrears } from "@/lib/ledger/arrears";
 import { parseStatementFile, storeStatement } from "@/lib/ledger/bank-import";
-import { monthOf, monthRange, shiftMonthKey } from "@/lib/ledger/months";
+import { monthOf, monthRange, shiftMonthKey } from "@/lib/money/months";
 import { autoMatchStatement } from "@/lib/ledger/reconciliation";
 import { bookBankLine, lockPeriod } from "@/lib/ledger/reconcile-edits";
 import { db } from "./helpers";

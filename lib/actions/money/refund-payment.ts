@@ -6,7 +6,7 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { kickOutbox } from "@/lib/email/runner";
 import { recordCardRefund } from "@/lib/ledger/card-payments";
-import { getPaymentsClient } from "@/lib/ledger/payments-client";
+import { getPaymentsClient } from "@/lib/payments/client";
 import { writeAudit } from "@/lib/server/audit";
 import { refundSchema } from "@/lib/validation/money";
 import { formatMoney } from "@/lib/money";

@@ -3,7 +3,7 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { kickOutbox } from "@/lib/email/runner";
 import { runBillingPeriod } from "@/lib/ledger/billing";
-import { monthLabel, monthOf, shiftMonthKey } from "@/lib/ledger/months";
+import { monthLabel, monthOf, shiftMonthKey } from "@/lib/money/months";
 import { clubToday } from "@/lib/ledger/settings";
 import { writeAudit } from "@/lib/server/audit";
 import { billingRunSchema } from "@/lib/validation/money";

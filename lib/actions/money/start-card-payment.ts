@@ -4,7 +4,7 @@ import { payments } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { memberBalance } from "@/lib/ledger/balances";
-import { getPaymentsClient } from "@/lib/ledger/payments-client";
+import { getPaymentsClient } from "@/lib/payments/client";
 import { formatMoney } from "@/lib/money";
 import { appUrl } from "@/lib/server/urls";
 import { emptySchema } from "@/lib/validation/money";

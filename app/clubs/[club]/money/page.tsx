@@ -9,7 +9,7 @@ import { listBillingRuns } from "@/db/queries/money-billing";
 import { accountBalances, countEntries, unbalancedEntries } from "@/db/queries/money-ledger";
 import { runBilling } from "@/lib/actions/money/run-billing";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
-import { monthLabel, monthOf, shiftMonthKey } from "@/lib/ledger/months";
+import { monthLabel, monthOf, shiftMonthKey } from "@/lib/money/months";
 import { lockedThrough } from "@/lib/ledger/post-entry";
 import { clubToday } from "@/lib/ledger/settings";
 import { authorizePage } from "@/lib/server/authorize";

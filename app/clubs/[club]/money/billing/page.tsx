@@ -10,7 +10,7 @@ import { assignDuesPlan } from "@/lib/actions/money/assign-dues-plan";
 import { saveMoneySettings } from "@/lib/actions/money/save-rates";
 import { saveDuesPlan } from "@/lib/actions/money/save-dues-plan";
 import { currencyExponent, minorToDecimalString } from "@/lib/money";
-import { monthLabel } from "@/lib/ledger/months";
+import { monthLabel } from "@/lib/money/months";
 import { DEFAULT_MONEY_SETTINGS, clubToday } from "@/lib/ledger/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";

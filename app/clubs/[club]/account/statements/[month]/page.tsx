@@ -5,7 +5,7 @@ import { ActionButton } from "@/components/money/action-form";
 import { StatementView } from "@/components/money/statement-view";
 import { PageHeader } from "@/components/ui/page-header";
 import { emailStatement } from "@/lib/actions/money/email-statement";
-import { monthLabel } from "@/lib/ledger/months";
+import { monthLabel } from "@/lib/money/months";
 import { statementFor } from "@/lib/ledger/statements";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";
 import { monthField } from "@/lib/validation/money";

@@ -1,7 +1,7 @@
 import { getMemberName } from "@/db/queries/money-accounts";
-import { monthLabel } from "@/lib/ledger/months";
+import { monthLabel } from "@/lib/money/months";
 import { clubToday } from "@/lib/ledger/settings";
-import { renderStatementPdf } from "@/lib/ledger/statement-pdf";
+import { renderStatementPdf } from "@/lib/money/statement-pdf";
 import { statementFor } from "@/lib/ledger/statements";
 import { apiError, withClub } from "@/lib/server/api";
 import { monthField } from "@/lib/validation/money";

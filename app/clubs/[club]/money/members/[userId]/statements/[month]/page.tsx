@@ -6,7 +6,7 @@ import { StatementView } from "@/components/money/statement-view";
 import { PageHeader } from "@/components/ui/page-header";
 import { getMemberName } from "@/db/queries/money-accounts";
 import { emailStatement } from "@/lib/actions/money/email-statement";
-import { monthLabel } from "@/lib/ledger/months";
+import { monthLabel } from "@/lib/money/months";
 import { statementFor } from "@/lib/ledger/statements";
 import { authorizePage } from "@/lib/server/authorize";
 import { monthField } from "@/lib/validation/money";

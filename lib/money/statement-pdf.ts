@@ -1,6 +1,6 @@
 import PDFDocument from "pdfkit";
-import { formatMoney } from "@/lib/money";
-import type { StatementFigures } from "./statement-lines";
+import { formatMoney } from "./format";
+import type { StatementFigures } from "@/lib/ledger/statement-lines";
 
 export type StatementPdfInput = {
   clubName: string;
