@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { isoDateInTimeZone } from "@/lib/dates";
 import type { PaymentRow } from "@/db/schema";
-import type { AccountActivityRow } from "@/db/queries/money-accounts";
+import type { AccountActivityRow } from "@/db/queries/money-member-accounts";
 import { monthLabel } from "@/lib/money/months";
 import { DataTable } from "./data-table";
 import { ArrearsFlag, Money, balanceWords } from "./money-text";

@@ -6,7 +6,7 @@ import { isoDateInTimeZone } from "@/lib/dates";
 import type { AircraftStatus } from "@/lib/airworthiness";
 import { listClubsByIds, listOperatorClubIds } from "./clubs";
 import { getFlightLine } from "./fleet-status";
-import { ageingByMember } from "./money-accounts";
+import { ageingByMember } from "./money-member-accounts";
 
 export type ClubSummary = {
   id: string; slug: string; name: string; timeZone: string; currency: string; unitSystem: string; activeMembers: number; admins: number;

@@ -3,7 +3,7 @@ import { Suspense } from "react";
 import { AccountView } from "@/components/money/account-view";
 import { PayButton } from "@/components/money/pay-button";
 import { PageHeader } from "@/components/ui/page-header";
-import { getMemberAccount } from "@/db/queries/money-accounts";
+import { getMemberAccount } from "@/db/queries/money-member-accounts";
 import { formatMoney } from "@/lib/money";
 import { clubToday } from "@/lib/ledger/settings";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";

@@ -4,7 +4,7 @@ import { ActionButton, ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
-import { listMemberBalances } from "@/db/queries/money-accounts";
+import { listMemberBalances } from "@/db/queries/money-member-accounts";
 import { listBillingRuns } from "@/db/queries/money-billing";
 import { accountBalances, countEntries, unbalancedEntries } from "@/db/queries/money-ledger";
 import { runBilling } from "@/lib/actions/money/run-billing";

@@ -4,7 +4,7 @@ import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
-import { ageingByMember } from "@/db/queries/money-accounts";
+import { ageingByMember } from "@/db/queries/money-member-accounts";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
 import { AGEING_BUCKETS } from "@/lib/money";
 import { clubToday } from "@/lib/ledger/settings";

@@ -4,7 +4,7 @@ import { ActionForm } from "@/components/money/action-form";
 import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { PageHeader } from "@/components/ui/page-header";
-import { listMemberBalances } from "@/db/queries/money-accounts";
+import { listMemberBalances } from "@/db/queries/money-member-accounts";
 import { recordManualPayment } from "@/lib/actions/money/record-manual-payment";
 import { clubToday } from "@/lib/ledger/settings";
 import { can } from "@/permissions";

@@ -5,7 +5,7 @@ import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
-import { listMemberBalances } from "@/db/queries/money-accounts";
+import { listMemberBalances } from "@/db/queries/money-member-accounts";
 import { accountBalances, listJournal } from "@/db/queries/money-ledger";
 import { postAdjustment } from "@/lib/actions/money/post-adjustment";
 import { reverseJournalEntry } from "@/lib/actions/money/reverse-entry";

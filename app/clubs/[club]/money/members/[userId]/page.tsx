@@ -6,7 +6,7 @@ import { ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
-import { getMemberAccount, getMemberName } from "@/db/queries/money-accounts";
+import { getMemberAccount, getMemberName } from "@/db/queries/money-member-accounts";
 import { refundPayment } from "@/lib/actions/money/refund-payment";
 import { minorToDecimalString, currencyExponent } from "@/lib/money";
 import { clubToday } from "@/lib/ledger/settings";

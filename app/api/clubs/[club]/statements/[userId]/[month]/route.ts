@@ -1,4 +1,4 @@
-import { getMemberName } from "@/db/queries/money-accounts";
+import { getMemberName } from "@/db/queries/money-member-accounts";
 import { monthLabel } from "@/lib/money/months";
 import { clubToday } from "@/lib/ledger/settings";
 import { renderStatementPdf } from "@/lib/money/statement-pdf";

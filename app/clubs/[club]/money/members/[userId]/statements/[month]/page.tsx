@@ -4,7 +4,7 @@ import { notFound } from "next/navigation";
 import { ActionButton } from "@/components/money/action-form";
 import { StatementView } from "@/components/money/statement-view";
 import { PageHeader } from "@/components/ui/page-header";
-import { getMemberName } from "@/db/queries/money-accounts";
+import { getMemberName } from "@/db/queries/money-member-accounts";
 import { emailStatement } from "@/lib/actions/money/email-statement";
 import { monthLabel } from "@/lib/money/months";
 import { statementFor } from "@/lib/ledger/statements";
