@@ -1,7 +1,7 @@
 import Link from "next/link";
 import type { Db } from "@/db/client";
 import type { Club } from "@/db/schema";
-import { memberArrears } from "@/lib/ledger/arrears";
+import { memberArrears } from "@/db/queries/money-arrears";
 import { ArrearsFlag, Money, balanceWords } from "./money-text";
 
 /** The club home's "Your account" tile: balance, standing and the way to pay. */

@@ -3,9 +3,9 @@ import { and, desc, eq } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { duesPlans, memberDues, memberships, payments, statements, users } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
-import { memberMovements, memberPositions } from "@/lib/ledger/balances";
+import { memberMovements, memberPositions } from "@/db/queries/money-member-balances";
 import { monthOf } from "@/lib/money/months";
-import { getMoneySettings } from "@/lib/ledger/settings";
+import { getMoneySettings } from "@/db/queries/money-settings";
 import { ageReceivables, AGEING_BUCKETS, ageingBucketOf, daysPastDue, isInArrears, type AgeingBucketKey } from "@/lib/money";
 
 export type MemberBalanceRow = {

@@ -9,7 +9,7 @@ import { seedFoundation } from "@/db/seed/foundation";
 import { demoBankStatement, seedMoney } from "@/db/seed/money";
 import { seedSafety } from "@/db/seed/safety";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { membersInArrears } from "@/lib/ledger/arrears";
+import { membersInArrears } from "@/db/queries/money-arrears";
 import { parseStatementFile, storeStatement } from "@/lib/ledger/bank-import";
 import { monthOf, monthRange, shiftMonthKey } from "@/lib/money/months";
 import { autoMatchStatement } from "@/lib/ledger/reconciliation";

@@ -5,7 +5,7 @@ import { payments } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { kickOutbox } from "@/lib/email/runner";
-import { recordCardRefund } from "@/lib/ledger/card-payments";
+import { recordCardRefund } from "@/db/queries/money-card-payments";
 import { getPaymentsClient } from "@/lib/payments/client";
 import { writeAudit } from "@/lib/server/audit";
 import { refundSchema } from "@/lib/validation/money";

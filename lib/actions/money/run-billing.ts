@@ -2,9 +2,9 @@
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { kickOutbox } from "@/lib/email/runner";
-import { runBillingPeriod } from "@/lib/ledger/billing";
+import { runBillingPeriod } from "@/db/queries/money-billing-run";
 import { monthLabel, monthOf, shiftMonthKey } from "@/lib/money/months";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/db/queries/money-settings";
 import { writeAudit } from "@/lib/server/audit";
 import { billingRunSchema } from "@/lib/validation/money";
 import { ledger } from "./ledger-errors";

@@ -3,7 +3,7 @@ import { randomUUID } from "node:crypto";
 import { payments } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
-import { memberBalance } from "@/lib/ledger/balances";
+import { memberBalance } from "@/db/queries/money-member-balances";
 import { getPaymentsClient } from "@/lib/payments/client";
 import { formatMoney } from "@/lib/money";
 import { appUrl } from "@/lib/server/urls";

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { getDb } from "@/db/client";
-import { processPaymentEvent } from "@/lib/ledger/card-events";
+import { processPaymentEvent } from "@/db/queries/money-card-events";
 import { getPaymentsClient } from "@/lib/payments/client";
 import { verifyWebhook, webhookSigningSecret } from "@/lib/payments/provider";
 import { logError, logWarn } from "@/lib/server/log";

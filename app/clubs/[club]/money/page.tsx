@@ -10,8 +10,8 @@ import { accountBalances, countEntries, unbalancedEntries } from "@/db/queries/m
 import { runBilling } from "@/lib/actions/money/run-billing";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
 import { monthLabel, monthOf, shiftMonthKey } from "@/lib/money/months";
-import { lockedThrough } from "@/lib/ledger/post-entry";
-import { clubToday } from "@/lib/ledger/settings";
+import { lockedThrough } from "@/db/queries/money-post-entry";
+import { clubToday } from "@/db/queries/money-settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { explainDenied, can, canAll } from "@/permissions";
 

@@ -4,8 +4,8 @@ import { notFound } from "next/navigation";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
 import { getPaymentBySession } from "@/db/queries/money-payments";
-import { memberBalance } from "@/lib/ledger/balances";
-import { syncCheckoutSession } from "@/lib/ledger/checkout-sync";
+import { memberBalance } from "@/db/queries/money-member-balances";
+import { syncCheckoutSession } from "@/db/queries/money-checkout-sync";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Payment" };

@@ -6,7 +6,7 @@ import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
 import { listBankStatements } from "@/db/queries/money-reconcile";
 import { importBankStatement } from "@/lib/actions/money/import-bank-statement";
-import { lockedThrough } from "@/lib/ledger/post-entry";
+import { lockedThrough } from "@/db/queries/money-post-entry";
 import { explainDenied, can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
 

@@ -6,7 +6,7 @@ import { StatementView } from "@/components/money/statement-view";
 import { PageHeader } from "@/components/ui/page-header";
 import { emailStatement } from "@/lib/actions/money/email-statement";
 import { monthLabel } from "@/lib/money/months";
-import { statementFor } from "@/lib/ledger/statements";
+import { statementFor } from "@/db/queries/money-statements";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";
 import { monthField } from "@/lib/validation/money";
 

@@ -1,8 +1,8 @@
 import { getMemberName } from "@/db/queries/money-member-accounts";
 import { monthLabel } from "@/lib/money/months";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/db/queries/money-settings";
 import { renderStatementPdf } from "@/lib/money/statement-pdf";
-import { statementFor } from "@/lib/ledger/statements";
+import { statementFor } from "@/db/queries/money-statements";
 import { apiError, withClub } from "@/lib/server/api";
 import { monthField } from "@/lib/validation/money";
 import { canOn } from "@/permissions";

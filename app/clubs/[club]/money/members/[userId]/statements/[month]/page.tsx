@@ -7,7 +7,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { getMemberName } from "@/db/queries/money-member-accounts";
 import { emailStatement } from "@/lib/actions/money/email-statement";
 import { monthLabel } from "@/lib/money/months";
-import { statementFor } from "@/lib/ledger/statements";
+import { statementFor } from "@/db/queries/money-statements";
 import { authorizePage } from "@/lib/server/authorize";
 import { monthField } from "@/lib/validation/money";
 

@@ -1,8 +1,9 @@
+import "server-only";
 import { eq } from "drizzle-orm";
 import { clubs, moneySettings } from "@/db/schema";
 import { addDays, isoDateInTimeZone, type IsoDate } from "@/lib/dates";
 import type { LateFeePolicy } from "@/lib/money";
-import type { DbLike } from "./accounts";
+import type { DbLike } from "./money-accounts";
 
 export type MoneySettings = {
   paymentTermsDays: number;

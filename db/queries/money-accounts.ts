@@ -1,3 +1,4 @@
+import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { ledgerAccounts, memberships, users } from "@/db/schema";

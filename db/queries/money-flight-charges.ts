@@ -1,13 +1,14 @@
+import "server-only";
 // Posting a flight's charge to the pilot's member account. Flight check-in calls
 // postFlightCharge inside its own transaction, right after it writes the flight row.
 import { and, desc, eq } from "drizzle-orm";
 import { journalEntries } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
 import { formatMoney, meterTimeCharge, subtractExact } from "@/lib/money";
-import { accountId, memberAccountId, type DbLike } from "./accounts";
+import { accountId, memberAccountId, type DbLike } from "./money-accounts";
 import { LedgerError } from "@/lib/money/errors";
-import { postEntry, reverseEntry } from "./post-entry";
-import { dueDateFor, getMoneySettings } from "./settings";
+import { postEntry, reverseEntry } from "./money-post-entry";
+import { dueDateFor, getMoneySettings } from "./money-settings";
 
 /** Who is posting, in which club. A ClubContext (lib/server/club-context) fits. */
 export type PostingContext = { club: { id: string; currency: string }; user?: { id: string } | null };

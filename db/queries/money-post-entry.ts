@@ -1,10 +1,11 @@
+import "server-only";
 import { and, eq, inArray, max } from "drizzle-orm";
 import { clubs, journalEntries, journalLines, ledgerAccounts, reconciliationPeriods, type EntryKind } from "@/db/schema";
 import { newId } from "@/db/schema/columns";
 import { MAX_CALENDAR_YEAR, MIN_CALENDAR_YEAR, isIsoDateInRange, type IsoDate } from "@/lib/dates";
 import { assertBalanced, reversalOf } from "@/lib/money";
 import { firstOpenDay, type OpenPostingDate } from "@/lib/money/open-period";
-import type { DbLike } from "./accounts";
+import type { DbLike } from "./money-accounts";
 import { LedgerError, PeriodLockedError } from "@/lib/money/errors";
 
 export type PostLine = { accountId: string; debitMinor?: number; creditMinor?: number; memo?: string };

@@ -1,6 +1,7 @@
+import "server-only";
 import type { Db } from "@/db/client";
-import { recordCardPayment } from "./card-payments";
-import { snapshotOfIntent } from "./card-events";
+import { recordCardPayment } from "./money-card-payments";
+import { snapshotOfIntent } from "./money-card-events";
 import { isLedgerError } from "@/lib/money/errors";
 import { getPaymentsClient } from "@/lib/payments/client";
 import { logError } from "@/lib/server/log";

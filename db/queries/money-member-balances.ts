@@ -1,7 +1,8 @@
+import "server-only";
 import { and, eq, sql } from "drizzle-orm";
 import { journalEntries, journalLines, ledgerAccounts, memberships, users } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
-import { RECEIVABLES, type DbLike } from "./accounts";
+import { RECEIVABLES, type DbLike } from "./money-accounts";
 import { oldestOpenDueDate, openItemsOf, type OpenItems } from "@/lib/money/open-items";
 
 export type MemberMovementRow = {

@@ -1,11 +1,12 @@
+import "server-only";
 import { and, eq } from "drizzle-orm";
 import { clubs, duesReminders, memberships } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
 import { enqueueEmails, type EnqueueInput } from "@/lib/email/outbox";
 import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
-import type { DbLike } from "./accounts";
-import { memberContacts, memberPositions } from "./balances";
+import type { DbLike } from "./money-accounts";
+import { memberContacts, memberPositions } from "./money-member-balances";
 import { LedgerError } from "@/lib/money/errors";
 
 /**

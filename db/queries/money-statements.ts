@@ -1,13 +1,14 @@
+import "server-only";
 import { eq } from "drizzle-orm";
 import { clubs, statements } from "@/db/schema";
 import { enqueueEmails, type EnqueueInput } from "@/lib/email/outbox";
 import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
-import type { DbLike } from "./accounts";
-import { memberContacts, memberMovements, type MemberMovementRow } from "./balances";
+import type { DbLike } from "./money-accounts";
+import { memberContacts, memberMovements, type MemberMovementRow } from "./money-member-balances";
 import { LedgerError } from "@/lib/money/errors";
 import { monthLabel, monthRange } from "@/lib/money/months";
-import { statementFigures, type StatementFigures } from "./statement-lines";
+import { statementFigures, type StatementFigures } from "@/lib/ledger/statement-lines";
 
 export function statementUrls(slug: string, memberUserId: string, month: string) {
   return {

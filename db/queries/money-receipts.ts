@@ -1,10 +1,11 @@
+import "server-only";
 import { and, eq } from "drizzle-orm";
 import { clubs, memberships, users } from "@/db/schema";
 import { enqueueEmail } from "@/lib/email/outbox";
 import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
-import type { DbLike } from "./accounts";
-import { memberBalance } from "./balances";
+import type { DbLike } from "./money-accounts";
+import { memberBalance } from "./money-member-balances";
 
 const METHOD_WORDS = { card: "card", cheque: "cheque", cash: "cash", transfer: "bank transfer" } as const;
 
