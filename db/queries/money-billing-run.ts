@@ -11,7 +11,8 @@ import { memberPositions } from "./money-member-balances";
 import { LedgerError } from "@/lib/money/errors";
 import { monthRange, shiftMonthKey } from "@/lib/money/months";
 import { assertDateOpen, postEntries, type PostEntryInput } from "./money-post-entry";
-import { dueDateFor, getMoneySettings, lateFeePolicyOf } from "./money-settings";
+import { getMoneySettings } from "./money-settings";
+import { dueDateFor, lateFeePolicyOf } from "@/lib/money/settings";
 import { issueStatements } from "./money-statements";
 
 export type BillingRunResult = {

@@ -8,7 +8,7 @@ import type { Db, Tx } from "@/db/client";
 import { clubs, paymentEvents, paymentRefunds, payments } from "@/db/schema";
 import { recordCardPayment, recordCardRefund, recordPayoutShare, markCheckoutExpired, type CardPaymentSnapshot, type PayoutShare } from "./money-card-payments";
 import { isLedgerError } from "@/lib/money/errors";
-import { clubToday } from "./money-settings";
+import { clubToday } from "@/lib/money/settings";
 
 export type EventResult = { handled: "processed" | "duplicate" | "ignored"; detail: string };
 

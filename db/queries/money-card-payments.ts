@@ -8,7 +8,7 @@ import { LedgerError } from "@/lib/money/errors";
 import { lockedPeriodNote } from "@/lib/money/open-period";
 import { openPostingDate, postEntry } from "./money-post-entry";
 import { queueReceipt } from "./money-receipts";
-import { clubToday } from "./money-settings";
+import { clubToday } from "@/lib/money/settings";
 
 /** What the provider says about one payment, read fresh from it (never from the event alone). */
 export type CardPaymentSnapshot = {

@@ -8,7 +8,8 @@ import { formatMoney, meterTimeCharge, subtractExact } from "@/lib/money";
 import { accountId, memberAccountId, type DbLike } from "./money-accounts";
 import { LedgerError } from "@/lib/money/errors";
 import { postEntry, reverseEntry } from "./money-post-entry";
-import { dueDateFor, getMoneySettings } from "./money-settings";
+import { getMoneySettings } from "./money-settings";
+import { dueDateFor } from "@/lib/money/settings";
 
 /** Who is posting, in which club. A ClubContext (lib/server/club-context) fits. */
 export type PostingContext = { club: { id: string; currency: string }; user?: { id: string } | null };

@@ -4,7 +4,7 @@ import { journalEntries } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { lockedThrough, reverseEntry } from "@/db/queries/money-post-entry";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { writeAudit } from "@/lib/server/audit";
 import { reverseEntrySchema } from "@/lib/validation/money";
 import { ledger } from "./ledger-errors";

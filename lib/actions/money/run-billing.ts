@@ -4,7 +4,7 @@ import { ActionError } from "@/lib/actions/action-state";
 import { kickOutbox } from "@/lib/email/runner";
 import { runBillingPeriod } from "@/db/queries/money-billing-run";
 import { monthLabel, monthOf, shiftMonthKey } from "@/lib/money/months";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { writeAudit } from "@/lib/server/audit";
 import { billingRunSchema } from "@/lib/validation/money";
 import { ledger } from "./ledger-errors";

@@ -2,7 +2,7 @@
 import { clubAction } from "@/lib/actions/create-action";
 import { kickOutbox } from "@/lib/email/runner";
 import { sendDuesReminders } from "@/db/queries/money-reminders";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { writeAudit } from "@/lib/server/audit";
 import { emptySchema } from "@/lib/validation/money";
 

@@ -5,7 +5,7 @@ import { PayButton } from "@/components/money/pay-button";
 import { PageHeader } from "@/components/ui/page-header";
 import { getMemberAccount } from "@/db/queries/money-member-accounts";
 import { formatMoney } from "@/lib/money";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";
 import { canOn } from "@/permissions";
 

@@ -11,7 +11,7 @@ import { runBilling } from "@/lib/actions/money/run-billing";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
 import { monthLabel, monthOf, shiftMonthKey } from "@/lib/money/months";
 import { lockedThrough } from "@/db/queries/money-post-entry";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { explainDenied, can, canAll } from "@/permissions";
 

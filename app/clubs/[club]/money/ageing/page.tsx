@@ -7,7 +7,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { ageingByMember } from "@/db/queries/money-member-accounts";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
 import { AGEING_BUCKETS } from "@/lib/money";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
 

@@ -6,7 +6,7 @@ import { MoneyNav } from "@/components/money/money-nav";
 import { PageHeader } from "@/components/ui/page-header";
 import { listMemberBalances } from "@/db/queries/money-member-accounts";
 import { recordManualPayment } from "@/lib/actions/money/record-manual-payment";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
 

@@ -11,7 +11,7 @@ import { saveMoneySettings } from "@/lib/actions/money/save-rates";
 import { saveDuesPlan } from "@/lib/actions/money/save-dues-plan";
 import { currencyExponent, minorToDecimalString } from "@/lib/money";
 import { monthLabel } from "@/lib/money/months";
-import { DEFAULT_MONEY_SETTINGS, clubToday } from "@/db/queries/money-settings";
+import { DEFAULT_MONEY_SETTINGS, clubToday } from "@/lib/money/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";
 

@@ -8,7 +8,7 @@ import { approveBillAction } from "@/lib/actions/money/approve-bill";
 import { enterBillAction } from "@/lib/actions/money/enter-bill";
 import { payBillAction } from "@/lib/actions/money/pay-bill";
 import { saveBillApprovalAction } from "@/lib/actions/money/save-bill-approval";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { formatMoney, minorToDecimalString, currencyExponent } from "@/lib/money";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";

@@ -9,7 +9,7 @@ import { listMemberBalances } from "@/db/queries/money-member-accounts";
 import { accountBalances, listJournal } from "@/db/queries/money-ledger";
 import { postAdjustment } from "@/lib/actions/money/post-adjustment";
 import { reverseJournalEntry } from "@/lib/actions/money/reverse-entry";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { ENTRY_KINDS } from "@/db/schema/money";
 import { can } from "@/permissions";

@@ -9,7 +9,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { getMemberAccount, getMemberName } from "@/db/queries/money-member-accounts";
 import { refundPayment } from "@/lib/actions/money/refund-payment";
 import { minorToDecimalString, currencyExponent } from "@/lib/money";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";
 

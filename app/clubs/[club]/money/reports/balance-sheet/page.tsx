@@ -3,7 +3,7 @@ import { MoneyNav } from "@/components/money/money-nav";
 import { PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
 import { PageHeader } from "@/components/ui/page-header";
 import { reportPostings } from "@/db/queries/money-reports";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { reportPresets } from "@/lib/money/report-periods";
 import { balanceSheet, balanceSheetLines } from "@/lib/money/reports";
 import { formatMoney } from "@/lib/money";

@@ -1,6 +1,6 @@
 import { getMemberName } from "@/db/queries/money-member-accounts";
 import { monthLabel } from "@/lib/money/months";
-import { clubToday } from "@/db/queries/money-settings";
+import { clubToday } from "@/lib/money/settings";
 import { renderStatementPdf } from "@/lib/money/statement-pdf";
 import { statementFor } from "@/db/queries/money-statements";
 import { apiError, withClub } from "@/lib/server/api";
