@@ -100,7 +100,7 @@ export function loadGuardInput(
       medicalLastDay: item("medical")?.lastDay ?? null,
       passengerDayLastDay: item(`passenger_day:${classKey}`)?.lastDay ?? null,
       passengerNightLastDay: item(`passenger_night:${classKey}`)?.lastDay ?? null,
-      arrears: { inArrears: arrears.inArrears, owedText: formatMoney(arrears.balanceMinor, club.currency), oldestDueDate: arrears.oldestDueDate },
+      arrears: { inArrears: arrears.inArrears, owedText: formatMoney(arrears.balanceMinor, club.currency, club.locale), oldestDueDate: arrears.oldestDueDate },
     },
     withInstructor: args.withInstructor,
     carryingPassengers: args.carryingPassengers,

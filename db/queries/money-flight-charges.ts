@@ -12,7 +12,7 @@ import { getMoneySettings } from "./money-settings";
 import { dueDateFor } from "@/lib/money/settings";
 
 /** Who is posting, in which club. A ClubContext (lib/server/club-context) fits. */
-export type PostingContext = { club: { id: string; currency: string }; user?: { id: string } | null };
+export type PostingContext = { club: { id: string; currency: string; locale?: string }; user?: { id: string } | null };
 
 export type FlightChargeRequest = {
   clubId: string;
@@ -89,7 +89,7 @@ export function postFlightCharge(tx: DbLike, ctx: PostingContext, flight: Flight
   const label = flight.aircraftLabel ? `${flight.aircraftLabel} ` : "";
   const lines = [];
   if (timeChargeMinor > 0) {
-    lines.push({ accountId: member, debitMinor: timeChargeMinor, memo: `${hours.toFixed(1)} h × ${formatMoney(flight.ratePerHourMinor, ctx.club.currency)}` });
+    lines.push({ accountId: member, debitMinor: timeChargeMinor, memo: `${hours.toFixed(1)} h × ${formatMoney(flight.ratePerHourMinor, ctx.club.currency, ctx.club.locale)}` });
     lines.push({ accountId: accountId(tx, ctx.club.id, "flight-income"), creditMinor: timeChargeMinor });
   }
   if (fuelCredit > 0) {

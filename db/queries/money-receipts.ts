@@ -19,7 +19,7 @@ export function queueReceipt(tx: DbLike, clubId: string, p: { memberUserId: stri
     .where(and(eq(memberships.clubId, clubId), eq(memberships.userId, p.memberUserId)))
     .get();
   if (!club || !person) return;
-  const money = moneyFormatter(club.currency);
+  const money = moneyFormatter(club.currency, club.locale);
   enqueueEmail(tx, {
     clubId,
     to: person.email,

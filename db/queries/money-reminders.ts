@@ -19,7 +19,7 @@ export function sendDuesReminders(tx: DbLike, clubId: string, asOf: IsoDate): nu
   const active = new Set(tx.select({ userId: memberships.userId }).from(memberships).where(and(eq(memberships.clubId, clubId), eq(memberships.status, "active"))).all().map((m) => m.userId));
   const contacts = memberContacts(tx, clubId);
   const emails: EnqueueInput<"dues-reminder">[] = [];
-  const money = moneyFormatter(club.currency);
+  const money = moneyFormatter(club.currency, club.locale);
   for (const [userId, p] of memberPositions(tx, clubId)) {
     const overdue = p.items.filter((i) => i.dueDate < asOf).reduce((s, i) => s + i.openMinor, 0);
     const contact = contacts.get(userId);

@@ -1,4 +1,4 @@
-import { endOfMonthAfter, formatIsoDate, isIsoDate, shiftMonth, type IsoDate } from "@/lib/dates";
+import { endOfMonthAfter, formatIsoDate, formatMonth, isIsoDate, shiftMonth, type IsoDate } from "@/lib/dates";
 
 /** "2026-04" → its first and last day. */
 export function monthRange(month: string): { start: IsoDate; end: IsoDate } {
@@ -18,15 +18,8 @@ export function shiftMonthKey(month: string, n: number): string {
   return formatIsoDate(t.year, t.month, 1).slice(0, 7);
 }
 
-const labels = new Map<string, string>();
-const labelFormat = new Intl.DateTimeFormat("en-US", { month: "long", year: "numeric", timeZone: "UTC" });
-
-/** "2026-04" → "April 2026" (English month names, as the rest of the interface). */
-export function monthLabel(month: string): string {
-  let label = labels.get(month);
-  if (label === undefined) {
-    label = labelFormat.format(new Date(`${monthRange(month).start}T00:00:00Z`));
-    labels.set(month, label);
-  }
-  return label;
+/** "2026-04" → "April 2026" in the club's locale (lib/dates formatMonth; en-US when none is given). */
+export function monthLabel(month: string, locale = "en-US"): string {
+  monthRange(month);
+  return formatMonth(month, locale);
 }

@@ -23,8 +23,8 @@ export const runBilling = clubAction({
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.billing.run", subjectType: "BillingRun", subjectId: result.runId, after: result });
     const message =
       posted === 0 && result.statementsIssued === 0
-        ? `Nothing new: ${monthLabel(input.month)} was already billed and its statements issued.`
-        : `${monthLabel(input.month)}: ${result.duesPosted} dues and ${result.lateFeesPosted} late fees posted, ${result.statementsIssued} statements for ${monthLabel(shiftMonthKey(input.month, -1))} e-mailed.`;
+        ? `Nothing new: ${monthLabel(input.month, ctx.club.locale)} was already billed and its statements issued.`
+        : `${monthLabel(input.month, ctx.club.locale)}: ${result.duesPosted} dues and ${result.lateFeesPosted} late fees posted, ${result.statementsIssued} statements for ${monthLabel(shiftMonthKey(input.month, -1), ctx.club.locale)} e-mailed.`;
     return { message, data: result, refresh: true };
   },
   after: () => kickOutbox(),

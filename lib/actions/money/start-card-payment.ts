@@ -26,7 +26,7 @@ export const startCardPayment = clubAction({
   async prepare(ctx) {
     const balance = memberBalance(ctx.db, ctx.club.id, ctx.user.id);
     if (balance <= 0) throw new ActionError("There is nothing to pay: your balance is settled.");
-    if (balance < MIN_CARD_MINOR) throw new ActionError(`Balances under ${formatMoney(MIN_CARD_MINOR, ctx.club.currency)} cannot be paid by card; pay them with your next charge.`);
+    if (balance < MIN_CARD_MINOR) throw new ActionError(`Balances under ${formatMoney(MIN_CARD_MINOR, ctx.club.currency, ctx.club.locale)} cannot be paid by card; pay them with your next charge.`);
     const paymentId = randomUUID();
     const metadata = { clubId: ctx.club.id, memberUserId: ctx.user.id, paymentId };
     const base = `/clubs/${ctx.club.slug}/account`;

@@ -26,7 +26,7 @@ export default async function BalancesPage({ params }: { params: Promise<{ club:
         <DataTable
           label="Member balances"
           csvName={`balances-${club.slug}-${today}`}
-          currency={club.currency}
+          currency={club.currency} locale={club.locale}
           rows={rows}
           filter={{ key: "arrearsWord", label: "Standing", options: [{ value: "In arrears", label: "In arrears" }, { value: "Up to date", label: "Up to date" }] }}
           columns={[

@@ -48,7 +48,7 @@ export default async function JournalPage({ params }: { params: Promise<{ club: 
         <DataTable
           label="Journal entries"
           csvName={`journal-${club.slug}`}
-          currency={club.currency}
+          currency={club.currency} locale={club.locale}
           rows={rows}
           filter={{ key: "kind", label: "Kind", options: ENTRY_KINDS.map((k) => ({ value: k, label: KIND_WORDS[k] ?? k })) }}
           columns={[
@@ -75,7 +75,7 @@ export default async function JournalPage({ params }: { params: Promise<{ club: 
                   <tr key={b.code} className="border-t border-sand-200">
                     <td className="py-1">{b.name}</td>
                     <td className="py-1 capitalize text-ink-700">{b.type}</td>
-                    <td className="py-1 text-right"><Money minor={b.balanceMinor} currency={club.currency} /></td>
+                    <td className="py-1 text-right"><Money minor={b.balanceMinor} currency={club.currency} locale={club.locale} /></td>
                   </tr>
                 ))}
               </tbody>

@@ -42,7 +42,7 @@ export default async function ProfitAndLossPage({ params, searchParams }: { para
       <ReportTable
         caption={`Profit and loss, ${period.from} to ${period.to}`}
         lines={pnl.byAccount}
-        currency={club.currency}
+        currency={club.currency} locale={club.locale}
         groups={["income", "expense"]}
         totals={[
           { label: "Total income", minor: pnl.incomeMinor },
