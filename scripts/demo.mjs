@@ -42,7 +42,7 @@ function step(name, cmd, args) {
   if (r.status !== 0) process.exit(r.status ?? 1);
 }
 
-step("migrate and seed", tsx, ["db/seed/index.ts"]);
+step("migrate and seed", tsx, ["--import", "./scripts/server-only-off.mjs", "db/seed/index.ts"]);
 step("build", process.execPath, [next, "build"]);
 
 const children = [

@@ -33,7 +33,7 @@ export type AircraftFormValues = {
   notes: string | null;
 };
 
-export function AircraftForm({ slug, currency, values }: { slug: string; currency: string; values?: AircraftFormValues }) {
+export function AircraftForm({ slug, currency, values }: { slug: string; currency: string; locale?: string; values?: AircraftFormValues }) {
   const form = useFormAction(values ? updateAircraft : createAircraft, { keepValuesAfterOk: Boolean(values) });
   const { state } = form;
   const e = state.fieldErrors;

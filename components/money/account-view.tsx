@@ -1,8 +1,9 @@
 import Link from "next/link";
-import { isoDateInTimeZone } from "@/lib/dates";
+import { formatDate, isoDateInTimeZone } from "@/lib/dates";
+import { DEFAULT_LOCALE } from "@/lib/money/format";
 import type { PaymentRow } from "@/db/schema";
-import type { AccountActivityRow } from "@/db/queries/money-accounts";
-import { monthLabel } from "@/lib/ledger/months";
+import type { AccountActivityRow } from "@/db/queries/money-member-accounts";
+import { monthLabel } from "@/lib/money/months";
 import { DataTable } from "./data-table";
 import { ArrearsFlag, Money, balanceWords } from "./money-text";
 
@@ -20,14 +21,14 @@ const STATUS_WORDS: Record<string, string> = { pending: "Waiting for the card", 
 const METHOD_WORDS: Record<string, string> = { card: "Card", cheque: "Cheque", cash: "Cash", transfer: "Bank transfer" };
 
 /** A member's account, for the member themself and for the treasurer looking at it. */
-export function AccountView({ data, currency, timeZone, slug, userId, statementHref, payButton }: { data: AccountViewData; currency: string; timeZone: string; slug: string; userId: string; statementHref: (month: string) => string; payButton?: React.ReactNode }) {
+export function AccountView({ data, currency, locale, timeZone, slug, userId, statementHref, payButton }: { data: AccountViewData; currency: string; locale?: string; timeZone: string; slug: string; userId: string; statementHref: (month: string) => string; payButton?: React.ReactNode }) {
   return (
     <div className="grid grid-cols-1 gap-6">
       <section className="card" aria-labelledby="balance-h">
         <h2 id="balance-h" className="text-lg font-bold">Balance</h2>
-        <p className="mt-1 text-3xl font-bold" data-testid="account-balance"><Money minor={data.balanceMinor} currency={currency} credit /></p>
+        <p className="mt-1 text-3xl font-bold" data-testid="account-balance"><Money minor={data.balanceMinor} currency={currency} locale={locale} credit /></p>
         <p className="text-ink-700">{balanceWords(data.balanceMinor)}</p>
-        {data.overdueMinor > 0 ? <p className="mt-1 text-sm text-ink-700">Past due: <Money minor={data.overdueMinor} currency={currency} /> (oldest due {data.oldestDueDate})</p> : null}
+        {data.overdueMinor > 0 ? <p className="mt-1 text-sm text-ink-700">Past due: <Money minor={data.overdueMinor} currency={currency} locale={locale} /> (oldest due {data.oldestDueDate ? formatDate(data.oldestDueDate, locale ?? DEFAULT_LOCALE) : "—"})</p> : null}
         <p className="mt-2"><ArrearsFlag inArrears={data.inArrears} /></p>
         {payButton ? <div className="mt-4">{payButton}</div> : null}
       </section>
@@ -37,10 +38,10 @@ export function AccountView({ data, currency, timeZone, slug, userId, statementH
           <ul className="card divide-y divide-sand-200">
             {data.statementMonths.map((s) => (
               <li key={s.month} className="flex flex-wrap items-center justify-between gap-2 py-2">
-                <Link href={statementHref(s.month)}>{monthLabel(s.month)}</Link>
+                <Link href={statementHref(s.month)}>{monthLabel(s.month, locale)}</Link>
                 <span className="flex flex-wrap items-center gap-3 text-sm text-ink-700">
-                  {s.issuedAt ? `issued ${isoDateInTimeZone(s.issuedAt, timeZone)}` : "month to date"}
-                  <a href={`/api/clubs/${slug}/statements/${userId}/${s.month}`}>PDF<span className="sr-only"> for {monthLabel(s.month)}</span></a>
+                  {s.issuedAt ? `issued ${formatDate(isoDateInTimeZone(s.issuedAt, timeZone), locale ?? DEFAULT_LOCALE)}` : "month to date"}
+                  <a href={`/api/clubs/${slug}/statements/${userId}/${s.month}`}>PDF<span className="sr-only"> for {monthLabel(s.month, locale)}</span></a>
                 </span>
               </li>
             ))}
@@ -53,7 +54,7 @@ export function AccountView({ data, currency, timeZone, slug, userId, statementH
           label="Account activity"
           prefix="a_"
           csvName="account-activity"
-          currency={currency}
+          currency={currency} locale={locale}
           pageSize={15}
           rows={data.activity.map((a) => ({ date: a.date, memo: a.memo, charge: a.amountMinor > 0 ? a.amountMinor : null, credit: a.amountMinor < 0 ? -a.amountMinor : null, dueOn: a.dueOn, bucket: a.bucket }))}
           columns={[
@@ -72,8 +73,8 @@ export function AccountView({ data, currency, timeZone, slug, userId, statementH
           <ul className="card divide-y divide-sand-200 text-sm">
             {data.payments.map((p) => (
               <li key={p.id} className="flex flex-wrap justify-between gap-2 py-2">
-                <span>{p.receivedOn ?? isoDateInTimeZone(p.createdAt, timeZone)} · {METHOD_WORDS[p.method]}{p.reference ? ` ${p.reference}` : ""}</span>
-                <span><Money minor={p.amountMinor} currency={currency} /> · {STATUS_WORDS[p.status] ?? p.status}{p.refundedMinor ? <> (<Money minor={p.refundedMinor} currency={currency} /> refunded)</> : null}</span>
+                <span>{formatDate(p.receivedOn ?? isoDateInTimeZone(p.createdAt, timeZone), locale ?? DEFAULT_LOCALE)} · {METHOD_WORDS[p.method]}{p.reference ? ` ${p.reference}` : ""}</span>
+                <span><Money minor={p.amountMinor} currency={currency} locale={locale} /> · {STATUS_WORDS[p.status] ?? p.status}{p.refundedMinor ? <> (<Money minor={p.refundedMinor} currency={currency} locale={locale} /> refunded)</> : null}</span>
               </li>
             ))}
           </ul>

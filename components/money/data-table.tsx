@@ -6,7 +6,8 @@ import {
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
-import { currencyExponent, formatMoney, minorToDecimalString } from "@/lib/money";
+import { currencyExponent, DEFAULT_LOCALE, formatMoney, minorToDecimalString } from "@/lib/money";
+import { formatDate, isIsoDate } from "@/lib/dates";
 import { toCsv } from "@/lib/ledger/csv-export";
 import { ActionButton, type ServerAction } from "./action-form";
 import { ArrearsFlag } from "./money-text";
@@ -35,10 +36,10 @@ function csvValue(col: ColumnSpec, v: Cell, exponent: number): string {
  * A sortable, filterable table of server data with CSV export of what is shown (all pages).
  * Search, sort, filter and page live in the URL, prefixed so that two tables can share a page.
  */
-export function DataTable({ rows, columns, currency, csvName, label, filter, prefix = "", pageSize = 25, emptyText = "Nothing to show.", rowAction }: {
+export function DataTable({ rows, columns, currency, locale, csvName, label, filter, prefix = "", pageSize = 25, emptyText = "Nothing to show.", rowAction }: {
   rows: Row[];
   columns: ColumnSpec[];
-  currency: string;
+  currency: string; locale?: string;
   csvName: string;
   label: string;
   filter?: { key: string; label: string; options: { value: string; label: string }[] };
@@ -75,9 +76,9 @@ export function DataTable({ rows, columns, currency, csvName, label, filter, pre
       sortingFn: c.kind === "money" ? "basic" : "alphanumeric",
       cell: (ctx) => {
         const v = ctx.getValue() as Cell;
-        if (c.kind === "money") return typeof v === "number" ? <span className="tabular font-mono whitespace-nowrap">{formatMoney(v, currency)}</span> : "";
+        if (c.kind === "money") return typeof v === "number" ? <span className="tabular font-mono whitespace-nowrap">{formatMoney(v, currency, locale)}</span> : "";
         if (c.kind === "flag") return <ArrearsFlag inArrears={!!v} />;
-        if (c.kind === "date") return <span className="tabular font-mono whitespace-nowrap">{v ?? "—"}</span>;
+        if (c.kind === "date") return typeof v === "string" && isIsoDate(v) ? <time className="tabular whitespace-nowrap" dateTime={v}>{formatDate(v, locale ?? DEFAULT_LOCALE)}</time> : <span className="tabular whitespace-nowrap">{v ?? "—"}</span>;
         const href = c.hrefKey ? ctx.row.original[c.hrefKey] : null;
         if (c.kind === "link" && typeof href === "string") return <Link href={href}>{String(v ?? "")}</Link>;
         return v === null || v === undefined ? "—" : String(v);
@@ -97,7 +98,7 @@ export function DataTable({ rows, columns, currency, csvName, label, filter, pre
       });
     }
     return base;
-  }, [columns, currency, rowAction]);
+  }, [columns, currency, locale, rowAction]);
 
   const table = useReactTable({
     data,

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import type { Db } from "@/db/client";
 import type { Club } from "@/db/schema";
-import { memberArrears } from "@/lib/ledger/arrears";
+import { memberArrears } from "@/db/queries/money-arrears";
 import { ArrearsFlag, Money, balanceWords } from "./money-text";
 
 /** The club home's "Your account" tile: balance, standing and the way to pay. */
@@ -10,7 +10,7 @@ export function HomeAccount({ db, club, userId, today }: { db: Db; club: Club; u
   return (
     <article className="card">
       <h2 className="text-lg font-bold"><Link href={`/clubs/${club.slug}/account`}>Your account</Link></h2>
-      <p className="mt-1 text-2xl font-bold"><Money minor={status.balanceMinor} currency={club.currency} credit /></p>
+      <p className="mt-1 text-2xl font-bold"><Money minor={status.balanceMinor} currency={club.currency} locale={club.locale} credit /></p>
       <p className="text-ink-700">{balanceWords(status.balanceMinor)}</p>
       <p className="mt-2"><ArrearsFlag inArrears={status.inArrears} /></p>
       <p className="mt-2 text-sm"><Link href={`/clubs/${club.slug}/account`}>{status.balanceMinor > 0 ? "Statements and pay by card" : "Statements and activity"}</Link></p>

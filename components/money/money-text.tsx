@@ -1,8 +1,8 @@
 import { formatMoney } from "@/lib/money";
 
 /** An amount in the club's currency, tabular; negative balances read as credits. */
-export function Money({ minor, currency, credit = false }: { minor: number; currency: string; credit?: boolean }) {
-  const text = formatMoney(credit ? Math.abs(minor) : minor, currency);
+export function Money({ minor, currency, locale, credit = false }: { minor: number; currency: string; locale?: string; credit?: boolean }) {
+  const text = formatMoney(credit ? Math.abs(minor) : minor, currency, locale);
   return <span className="tabular font-mono whitespace-nowrap">{text}{credit && minor < 0 ? " credit" : ""}</span>;
 }
 

@@ -53,12 +53,12 @@ function compute(v: RateInputs, currency: string) {
 }
 
 /** Break-even hourly rate: fixed ÷ hours + variable per hour + engine reserve (overhaul ÷ TBO). */
-export function RateCalculator({ slug, currency, unit, profiles, canSave }: { slug: string; currency: string; unit: string; profiles: RateInputs[]; canSave: boolean }) {
+export function RateCalculator({ slug, currency, locale, unit, profiles, canSave }: { slug: string; currency: string; locale?: string; unit: string; profiles: RateInputs[]; canSave: boolean }) {
   const [values, setValues] = useState<RateInputs>(profiles[0] ?? { name: "", fixedAnnualCosts: "", expectedHours: "300", fuelBurn: "8.5", fuelPrice: "", oilPerHour: "", maintenanceReserve: "", overhaulCost: "", tboHours: "2000" });
   const form = useFormAction(saveRateProfile);
   const { state } = form;
   const result = useMemo(() => compute(values, currency), [values, currency]);
-  const money = (m: number) => formatMoney(m, currency);
+  const money = (m: number) => formatMoney(m, currency, locale);
   const major = (m: number) => Number(minorToDecimalString(m, currencyExponent(currency)));
   return (
     <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">

@@ -14,12 +14,12 @@ import { PeriodReportPanel } from "./period-report";
 type Data = ReconciliationWorkspace;
 const KIND_WORDS: Record<string, string> = { exact: "same amount and date", reference: "same reference", payout: "card payout", manual: "matched by hand", booked: "posted from the statement" };
 
-function MatchForm({ slug, line, data, currency }: { slug: string; line: WorkspaceLine; data: Data; currency: string }) {
+function MatchForm({ slug, line, data, currency, locale }: { slug: string; line: WorkspaceLine; data: Data; currency: string; locale?: string }) {
   const form = useFormAction(matchBankLine);
   const { state } = form;
   const candidates = [
     ...data.openBook.map((b) => ({ id: b.id, date: b.date, amountMinor: b.amountMinor, text: `${b.memo}${b.reference ? ` (${b.reference})` : ""}` })),
-    ...data.openPayouts.map((p) => ({ id: p.id, date: p.date, amountMinor: p.amountMinor, text: `Card payout ${p.payoutId}: ${p.carried} payments, ${formatMoney(p.feeMinor, currency)} fees` })),
+    ...data.openPayouts.map((p) => ({ id: p.id, date: p.date, amountMinor: p.amountMinor, text: `Card payout ${p.payoutId}: ${p.carried} payments, ${formatMoney(p.feeMinor, currency, locale)} fees` })),
   ]
     .filter((c) => Math.sign(c.amountMinor) === Math.sign(line.amountMinor))
     .sort((a, b) => Math.abs(daysBetween(a.date, line.date)) - Math.abs(daysBetween(b.date, line.date)))
@@ -30,11 +30,11 @@ function MatchForm({ slug, line, data, currency }: { slug: string; line: Workspa
       <input type="hidden" name="bankLineId" value={line.id} />
       {candidates.length === 0 ? <p className="text-sm text-ink-500">Nothing open in the books with this sign.</p> : (
         <fieldset>
-          <legend className="field-label">Book items that make up {formatMoney(line.amountMinor, currency)} (choose one or several)</legend>
+          <legend className="field-label">Book items that make up {formatMoney(line.amountMinor, currency, locale)} (choose one or several)</legend>
           {candidates.map((c) => (
             <label key={c.id} className="flex items-start gap-2 py-1 text-sm">
               <input type="checkbox" name="bookIds[]" value={c.id} className="mt-1 size-4" />
-              <span><span className="font-mono tabular">{c.date}</span> · {c.text} · <span className="font-mono tabular">{formatMoney(c.amountMinor, currency)}</span></span>
+              <span><span className="font-mono tabular">{c.date}</span> · {c.text} · <span className="font-mono tabular">{formatMoney(c.amountMinor, currency, locale)}</span></span>
             </label>
           ))}
         </fieldset>
@@ -72,18 +72,18 @@ function BookForm({ slug, line, accounts }: { slug: string; line: WorkspaceLine;
   );
 }
 
-function LineRow({ slug, line, data, currency, locked }: { slug: string; line: WorkspaceLine; data: Data; currency: string; locked: boolean }) {
+function LineRow({ slug, line, data, currency, locale, locked }: { slug: string; line: WorkspaceLine; data: Data; currency: string; locale?: string; locked: boolean }) {
   const status = line.match ? `Matched: ${KIND_WORDS[line.match.kind] ?? line.match.kind}` : line.ignored ? "Set aside" : "Open";
   const shape = line.match ? "■" : line.ignored ? "◇" : "□";
   return (
     <li className="border-t border-sand-200 py-3 first:border-t-0">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <span className="min-w-0"><span className="font-mono tabular">{line.date}</span> · <span className="break-words">{line.description}</span>{line.reference ? <span className="text-ink-500"> · {line.reference}</span> : null}</span>
-        <span className="flex items-baseline gap-3"><span className="font-mono font-bold tabular">{formatMoney(line.amountMinor, currency)}</span><span className="text-sm"><span aria-hidden="true">{shape} </span>{status}</span></span>
+        <span className="flex items-baseline gap-3"><span className="font-mono font-bold tabular">{formatMoney(line.amountMinor, currency, locale)}</span><span className="text-sm"><span aria-hidden="true">{shape} </span>{status}</span></span>
       </div>
       {line.match ? (
         <ul className="mt-1 text-sm text-ink-700">
-          {line.match.items.map((i) => <li key={i.journalLineId}>↳ {i.date} · {i.memo} · <span className="font-mono tabular">{formatMoney(i.amountMinor, currency)}</span></li>)}
+          {line.match.items.map((i) => <li key={i.journalLineId}>↳ {i.date} · {i.memo} · <span className="font-mono tabular">{formatMoney(i.amountMinor, currency, locale)}</span></li>)}
         </ul>
       ) : null}
       {!locked ? (
@@ -92,7 +92,7 @@ function LineRow({ slug, line, data, currency, locked }: { slug: string; line: W
           {line.ignored ? <ActionButton action={ignoreLine} slug={slug} hidden={{ bankLineId: line.id, ignored: "false" }} label="Bring back" /> : null}
           {!line.match && !line.ignored ? (
             <>
-              <details className="w-full rounded border border-sand-300 bg-sand-50 p-2"><summary className="cursor-pointer text-sm font-bold text-fin-600">Match by hand…</summary><MatchForm slug={slug} line={line} data={data} currency={currency} /></details>
+              <details className="w-full rounded border border-sand-300 bg-sand-50 p-2"><summary className="cursor-pointer text-sm font-bold text-fin-600">Match by hand…</summary><MatchForm slug={slug} line={line} data={data} currency={currency} locale={locale} /></details>
               <details className="w-full rounded border border-sand-300 bg-sand-50 p-2"><summary className="cursor-pointer text-sm font-bold text-fin-600">Not in the books: post it…</summary><BookForm slug={slug} line={line} accounts={data.bookableAccounts} /></details>
               <ActionButton action={ignoreLine} slug={slug} hidden={{ bankLineId: line.id, ignored: "true" }} label="Set aside" />
             </>
@@ -104,7 +104,7 @@ function LineRow({ slug, line, data, currency, locked }: { slug: string; line: W
 }
 
 /** The reconciliation of one statement; refreshes itself so payouts that arrive meanwhile show up. */
-export function ReconcileWorkspace({ slug, currency, initial, renderedAt }: { slug: string; currency: string; initial: Data; renderedAt: number }) {
+export function ReconcileWorkspace({ slug, currency, locale, initial, renderedAt }: { slug: string; currency: string; locale?: string; initial: Data; renderedAt: number }) {
   const id = initial.statement.id;
   const { data } = useQuery({
     queryKey: ["reconciliation", slug, id, renderedAt],
@@ -126,11 +126,11 @@ export function ReconcileWorkspace({ slug, currency, initial, renderedAt }: { sl
           {!locked && open > 0 ? <ActionButton action={runAutoMatch} slug={slug} hidden={{ statementId: id }} label="Match automatically" pendingText="Matching…" /> : null}
         </div>
         <ul aria-label="Statement lines">
-          {data.lines.map((l) => <LineRow key={l.id} slug={slug} line={l} data={data} currency={currency} locked={locked} />)}
+          {data.lines.map((l) => <LineRow key={l.id} slug={slug} line={l} data={data} currency={currency} locale={locale} locked={locked} />)}
         </ul>
       </section>
       <div className="grid min-w-0 grid-cols-1 content-start gap-4">
-        <PeriodReportPanel report={data.report} currency={currency} />
+        <PeriodReportPanel report={data.report} currency={currency} locale={locale} />
         {data.period ? (
           <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800"><span aria-hidden="true">■ </span>Reconciled and locked through {data.period.periodEnd}.</p>
         ) : locked ? (
@@ -140,7 +140,7 @@ export function ReconcileWorkspace({ slug, currency, initial, renderedAt }: { sl
         ) : data.report.agrees ? (
           <ActionButton action={lockReconciledPeriod} slug={slug} hidden={{ statementId: id }} label="Lock this period" variant="primary" pendingText="Locking…" confirm={`Lock the books through ${data.statement.periodEnd}? Nothing can be posted on or before that day afterwards.`} />
         ) : (
-          <p className="rounded border border-ask-600 bg-ask-100 px-3 py-2 text-sm text-ask-800"><span aria-hidden="true">◆ </span>The two sides differ by {formatMoney(data.report.differenceMinor, currency)}. Match, post or set aside lines until they agree; then the period can be locked.</p>
+          <p className="rounded border border-ask-600 bg-ask-100 px-3 py-2 text-sm text-ask-800"><span aria-hidden="true">◆ </span>The two sides differ by {formatMoney(data.report.differenceMinor, currency, locale)}. Match, post or set aside lines until they agree; then the period can be locked.</p>
         )}
       </div>
     </div>

@@ -41,10 +41,10 @@ export function PeriodPicker({ fields, presets, errors }: {
   );
 }
 
-export function ReportTable({ caption, lines, currency, groups, totals }: {
+export function ReportTable({ caption, lines, currency, locale, groups, totals }: {
   caption: string;
   lines: ReportLine[];
-  currency: string;
+  currency: string; locale?: string;
   groups: ReportLine["type"][];
   totals: { label: string; minor: number; strong?: boolean }[];
 }) {
@@ -63,7 +63,7 @@ export function ReportTable({ caption, lines, currency, groups, totals }: {
                 <tr key={l.code} className="border-t border-sand-200">
                   <td className="py-1 font-mono text-ink-500">{l.code}</td>
                   <td className="py-1">{l.name}</td>
-                  <td className="py-1 text-right"><Money minor={l.amountMinor} currency={currency} /></td>
+                  <td className="py-1 text-right"><Money minor={l.amountMinor} currency={currency} locale={locale} /></td>
                 </tr>
               ))
             )}
@@ -75,7 +75,7 @@ export function ReportTable({ caption, lines, currency, groups, totals }: {
           <tr key={t.label} className={`border-t border-sand-300 ${t.strong ? "font-bold" : ""}`}>
             <td />
             <td className="py-1">{t.label}</td>
-            <td className="py-1 text-right"><Money minor={t.minor} currency={currency} /></td>
+            <td className="py-1 text-right"><Money minor={t.minor} currency={currency} locale={locale} /></td>
           </tr>
         ))}
       </tfoot>

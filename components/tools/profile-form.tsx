@@ -4,13 +4,15 @@ import { useFormAction } from "@/components/ui/use-form-action";
 import { Field, SelectField, TextAreaField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { saveWeightBalanceProfileAction } from "@/lib/actions/tools/save-weight-balance-profile";
+import { DEFAULT_LOCALE } from "@/lib/money/format";
+import { fuelDensityNote } from "@/lib/performance";
 
 export type ProfileDefaults = {
   emptyWeight: string; emptyArm: string; maxTakeoffWeight: string; maxLandingWeight: string; fuelKind: string; burnPerHour: string;
   stations: string; tanks: string; envelopeNormal: string; envelopeUtility: string; source: string;
 };
 
-export function ProfileForm({ slug, aircraftId, defaults, units }: { slug: string; aircraftId: string; defaults: ProfileDefaults; units: { weight: string; arm: string; fuel: string } }) {
+export function ProfileForm({ slug, aircraftId, defaults, units, unitSystem = "imperial", locale = DEFAULT_LOCALE }: { slug: string; aircraftId: string; defaults: ProfileDefaults; units: { weight: string; arm: string; fuel: string }; unitSystem?: "imperial" | "metric"; locale?: string }) {
   const form = useFormAction(saveWeightBalanceProfileAction);
   const { state } = form;
   const e = state.fieldErrors;
@@ -24,8 +26,8 @@ export function ProfileForm({ slug, aircraftId, defaults, units }: { slug: strin
         <Field label={`Maximum takeoff weight (${units.weight})`} name="maxTakeoffWeight" inputMode="decimal" defaultValue={defaults.maxTakeoffWeight} errors={e.maxTakeoffWeight} />
         <Field label={`Maximum landing weight (${units.weight}, if any)`} name="maxLandingWeight" inputMode="decimal" defaultValue={defaults.maxLandingWeight} errors={e.maxLandingWeight} />
         <SelectField label="Fuel" name="fuelKind" defaultValue={defaults.fuelKind} errors={e.fuelKind}>
-          <option value="avgas">Avgas (6 lb per US gal)</option>
-          <option value="jet">Jet fuel (6.7 lb per US gal)</option>
+          <option value="avgas">{`Avgas (${fuelDensityNote("avgas", unitSystem, locale)})`}</option>
+          <option value="jet">{`Jet fuel (${fuelDensityNote("jet", unitSystem, locale)})`}</option>
         </SelectField>
         <Field label={`Cruise burn (${units.fuel} per hour)`} name="burnPerHour" inputMode="decimal" defaultValue={defaults.burnPerHour} errors={e.burnPerHour} />
       </div>

@@ -11,7 +11,7 @@ import { aircraftStatus, type AircraftStatusResult } from "@/lib/airworthiness";
 import type { FleetRecords } from "@/lib/fleet/flight-line";
 import { buildStatusInput, maintenanceHours } from "@/lib/fleet/status-input";
 import type { FleetAircraftRecord } from "@/lib/fleet/types";
-import { memberArrears } from "@/lib/ledger/arrears";
+import { memberArrears } from "@/db/queries/money-arrears";
 import { formatMoney } from "@/lib/money";
 import { normalizeTypeGroup } from "@/lib/safety/audience";
 import { getMemberCurrency } from "./currency";
@@ -100,7 +100,7 @@ export function loadGuardInput(
       medicalLastDay: item("medical")?.lastDay ?? null,
       passengerDayLastDay: item(`passenger_day:${classKey}`)?.lastDay ?? null,
       passengerNightLastDay: item(`passenger_night:${classKey}`)?.lastDay ?? null,
-      arrears: { inArrears: arrears.inArrears, owedText: formatMoney(arrears.balanceMinor, club.currency), oldestDueDate: arrears.oldestDueDate },
+      arrears: { inArrears: arrears.inArrears, owedText: formatMoney(arrears.balanceMinor, club.currency, club.locale), oldestDueDate: arrears.oldestDueDate },
     },
     withInstructor: args.withInstructor,
     carryingPassengers: args.carryingPassengers,

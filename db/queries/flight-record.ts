@@ -6,9 +6,9 @@ import { findNeighbourFlights } from "@/db/queries/fleet-flights";
 import { recordSquawkEvent } from "@/db/queries/fleet-squawks";
 import { roundHours } from "@/lib/airworthiness";
 import { advanceMeters, checkBetween, checkMeterContinuity } from "@/lib/fleet/continuity";
-import type { DbLike } from "@/lib/ledger/accounts";
-import { postFlightCharge, type FlightChargePosting, type PostingContext } from "@/lib/ledger/flight-charges";
-import { lockedThrough } from "@/lib/ledger/post-entry";
+import type { DbLike } from "@/db/queries/money-accounts";
+import { postFlightCharge, type FlightChargePosting, type PostingContext } from "@/db/queries/money-flight-charges";
+import { lockedThrough } from "@/db/queries/money-post-entry";
 import { firstOpenDay } from "@/lib/money/open-period";
 
 // The one write path of a flight. The flight log ("Log a flight") and booking check-in both

@@ -2,8 +2,8 @@ import "server-only";
 import { and, asc, eq, inArray, isNull, sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { bills, ledgerAccounts, moneySettings, uploads, users, type BillRow } from "@/db/schema";
-import { accountId } from "@/lib/ledger/accounts";
-import { openPostingDate, postEntry } from "@/lib/ledger/post-entry";
+import { accountId } from "@/db/queries/money-accounts";
+import { openPostingDate, postEntry } from "@/db/queries/money-post-entry";
 import { billEntryLines, billNeedsApproval, billPaymentLines } from "@/lib/money/bills";
 import { lockedPeriodNote } from "@/lib/money/open-period";
 

@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, isNull, sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { ledgerAccounts } from "@/db/schema";
-import { ensureChart } from "@/lib/ledger/accounts";
+import { ensureChart } from "@/db/queries/money-accounts";
 import { chartChangeProblems, chartDeleteProblem, SYSTEM_ACCOUNT_CODES, type AccountType, type ChartAccountRow, type ChartChange } from "@/lib/money";
 
 // The club's chart of accounts as the treasurer edits it: every account except the members'

@@ -2,7 +2,7 @@ import "server-only";
 import { and, desc, eq, gte, inArray, lte, sql } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { journalEntries, journalLines, ledgerAccounts, users } from "@/db/schema";
-import { RECEIVABLES } from "@/lib/ledger/accounts";
+import { RECEIVABLES } from "@/db/queries/money-accounts";
 import { presentBalance, type AccountType } from "@/lib/money";
 
 export type JournalRow = {

@@ -3,7 +3,7 @@ import { and, desc, eq, inArray, sql } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { bankLines, bankStatements, journalEntries, journalLines, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
 import { addDays } from "@/lib/dates";
-import { lockedThrough } from "@/lib/ledger/post-entry";
+import { lockedThrough } from "@/db/queries/money-post-entry";
 import { bookableAccounts } from "./money-chart";
 import { openPayouts, periodReport, unmatchedBookLines } from "@/lib/ledger/reconciliation";
 

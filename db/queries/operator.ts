@@ -6,10 +6,10 @@ import { isoDateInTimeZone } from "@/lib/dates";
 import type { AircraftStatus } from "@/lib/airworthiness";
 import { listClubsByIds, listOperatorClubIds } from "./clubs";
 import { getFlightLine } from "./fleet-status";
-import { ageingByMember } from "./money-accounts";
+import { ageingByMember } from "./money-member-accounts";
 
 export type ClubSummary = {
-  id: string; slug: string; name: string; timeZone: string; currency: string; unitSystem: string; activeMembers: number; admins: number;
+  id: string; slug: string; name: string; timeZone: string; currency: string; locale: string; unitSystem: string; activeMembers: number; admins: number;
   fleet: Record<AircraftStatus, number>;
   receivables: { totalMinor: number; over30Minor: number; over90Minor: number };
 };
@@ -40,7 +40,7 @@ export function listOperatorClubSummaries(db: Db, operator: { id: string; platfo
     for (const entry of getFlightLine(db, c).entries) fleet[entry.status] += 1;
     const { totals } = ageingByMember(db, c.id, isoDateInTimeZone(new Date(), c.timeZone));
     return {
-      id: c.id, slug: c.slug, name: c.name, timeZone: c.timeZone, currency: c.currency, unitSystem: c.unitSystem,
+      id: c.id, slug: c.slug, name: c.name, timeZone: c.timeZone, currency: c.currency, locale: c.locale, unitSystem: c.unitSystem,
       activeMembers: members.find((m) => m.clubId === c.id)?.n ?? 0,
       admins: adminRows.filter((m) => m.clubId === c.id && m.roles.includes("admin")).length,
       fleet,

@@ -11,6 +11,8 @@ export const clubs = sqliteTable("clubs", {
   timeZone: text("time_zone").notNull(),
   currency: text("currency").notNull(),
   unitSystem: text("unit_system", { enum: ["imperial", "metric"] }).notNull(),
+  /** BCP 47 tag money, numbers and dates are formatted for (en-US, de-DE, fr-FR …). */
+  locale: text("locale").notNull().default("en-US"),
   settings: text("settings", { mode: "json" }).$type<ClubSettings>().notNull(),
   archivedAt: integer("archived_at", { mode: "timestamp_ms" }),
   ...timestamps(),

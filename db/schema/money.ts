@@ -5,6 +5,7 @@ import { users } from "./auth";
 import { clubs } from "./clubs";
 import { id, timestamps } from "./columns";
 import { uploads } from "./uploads";
+import { DUES_PERIODS, MEMBER_CATEGORIES } from "@/lib/money/dues";
 
 // Money: a double-entry journal per club in integer minor units of the club's currency.
 // journal_entries and journal_lines are append-only (triggers in the migration): a mistake is
@@ -90,8 +91,7 @@ export const journalLines = sqliteTable(
   ],
 );
 
-export const DUES_PERIODS = ["monthly", "quarterly", "annual"] as const;
-export const MEMBER_CATEGORIES = ["full", "student", "family", "inactive"] as const;
+export { DUES_PERIODS, MEMBER_CATEGORIES };
 
 export const duesPlans = sqliteTable(
   "dues_plans",

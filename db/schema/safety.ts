@@ -5,15 +5,9 @@ import { clubs } from "./clubs";
 import { id, timestamps } from "./columns";
 import { aircraft } from "./fleet";
 import { uploads } from "./uploads";
+import { BULLETIN_AUDIENCES, BULLETIN_URGENCIES, DOCUMENT_KINDS, REPORT_STATUSES } from "@/lib/safety/kinds";
 
-export const BULLETIN_URGENCIES = ["routine", "priority", "urgent"] as const;
-export const BULLETIN_AUDIENCES = ["everyone", "type_group", "instructors"] as const;
-export const REPORT_STATUSES = ["received", "reviewing", "action_taken", "closed"] as const;
-export const DOCUMENT_KINDS = ["pilot_certificate", "flight_review", "renters_insurance", "club_agreement"] as const;
-export type BulletinUrgency = (typeof BULLETIN_URGENCIES)[number];
-export type BulletinAudience = (typeof BULLETIN_AUDIENCES)[number];
-export type ReportStatus = (typeof REPORT_STATUSES)[number];
-export type DocumentKind = (typeof DOCUMENT_KINDS)[number];
+export { BULLETIN_AUDIENCES, BULLETIN_URGENCIES, DOCUMENT_KINDS, REPORT_STATUSES, type BulletinAudience, type BulletinUrgency, type DocumentKind, type ReportStatus } from "@/lib/safety/kinds";
 
 /**
  * One row per version. A published row is never edited: a revision is a new row in the same

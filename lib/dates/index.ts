@@ -111,3 +111,38 @@ export function isValidTimeZone(timeZone: string): boolean {
     return false;
   }
 }
+
+// Dates people read, in the club's locale (ECMA-402 Intl.DateTimeFormat). A calendar date is a
+// day, not an instant: it is formatted at noon UTC in UTC, so no time zone can move it a day.
+export type DateStyle = "short" | "medium" | "long";
+const displayFormats = new Map<string, Intl.DateTimeFormat>();
+
+function displayFormat(key: string, locale: string, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
+  let f = displayFormats.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat(locale, options);
+    displayFormats.set(key, f);
+  }
+  return f;
+}
+
+/** "2026-12-01" → "Dec 1, 2026" (en-US), "01.12.2026" (de-DE), "1 déc. 2026" (fr-FR). */
+export function formatDate(date: IsoDate, locale: string, style: DateStyle = "medium"): string {
+  const { year, month, day } = parseIsoDate(date);
+  const f = displayFormat(`d|${locale}|${style}`, locale, { dateStyle: style, timeZone: "UTC" });
+  return f.format(new Date(Date.UTC(year, month - 1, day, 12)));
+}
+
+/** "2026-04" → "April 2026" (en-US), "April 2026" (de-DE), "avril 2026" (fr-FR). */
+export function formatMonth(month: string, locale: string): string {
+  const m = /^(\d{4})-(\d{2})$/.exec(month);
+  if (!m) throw new RangeError(`Not a month: "${month}" (use YYYY-MM)`);
+  const f = displayFormat(`m|${locale}`, locale, { month: "long", year: "numeric", timeZone: "UTC" });
+  return f.format(new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, 15, 12)));
+}
+
+/** An instant as the club's date and time, in its time zone and locale: "Dec 1, 2026, 6:05 PM". */
+export function formatDateTime(instant: Date, timeZone: string, locale: string): string {
+  const f = displayFormat(`dt|${locale}|${timeZone}`, locale, { dateStyle: "medium", timeStyle: "short", timeZone });
+  return f.format(instant);
+}

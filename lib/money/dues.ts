@@ -56,3 +56,7 @@ export function duesForMember(input: DuesForMemberInput): number {
   if (compareIsoDates(input.joinedOn, end) > 0) return 0;
   return prorate(input.amountMinor, start, end, input.joinedOn);
 }
+
+/** How often a dues plan bills, and the member categories a plan can be for (the schema's enums). */
+export const DUES_PERIODS = ["monthly", "quarterly", "annual"] as const;
+export const MEMBER_CATEGORIES = ["full", "student", "family", "inactive"] as const;

@@ -31,16 +31,37 @@ export function minorToDecimalString(minor: number, exponent: number): string {
  * Formats minor units in the currency with the locale's conventions. The amount goes to Intl
  * as a decimal string, so large balances are never bent by float conversion.
  */
-export function formatMoney(minor: number, currency: string, locale = "en-US"): string {
-  const exponent = currencyExponent(currency);
-  const format = new Intl.NumberFormat(locale, {
-    style: "currency",
-    currency: currency.toUpperCase(),
-    minimumFractionDigits: exponent,
-    maximumFractionDigits: exponent,
-  });
-  // The ES2023 typings accept a decimal string (Intl.NumberFormat v3, Node ≥ 19).
-  return format.format(minorToDecimalString(minor, exponent) as `${number}`);
+export function formatMoney(minor: number, currency: string, locale: string = DEFAULT_LOCALE): string {
+  return moneyFormatter(currency, locale)(minor);
+}
+
+/** The locale a club without one formats for (and the fallback for a tag the runtime lacks). */
+export const DEFAULT_LOCALE = "en-US";
+
+/** What every money display needs to know about the club: its currency and its locale. */
+export type MoneyLocale = { currency: string; locale?: string | null };
+
+/** The club's amounts as text: clubMoney(club)(289306) → "2.893,06 €" for a de-DE euro club. */
+export function clubMoney(club: MoneyLocale): (minor: number) => string {
+  return moneyFormatter(club.currency, club.locale || DEFAULT_LOCALE);
+}
+
+const numberFormats = new Map<string, Intl.NumberFormat>();
+
+/**
+ * A plain number in the locale's digits and separators (ECMA-402 Intl.NumberFormat), at most
+ * `maximumFractionDigits` decimals (1 unless given): 1234.56 → "1,234.6" (en-US), "1.234,6" (de-DE).
+ */
+export function formatNumber(value: number, locale: string = DEFAULT_LOCALE, options: { minimumFractionDigits?: number; maximumFractionDigits?: number } = {}): string {
+  const min = options.minimumFractionDigits ?? 0;
+  const max = Math.max(min, options.maximumFractionDigits ?? 1);
+  const key = `${locale}|${min}|${max}`;
+  let nf = numberFormats.get(key);
+  if (!nf) {
+    nf = new Intl.NumberFormat(locale, { minimumFractionDigits: min, maximumFractionDigits: max });
+    numberFormats.set(key, nf);
+  }
+  return nf.format(value);
 }
 
 /**
@@ -61,4 +82,21 @@ export function toMinorUnits(major: number | string, currency: string): number {
   const value = Number(m[1] === "-" ? -units : units);
   if (!Number.isSafeInteger(value)) throw new RangeError(`${text} is too large`);
   return value === 0 ? 0 : value;
+}
+
+// An Intl.NumberFormat per call costs more than the rest of a billing run for thousands of
+// statements: one formatter per currency and locale, kept.
+const formatters = new Map<string, (minor: number) => string>();
+
+export function moneyFormatter(currency: string, locale: string = DEFAULT_LOCALE): (minor: number) => string {
+  const key = `${locale}|${currency.toUpperCase()}`;
+  let f = formatters.get(key);
+  if (!f) {
+    const exponent = currencyExponent(currency);
+    const nf = new Intl.NumberFormat(locale, { style: "currency", currency: currency.toUpperCase(), minimumFractionDigits: exponent, maximumFractionDigits: exponent });
+    // The amount goes to Intl as a decimal string (Intl.NumberFormat v3, Node ≥ 19), exact at any size.
+    f = (minor: number) => nf.format(minorToDecimalString(minor, exponent) as `${number}`);
+    formatters.set(key, f);
+  }
+  return f;
 }

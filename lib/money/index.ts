@@ -31,7 +31,8 @@ export {
   type ChartAccountRow,
   type ChartChange,
 } from "./chart";
-export { currencyExponent, formatMoney, minorToDecimalString, toMinorUnits } from "./format";
+export { clubMoney, currencyExponent, DEFAULT_LOCALE, formatMoney, formatNumber, minorToDecimalString, moneyFormatter, toMinorUnits, type MoneyLocale } from "./format";
+export { CLUB_LOCALES, defaultLocaleFor, isClubLocale, paperSizeFor, regionOf, type ClubLocaleTag, type PaperSize } from "./locale";
 export {
   engineReservePerHour,
   hourlyRate,

@@ -1,6 +1,8 @@
 // Standard weights from the FAA Pilot's Handbook of Aeronautical Knowledge (FAA-H-8083-25),
 // Weight and Balance chapter; unit conversions exact by definition of the US gallon
 // (231 in³) and the international pound.
+import { formatNumber } from "@/lib/money/format";
+
 export const AVGAS_LB_PER_US_GAL = 6;
 export const JET_FUEL_LB_PER_US_GAL = 6.7;
 export const OIL_LB_PER_US_GAL = 7.5;
@@ -80,4 +82,14 @@ export function fuelEndurance(input: {
   // Exactly enough fuel is legal; the tolerance only absorbs floating-point rounding.
   const legal = usableFuel >= requiredFuel - 1e-9 * Math.max(1, requiredFuel);
   return { requiredFuel, reserveFuel, enduranceHours, marginMinutes, legal };
+}
+
+/**
+ * The standard fuel weight as a note in the club's own units and locale: "6 lb per US gallon"
+ * (imperial) or "0.72 kg per litre" (metric, the same density converted), digits per the locale.
+ */
+export function fuelDensityNote(kind: "avgas" | "jet", unitSystem: "imperial" | "metric", locale: string): string {
+  const lbPerGal = LB_PER_US_GAL[kind];
+  if (unitSystem === "metric") return `${formatNumber(kgFromLb(lbPerGal) / LITRES_PER_US_GAL, locale, { minimumFractionDigits: 2, maximumFractionDigits: 2 })} kg per litre`;
+  return `${formatNumber(lbPerGal, locale)} lb per US gallon`;
 }

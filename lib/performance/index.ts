@@ -26,6 +26,7 @@ export {
   fuelEndurance,
   fuelReserveMinutes,
   fuelWeight,
+  fuelDensityNote,
   kgFromLb,
   lbFromKg,
   litresFromUsGallons,

@@ -1,4 +1,4 @@
-import type { BulletinAudience } from "@/db/schema/safety";
+import type { BulletinAudience } from "./kinds";
 import type { Role } from "@/permissions/roles";
 
 export type AudienceCandidate = { userId: string; name: string | null; email: string; roles: readonly Role[] };

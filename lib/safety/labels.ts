@@ -1,4 +1,4 @@
-import type { BulletinAudience, BulletinUrgency, DocumentKind, ReportStatus } from "@/db/schema/safety";
+import type { BulletinAudience, BulletinUrgency, DocumentKind, ReportStatus } from "./kinds";
 
 // Words shown for each stored value. Status is never colour alone: each urgency and report state
 // also has a shape (components/safety/status-shapes.tsx).

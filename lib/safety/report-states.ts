@@ -1,4 +1,4 @@
-import type { ReportStatus } from "@/db/schema/safety";
+import type { ReportStatus } from "./kinds";
 
 // How a safety report moves. Forward one step or straight to closed; a closed report can be
 // reopened for review when something new comes to light. Nothing moves back silently: every

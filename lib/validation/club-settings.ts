@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { CLUB_LOCALES, isClubLocale } from "@/lib/money/locale";
 
 const guard = z.enum(["refuse", "warn"]);
 
@@ -75,3 +76,11 @@ export const homePositionSchema = z
       ctx.addIssue({ code: "custom", path: [path], message: "Enter both the latitude and the longitude, or clear both." });
     }
   });
+
+/** The club's locale: one of the tags the settings page offers (lib/money/locale.ts). */
+export const clubLocaleSchema = z.object({
+  locale: z
+    .string({ error: "Choose how the club writes money, numbers and dates." })
+    .trim()
+    .refine(isClubLocale, { error: `Choose one of the listed locales (${CLUB_LOCALES.slice(0, 3).map((l) => l.tag).join(", ")} …).` }),
+});

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { calendarDate, calendarMonth, recordId } from "./primitives";
 import { filesField } from "./fleet";
-import { DUES_PERIODS, MEMBER_CATEGORIES } from "@/db/schema/money";
+import { DUES_PERIODS, MEMBER_CATEGORIES } from "@/lib/money/dues";
 
 // Amounts are typed in major units ("95", "95.50") and turned into minor units of the club's
 // currency by the action (lib/actions/money/amounts.ts), which knows the currency.

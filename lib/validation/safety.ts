@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { BULLETIN_AUDIENCES, BULLETIN_URGENCIES, DOCUMENT_KINDS, REPORT_STATUSES } from "@/db/schema/safety";
+import { BULLETIN_AUDIENCES, BULLETIN_URGENCIES, DOCUMENT_KINDS, REPORT_STATUSES } from "@/lib/safety/kinds";
 import { isIsoDate } from "@/lib/dates";
 import { calendarDate, recordId } from "./primitives";
 import { CONTRIBUTING_FACTORS } from "@/lib/safety/labels";

@@ -5,7 +5,7 @@ import { openDatabase } from "@/db/client";
 import { clubs } from "@/db/schema";
 import { demoBankStatement } from "@/db/seed/money";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { monthOf, shiftMonthKey } from "@/lib/ledger/months";
+import { monthOf, shiftMonthKey } from "@/lib/money/months";
 import { minorToDecimalString } from "@/lib/money";
 import { expectNoHorizontalOverflow, newPage, paymentsUrl, screenshot, signIn } from "./harness";
 

@@ -30,7 +30,7 @@ import { bankStatements, emailOutbox, users } from "@/db/schema";
 import { emailStatement } from "@/lib/actions/money/email-statement";
 import { postAdjustment } from "@/lib/actions/money/post-adjustment";
 import { recordManualPayment } from "@/lib/actions/money/record-manual-payment";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { withClub } from "@/lib/server/api";
 import { authorizePage } from "@/lib/server/authorize";
 import { ConditionalSubjectError } from "@/permissions";

@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { bookings, inspectionCompletions, inspectionItems } from "@/db/schema";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { addDays, isoDateInTimeZone } from "@/lib/dates";
-import { postFlightCharge } from "@/lib/ledger/flight-charges";
+import { postFlightCharge } from "@/db/queries/money-flight-charges";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { localAt, makePilot, planeId, seedScenario, setGuards } from "./bookings-helpers";
 

@@ -12,7 +12,7 @@ import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { logFlight } from "@/lib/actions/fleet/log-flight";
 import { settleMeterGapAction } from "@/lib/actions/money/settle-meter-gap";
 import { addDays, isoDateInTimeZone } from "@/lib/dates";
-import { lockedThrough } from "@/lib/ledger/post-entry";
+import { lockedThrough } from "@/db/queries/money-post-entry";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { lockBooksThrough } from "./books-helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";

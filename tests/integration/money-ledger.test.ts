@@ -14,11 +14,11 @@ import { runBilling } from "@/lib/actions/money/run-billing";
 import { saveDuesPlan } from "@/lib/actions/money/save-dues-plan";
 import { saveMoneySettings } from "@/lib/actions/money/save-rates";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
-import { memberArrears } from "@/lib/ledger/arrears";
-import { memberBalance } from "@/lib/ledger/balances";
-import { LedgerError } from "@/lib/ledger/errors";
-import { postFlightCharge, reverseFlightCharge } from "@/lib/ledger/flight-charges";
-import { statementFor } from "@/lib/ledger/statements";
+import { memberArrears } from "@/db/queries/money-arrears";
+import { memberBalance } from "@/db/queries/money-member-balances";
+import { LedgerError } from "@/lib/money/errors";
+import { postFlightCharge, reverseFlightCharge } from "@/db/queries/money-flight-charges";
+import { statementFor } from "@/db/queries/money-statements";
 import { EMPTY, clubBySlug, db, form, seedOnce, signInAs } from "./helpers";
 
 const CLUB = "lakeshore-aero";

@@ -13,7 +13,7 @@ import { signPayload, startFakePaymentsServer, type FakePaymentsServer } from "@
 import { postAdjustment } from "@/lib/actions/money/post-adjustment";
 import { refundPayment } from "@/lib/actions/money/refund-payment";
 import { startCardPayment } from "@/lib/actions/money/start-card-payment";
-import { memberBalance } from "@/lib/ledger/balances";
+import { memberBalance } from "@/db/queries/money-member-balances";
 import { createPaymentsClient } from "@/lib/payments/provider";
 import { EMPTY, clubBySlug, db, expectRedirect, form, seedOnce, signInAs } from "./helpers";
 

@@ -9,7 +9,7 @@ import { importBankStatement } from "@/lib/actions/money/import-bank-statement";
 import { postAdjustment } from "@/lib/actions/money/post-adjustment";
 import { bookLine, ignoreLine, lockReconciledPeriod, matchBankLine, unmatchLine } from "@/lib/actions/money/reconcile-lines";
 import { recordManualPayment } from "@/lib/actions/money/record-manual-payment";
-import { recordCardPayment, recordPayoutShare } from "@/lib/ledger/card-payments";
+import { recordCardPayment, recordPayoutShare } from "@/db/queries/money-card-payments";
 import { periodReport } from "@/lib/ledger/reconciliation";
 import { EMPTY, clubBySlug, db, expectRedirect, form, seedOnce, signInAs } from "./helpers";
 

@@ -47,7 +47,7 @@ export const checkInBooking = clubAction({
     });
     const flag = entry.continuity === "ok" ? "" : ` The meters do not continue from the previous flight: flagged on this flight with your explanation, for maintenance and the treasurer (${entry.continuityText}).`;
     const charged = charge.entryId
-      ? `${formatMoney(charge.netMinor, club.currency)} charged to the account${entry.chargedOn !== flownOn ? ` on ${entry.chargedOn}, the first open day (${flownOn} is in a locked period)` : ""}`
+      ? `${formatMoney(charge.netMinor, club.currency, club.locale)} charged to the account${entry.chargedOn !== flownOn ? ` on ${entry.chargedOn}, the first open day (${flownOn} is in a locked period)` : ""}`
       : "no charge posted: the aircraft has no hourly rate (the treasurer sees the flight as uncharged)";
     return {
       message: `Checked in: flight logged and ${charged}.${entry.squawkId ? " Your squawk is with maintenance." : ""}${flag}`,

@@ -1,7 +1,7 @@
 import "server-only";
 import { FlightRefused } from "@/db/queries/flight-record";
 import { ActionError } from "@/lib/actions/action-state";
-import { isLedgerError } from "@/lib/ledger/errors";
+import { isLedgerError } from "@/lib/money/errors";
 
 // The flight log and check-in write a flight through one function, recordFlight in
 // db/queries/flight-record.ts (the flight, its meters, its squawk and its charge). This turns

@@ -52,7 +52,7 @@ export const logFlight = clubAction({
 
     const flagged = entry.continuity !== "ok";
     const charged = charge.entryId
-      ? ` ${formatMoney(charge.netMinor, club.currency)} charged to the pilot's account${entry.chargedOn !== input.flownOn ? ` on ${entry.chargedOn}, the first open day (${input.flownOn} is in a locked period)` : ""}.`
+      ? ` ${formatMoney(charge.netMinor, club.currency, club.locale)} charged to the pilot's account${entry.chargedOn !== input.flownOn ? ` on ${entry.chargedOn}, the first open day (${input.flownOn} is in a locked period)` : ""}.`
       : " No charge posted: the aircraft has no hourly rate (the treasurer sees the flight as uncharged).";
     return {
       message: flagged

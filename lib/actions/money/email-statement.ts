@@ -1,7 +1,7 @@
 "use server";
 import { clubAction } from "@/lib/actions/create-action";
 import { kickOutbox } from "@/lib/email/runner";
-import { issueStatements } from "@/lib/ledger/statements";
+import { issueStatements } from "@/db/queries/money-statements";
 import { writeAudit } from "@/lib/server/audit";
 import { emailStatementSchema } from "@/lib/validation/money";
 import { canOn } from "@/permissions";

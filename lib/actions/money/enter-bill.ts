@@ -29,7 +29,7 @@ export const enterBillAction = clubAction({
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.bill.enter", subjectType: "Bill", subjectId: bill.id, after: { ...input, attachment: stored.map((f) => f.originalName), amountMinor, status: bill.status, entryId: bill.entryId } });
       const waits = bill.status === "awaiting_approval";
       return {
-        message: `Bill from ${bill.vendor} for ${formatMoney(amountMinor, club.currency)} entered${waits ? `; above ${formatMoney(billApprovalOverMinor(tx, club.id), club.currency)}, it waits for a second officer's approval before it is paid` : " and ready to pay"}.`,
+        message: `Bill from ${bill.vendor} for ${formatMoney(amountMinor, club.currency, club.locale)} entered${waits ? `; above ${formatMoney(billApprovalOverMinor(tx, club.id), club.currency, club.locale)}, it waits for a second officer's approval before it is paid` : " and ready to pay"}.`,
         data: { billId: bill.id, status: bill.status },
         refresh: true,
       };

@@ -1,5 +1,5 @@
 import { ActionError } from "@/lib/actions/action-state";
-import { isLedgerError } from "@/lib/ledger/errors";
+import { isLedgerError } from "@/lib/money/errors";
 
 /** Runs ledger work; a refusal by the ledger becomes the action's message (and field error). */
 export function ledger<T>(work: () => T): T {

@@ -22,6 +22,6 @@ export const payBillAction = clubAction({
     const entryId = ledger(() => payBill(tx, club.id, bill, user.id, input.paidOn));
     if (!entryId) throw new ActionError("Someone else paid this bill a moment ago.", {}, "conflict");
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.bill.pay", subjectType: "Bill", subjectId: bill.id, before: { status: bill.status }, after: { status: "paid", paidOn: input.paidOn, entryId } });
-    return { message: `Paid: ${formatMoney(bill.amountMinor, club.currency)} to ${bill.vendor} from the bank on ${input.paidOn}. Match it to the bank statement in reconciliation.`, refresh: true };
+    return { message: `Paid: ${formatMoney(bill.amountMinor, club.currency, club.locale)} to ${bill.vendor} from the bank on ${input.paidOn}. Match it to the bank statement in reconciliation.`, refresh: true };
   },
 });

@@ -1,8 +1,9 @@
 "use server";
 import { clubAction } from "@/lib/actions/create-action";
-import { accountId, memberAccountId } from "@/lib/ledger/accounts";
-import { postEntry } from "@/lib/ledger/post-entry";
-import { dueDateFor, getMoneySettings } from "@/lib/ledger/settings";
+import { accountId, memberAccountId } from "@/db/queries/money-accounts";
+import { postEntry } from "@/db/queries/money-post-entry";
+import { getMoneySettings } from "@/db/queries/money-settings";
+import { dueDateFor } from "@/lib/money/settings";
 import { writeAudit } from "@/lib/server/audit";
 import { adjustmentSchema } from "@/lib/validation/money";
 import { minorOf } from "./amounts";

@@ -73,6 +73,6 @@ export const lockReconciledPeriod = clubAction({
   run(tx, ctx, input) {
     const report = ledger(() => lockPeriod(tx, actor(ctx), input.statementId));
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.period.lock", subjectType: "BankStatement", subjectId: input.statementId, after: { periodEnd: report.periodEnd, statement: report.statementBalanceMinor, book: report.bookBalanceMinor } });
-    return { message: `Reconciled: ${formatMoney(report.adjustedBankBalanceMinor, ctx.club.currency)} on both sides. The books are locked through ${report.periodEnd}.`, refresh: true };
+    return { message: `Reconciled: ${formatMoney(report.adjustedBankBalanceMinor, ctx.club.currency, ctx.club.locale)} on both sides. The books are locked through ${report.periodEnd}.`, refresh: true };
   },
 });

@@ -2,10 +2,10 @@
 import { payments } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { kickOutbox } from "@/lib/email/runner";
-import { accountId, memberAccountId } from "@/lib/ledger/accounts";
-import { openPostingDate, postEntry } from "@/lib/ledger/post-entry";
+import { accountId, memberAccountId } from "@/db/queries/money-accounts";
+import { openPostingDate, postEntry } from "@/db/queries/money-post-entry";
 import { lockedPeriodNote } from "@/lib/money/open-period";
-import { queueReceipt } from "@/lib/ledger/receipts";
+import { queueReceipt } from "@/db/queries/money-receipts";
 import { writeAudit } from "@/lib/server/audit";
 import { manualPaymentSchema } from "@/lib/validation/money";
 import { minorOf } from "./amounts";

@@ -5,8 +5,8 @@ import { payments } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { kickOutbox } from "@/lib/email/runner";
-import { recordCardRefund } from "@/lib/ledger/card-payments";
-import { getPaymentsClient } from "@/lib/ledger/payments-client";
+import { recordCardRefund } from "@/db/queries/money-card-payments";
+import { getPaymentsClient } from "@/lib/payments/client";
 import { writeAudit } from "@/lib/server/audit";
 import { refundSchema } from "@/lib/validation/money";
 import { formatMoney } from "@/lib/money";
@@ -26,7 +26,7 @@ export const refundPayment = clubAction({
     if (payment.status !== "succeeded" && payment.status !== "partially_refunded") throw new ActionError("This payment has nothing left to refund.");
     const amountMinor = minorOf(input.amount, ctx.club.currency, "amount");
     const left = payment.amountMinor - payment.refundedMinor;
-    if (amountMinor > left) throw new ActionError("Some fields need attention; nothing was saved.", { amount: [`At most ${formatMoney(left, ctx.club.currency)} is left to refund.`] });
+    if (amountMinor > left) throw new ActionError("Some fields need attention; nothing was saved.", { amount: [`At most ${formatMoney(left, ctx.club.currency, ctx.club.locale)} is left to refund.`] });
     try {
       const refund = await getPaymentsClient().refunds.create(
         { payment_intent: payment.paymentIntentId, amount: amountMinor, metadata: { clubId: ctx.club.id, paymentId: payment.id, treatment: input.treatment, requestedById: ctx.user.id } },

@@ -2,9 +2,9 @@
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { kickOutbox } from "@/lib/email/runner";
-import { runBillingPeriod } from "@/lib/ledger/billing";
-import { monthLabel, monthOf, shiftMonthKey } from "@/lib/ledger/months";
-import { clubToday } from "@/lib/ledger/settings";
+import { runBillingPeriod } from "@/db/queries/money-billing-run";
+import { monthLabel, monthOf, shiftMonthKey } from "@/lib/money/months";
+import { clubToday } from "@/lib/money/settings";
 import { writeAudit } from "@/lib/server/audit";
 import { billingRunSchema } from "@/lib/validation/money";
 import { ledger } from "./ledger-errors";
@@ -23,8 +23,8 @@ export const runBilling = clubAction({
     writeAudit(tx, { clubId: ctx.club.id, actorId: ctx.user.id, action: "money.billing.run", subjectType: "BillingRun", subjectId: result.runId, after: result });
     const message =
       posted === 0 && result.statementsIssued === 0
-        ? `Nothing new: ${monthLabel(input.month)} was already billed and its statements issued.`
-        : `${monthLabel(input.month)}: ${result.duesPosted} dues and ${result.lateFeesPosted} late fees posted, ${result.statementsIssued} statements for ${monthLabel(shiftMonthKey(input.month, -1))} e-mailed.`;
+        ? `Nothing new: ${monthLabel(input.month, ctx.club.locale)} was already billed and its statements issued.`
+        : `${monthLabel(input.month, ctx.club.locale)}: ${result.duesPosted} dues and ${result.lateFeesPosted} late fees posted, ${result.statementsIssued} statements for ${monthLabel(shiftMonthKey(input.month, -1), ctx.club.locale)} e-mailed.`;
     return { message, data: result, refresh: true };
   },
   after: () => kickOutbox(),

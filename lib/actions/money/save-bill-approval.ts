@@ -17,6 +17,6 @@ export const saveBillApprovalAction = clubAction({
     const amountMinor = Number(input.amount) === 0 ? 0 : minorOf(input.amount, club.currency, "amount");
     setBillApprovalOverMinor(tx, club.id, amountMinor);
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "money.bill.approval-amount", subjectType: "Club", subjectId: club.id, before: { billApprovalOverMinor: before }, after: { billApprovalOverMinor: amountMinor } });
-    return { message: `Bills above ${formatMoney(amountMinor, club.currency)} now need a second officer's approval.`, refresh: true };
+    return { message: `Bills above ${formatMoney(amountMinor, club.currency, club.locale)} now need a second officer's approval.`, refresh: true };
   },
 });

@@ -1,8 +1,8 @@
 "use server";
 import { clubAction } from "@/lib/actions/create-action";
 import { kickOutbox } from "@/lib/email/runner";
-import { sendDuesReminders } from "@/lib/ledger/reminders";
-import { clubToday } from "@/lib/ledger/settings";
+import { sendDuesReminders } from "@/db/queries/money-reminders";
+import { clubToday } from "@/lib/money/settings";
 import { writeAudit } from "@/lib/server/audit";
 import { emptySchema } from "@/lib/validation/money";
 

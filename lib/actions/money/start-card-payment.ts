@@ -3,8 +3,8 @@ import { randomUUID } from "node:crypto";
 import { payments } from "@/db/schema";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
-import { memberBalance } from "@/lib/ledger/balances";
-import { getPaymentsClient } from "@/lib/ledger/payments-client";
+import { memberBalance } from "@/db/queries/money-member-balances";
+import { getPaymentsClient } from "@/lib/payments/client";
 import { formatMoney } from "@/lib/money";
 import { appUrl } from "@/lib/server/urls";
 import { emptySchema } from "@/lib/validation/money";
@@ -26,7 +26,7 @@ export const startCardPayment = clubAction({
   async prepare(ctx) {
     const balance = memberBalance(ctx.db, ctx.club.id, ctx.user.id);
     if (balance <= 0) throw new ActionError("There is nothing to pay: your balance is settled.");
-    if (balance < MIN_CARD_MINOR) throw new ActionError(`Balances under ${formatMoney(MIN_CARD_MINOR, ctx.club.currency)} cannot be paid by card; pay them with your next charge.`);
+    if (balance < MIN_CARD_MINOR) throw new ActionError(`Balances under ${formatMoney(MIN_CARD_MINOR, ctx.club.currency, ctx.club.locale)} cannot be paid by card; pay them with your next charge.`);
     const paymentId = randomUUID();
     const metadata = { clubId: ctx.club.id, memberUserId: ctx.user.id, paymentId };
     const base = `/clubs/${ctx.club.slug}/account`;

@@ -7,6 +7,7 @@ import { kickOutbox } from "@/lib/email/runner";
 import { writeAudit } from "@/lib/server/audit";
 import { createClubSchema } from "@/lib/validation/clubs";
 import { defaultClubSettings } from "@/lib/validation/club-settings";
+import { defaultLocaleFor } from "@/lib/money/locale";
 import { appointAdmin } from "./appoint-admin";
 
 export const createClub = userAction({
@@ -21,7 +22,7 @@ export const createClub = userAction({
     }
     const [club] = tx
       .insert(clubs)
-      .values({ name: input.name, slug: input.slug, timeZone: input.timeZone, currency: input.currency, unitSystem: input.unitSystem, settings: defaultClubSettings() })
+      .values({ name: input.name, slug: input.slug, timeZone: input.timeZone, currency: input.currency, locale: defaultLocaleFor(input.currency, input.timeZone), unitSystem: input.unitSystem, settings: defaultClubSettings() })
       .returning()
       .all();
     if (!club) throw new Error("Club insert returned no row");

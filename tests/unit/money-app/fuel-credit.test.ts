@@ -2,7 +2,7 @@
 // Fuel credits: quantity × the lower of the price paid and the club's cap per unit, rounded half
 // away from zero to the cent (the club's own rule; figures are our own arithmetic).
 import { describe, expect, it } from "vitest";
-import { fuelCreditMinor } from "@/lib/ledger/fuel-credit";
+import { fuelCreditMinor } from "@/lib/money/fuel-credit";
 
 describe("fuelCreditMinor", () => {
   it("credits at the price paid when it is under the cap", () => {

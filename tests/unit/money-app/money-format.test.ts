@@ -3,7 +3,7 @@
 // The cached formatter used for thousands of statements must print exactly what formatMoney
 // (lib/money) prints; ISO 4217 minor units: USD and EUR 2 digits, JPY 0.
 import { describe, expect, it } from "vitest";
-import { moneyFormatter } from "@/lib/ledger/money-format";
+import { moneyFormatter } from "@/lib/money/format";
 import { formatMoney } from "@/lib/money";
 
 describe("moneyFormatter", () => {

@@ -1,7 +1,7 @@
 // Open-item accounting for member accounts: payments settle the oldest charge first (FIFO,
 // common practice for ageing receivables). Figures are our own arithmetic.
 import { describe, expect, it } from "vitest";
-import { oldestOpenDueDate, openItemsOf } from "@/lib/ledger/open-items";
+import { oldestOpenDueDate, openItemsOf } from "@/lib/money/open-items";
 
 describe("openItemsOf", () => {
   it("settles the oldest charge first and keeps the rest open", () => {

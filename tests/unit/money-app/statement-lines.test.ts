@@ -3,7 +3,7 @@
 // figures are our own).
 import { describe, expect, it } from "vitest";
 import { statementFigures } from "@/lib/ledger/statement-lines";
-import { monthLabel, monthRange, shiftMonthKey } from "@/lib/ledger/months";
+import { monthLabel, monthRange, shiftMonthKey } from "@/lib/money/months";
 
 describe("statementFigures", () => {
   const moves = [

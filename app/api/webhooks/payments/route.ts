@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { getDb } from "@/db/client";
-import { processPaymentEvent } from "@/lib/ledger/card-events";
-import { getPaymentsClient } from "@/lib/ledger/payments-client";
+import { processPaymentEvent } from "@/db/queries/money-card-events";
+import { getPaymentsClient } from "@/lib/payments/client";
 import { verifyWebhook, webhookSigningSecret } from "@/lib/payments/provider";
 import { logError, logWarn } from "@/lib/server/log";
 

@@ -3,9 +3,9 @@ import { Suspense } from "react";
 import { AccountView } from "@/components/money/account-view";
 import { PayButton } from "@/components/money/pay-button";
 import { PageHeader } from "@/components/ui/page-header";
-import { getMemberAccount } from "@/db/queries/money-accounts";
+import { getMemberAccount } from "@/db/queries/money-member-accounts";
 import { formatMoney } from "@/lib/money";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";
 import { canOn } from "@/permissions";
 
@@ -22,11 +22,11 @@ export default async function MyAccountPage({ params }: { params: Promise<{ club
       <Suspense fallback={<div className="h-64 animate-pulse rounded bg-sand-200" />}>
         <AccountView
           data={data}
-          currency={club.currency} timeZone={club.timeZone}
+          currency={club.currency} locale={club.locale} timeZone={club.timeZone}
           slug={club.slug}
           userId={user.id}
           statementHref={(m) => `/clubs/${club.slug}/account/statements/${m}`}
-          payButton={canPay ? <PayButton slug={club.slug} amountText={formatMoney(data.balanceMinor, club.currency)} /> : <p className="text-ink-700">Nothing to pay right now.</p>}
+          payButton={canPay ? <PayButton slug={club.slug} amountText={formatMoney(data.balanceMinor, club.currency, club.locale)} /> : <p className="text-ink-700">Nothing to pay right now.</p>}
         />
       </Suspense>
     </div>

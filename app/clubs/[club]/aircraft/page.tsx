@@ -31,7 +31,7 @@ export default async function AircraftListPage({ params }: { params: Promise<{ c
                 <td className="px-3 py-2">{a.make} {a.model}</td>
                 <td className="px-3 py-2">{a.typeGroup}</td>
                 <td className="px-3 py-2 font-mono tabular">{a.currentHobbs !== null ? formatHours(a.currentHobbs) : "—"} / {a.currentTach !== null ? formatHours(a.currentTach) : "—"}</td>
-                <td className="px-3 py-2 tabular">{formatMoney(a.hourlyRateMinor, club.currency)}/h {a.rateMeter}</td>
+                <td className="px-3 py-2 tabular">{formatMoney(a.hourlyRateMinor, club.currency, club.locale)}/h {a.rateMeter}</td>
                 <td className="px-3 py-2">{[a.usedForInstruction || a.usedForHire ? "100-hour" : null, a.ifrEquipped || a.usedForIfr ? "IFR" : null].filter(Boolean).join(", ") || "VFR"}</td>
               </tr>
             ))}
@@ -42,7 +42,7 @@ export default async function AircraftListPage({ params }: { params: Promise<{ c
         <section className="card mt-6" aria-labelledby="add-h">
           <h2 id="add-h" className="mb-3 text-lg font-bold">Add an aircraft</h2>
           <p className="mb-3 text-sm text-ink-700">It starts with the default inspection items (annual, 100-hour, ELT, ELT battery, transponder, altimeter/static, VOR check, oil change); those that do not apply to its use are left out of its status. It shows &quot;Check status&quot; until their last completions are recorded.</p>
-          <AircraftForm slug={club.slug} currency={club.currency} />
+          <AircraftForm slug={club.slug} currency={club.currency} locale={club.locale} />
         </section>
       ) : null}
     </div>

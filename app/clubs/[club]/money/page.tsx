@@ -4,14 +4,14 @@ import { ActionButton, ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
-import { listMemberBalances } from "@/db/queries/money-accounts";
+import { listMemberBalances } from "@/db/queries/money-member-accounts";
 import { listBillingRuns } from "@/db/queries/money-billing";
 import { accountBalances, countEntries, unbalancedEntries } from "@/db/queries/money-ledger";
 import { runBilling } from "@/lib/actions/money/run-billing";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
-import { monthLabel, monthOf, shiftMonthKey } from "@/lib/ledger/months";
-import { lockedThrough } from "@/lib/ledger/post-entry";
-import { clubToday } from "@/lib/ledger/settings";
+import { monthLabel, monthOf, shiftMonthKey } from "@/lib/money/months";
+import { lockedThrough } from "@/db/queries/money-post-entry";
+import { clubToday } from "@/lib/money/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { explainDenied, can, canAll } from "@/permissions";
 
@@ -34,9 +34,9 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
   const base = `/clubs/${club.slug}/money`;
   const canPost = can(ability, "create", "Ledger");
   const tiles = [
-    { label: "Members owe the club", value: <Money minor={owed} currency={club.currency} />, href: `${base}/balances` },
-    { label: "In the bank (books)", value: <Money minor={by("bank")} currency={club.currency} />, href: `${base}/reconciliation` },
-    { label: "Card payments not yet paid out", value: <Money minor={by("card-clearing")} currency={club.currency} />, href: `${base}/payments` },
+    { label: "Members owe the club", value: <Money minor={owed} currency={club.currency} locale={club.locale} />, href: `${base}/balances` },
+    { label: "In the bank (books)", value: <Money minor={by("bank")} currency={club.currency} locale={club.locale} />, href: `${base}/reconciliation` },
+    { label: "Card payments not yet paid out", value: <Money minor={by("card-clearing")} currency={club.currency} locale={club.locale} />, href: `${base}/payments` },
     { label: "Members in arrears", value: <span className="tabular font-mono">{arrears.length}</span>, href: `${base}/ageing` },
   ];
   return (
@@ -67,7 +67,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
               label="Run billing"
               submitLabel="Run billing"
               pendingText="Billing…"
-              fields={[{ name: "month", label: "Month to bill", type: "month", defaultValue: month, hint: `For example ${month} bills ${monthLabel(month)} and sends the ${monthLabel(shiftMonthKey(month, -1))} statements.` }]}
+              fields={[{ name: "month", label: "Month to bill", type: "month", defaultValue: month, hint: `For example ${month} bills ${monthLabel(month, club.locale)} and sends the ${monthLabel(shiftMonthKey(month, -1), club.locale)} statements.` }]}
             />
           ) : (
             <p className="text-sm text-ink-500">{explainDenied("create", "Ledger")}</p>
@@ -76,8 +76,8 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
             <ul className="mt-4 divide-y divide-sand-200 text-sm">
               {runs.map((r) => (
                 <li key={r.id} className="flex flex-wrap justify-between gap-2 py-2">
-                  <span>{monthLabel(r.periodStart.slice(0, 7))}</span>
-                  <span className="text-ink-700">{r.entriesPosted} postings · <Money minor={r.totalMinor} currency={club.currency} /> · {r.statementsIssued} statements · run {r.runCount}×</span>
+                  <span>{monthLabel(r.periodStart.slice(0, 7), club.locale)}</span>
+                  <span className="text-ink-700">{r.entriesPosted} postings · <Money minor={r.totalMinor} currency={club.currency} locale={club.locale} /> · {r.statementsIssued} statements · run {r.runCount}×</span>
                 </li>
               ))}
             </ul>
@@ -90,7 +90,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
               {arrears.map((m) => (
                 <li key={m.userId} className="flex flex-wrap justify-between gap-2 py-2">
                   <Link href={`${base}/members/${m.userId}`}>{m.name}</Link>
-                  <span><Money minor={m.balanceMinor} currency={club.currency} /> · oldest due {m.oldestDueDate}</span>
+                  <span><Money minor={m.balanceMinor} currency={club.currency} locale={club.locale} /> · oldest due {m.oldestDueDate}</span>
                 </li>
               ))}
             </ul>

@@ -1,5 +1,9 @@
 import type { Metadata } from "next";
+import { ClubLocaleForm } from "@/components/clubs/club-locale-form";
 import { HomePositionForm } from "@/components/clubs/home-position-form";
+import { formatDate } from "@/lib/dates";
+import { formatMoney } from "@/lib/money/format";
+import { CLUB_LOCALES, paperSizeFor } from "@/lib/money/locale";
 import { PageHeader } from "@/components/ui/page-header";
 import { authorizePage } from "@/lib/server/authorize";
 
@@ -20,6 +24,18 @@ export default async function ClubSettingsPage({ params }: { params: Promise<{ c
           passengers need night currency. {lat === null || lon === null ? <strong>Not recorded: night cannot be computed, so every booking with passengers is checked as if it touched night.</strong> : `Recorded: ${lat}, ${lon}.`}
         </p>
         <HomePositionForm slug={club.slug} latitude={lat} longitude={lon} />
+      </section>
+      <section className="card mt-4" aria-labelledby="locale-h">
+        <h2 id="locale-h" className="mb-2 text-lg font-bold">Locale</h2>
+        <p className="mb-3 text-sm text-ink-700">
+          How the club writes money, numbers and dates: now {formatMoney(289306, club.currency, club.locale)} and {formatDate("2026-12-01", club.locale)}. Statements print on{" "}
+          {paperSizeFor(club.locale) === "LETTER" ? "US Letter" : "A4"} paper.
+        </p>
+        <ClubLocaleForm
+          slug={club.slug}
+          locale={club.locale}
+          options={CLUB_LOCALES.map((l) => ({ tag: l.tag, name: l.name, sample: `${formatMoney(289306, club.currency, l.tag)} · ${formatDate("2026-12-01", l.tag)}` }))}
+        />
       </section>
     </div>
   );

@@ -4,8 +4,8 @@ import { notFound } from "next/navigation";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
 import { getPaymentBySession } from "@/db/queries/money-payments";
-import { memberBalance } from "@/lib/ledger/balances";
-import { syncCheckoutSession } from "@/lib/ledger/checkout-sync";
+import { memberBalance } from "@/db/queries/money-member-balances";
+import { syncCheckoutSession } from "@/db/queries/money-checkout-sync";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Payment" };
@@ -30,11 +30,11 @@ export default async function PaidPage({ params, searchParams }: { params: Promi
       <PageHeader title={done ? "Thank you: payment received" : "Payment not completed yet"} />
       <section className="card" role="status">
         {done ? (
-          <p>We received <Money minor={payment.amountMinor} currency={club.currency} /> by card. A receipt is on its way by e-mail.</p>
+          <p>We received <Money minor={payment.amountMinor} currency={club.currency} locale={club.locale} /> by card. A receipt is on its way by e-mail.</p>
         ) : (
           <p>The payment provider has not confirmed this payment yet{payment.lastError ? `: ${payment.lastError}` : ""}. If your card was charged it will appear on your account within minutes.</p>
         )}
-        <p className="mt-3 text-lg">Your balance is now <strong data-testid="balance-after"><Money minor={balance} currency={club.currency} credit /></strong>.</p>
+        <p className="mt-3 text-lg">Your balance is now <strong data-testid="balance-after"><Money minor={balance} currency={club.currency} locale={club.locale} credit /></strong>.</p>
         <p className="mt-4"><Link href={`/clubs/${club.slug}/account`}>Back to my account</Link></p>
       </section>
     </div>

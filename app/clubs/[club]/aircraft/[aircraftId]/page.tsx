@@ -162,7 +162,7 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
         <dl className="card grid gap-x-6 gap-y-1 text-sm sm:grid-cols-2">
           <div><dt className="inline font-bold">Type group: </dt><dd className="inline">{plane.typeGroup}</dd></div>
           <div><dt className="inline font-bold">Serial, year: </dt><dd className="inline">{plane.serialNumber ?? "—"}, {plane.year ?? "—"}</dd></div>
-          <div><dt className="inline font-bold">Rate: </dt><dd className="inline">{formatMoney(plane.hourlyRateMinor, club.currency)} per {plane.rateMeter} hour</dd></div>
+          <div><dt className="inline font-bold">Rate: </dt><dd className="inline">{formatMoney(plane.hourlyRateMinor, club.currency, club.locale)} per {plane.rateMeter} hour</dd></div>
           <div><dt className="inline font-bold">Engine: </dt><dd className="inline">{plane.engineTimeSinceOverhaul ?? "—"} h since overhaul of {plane.engineTboHours ?? "—"} h TBO</dd></div>
           <div><dt className="inline font-bold">Rules: </dt><dd className="inline">{[plane.usedForInstruction && "instruction", plane.usedForHire && "hire", plane.ifrEquipped && "IFR-equipped", plane.usedForIfr && "IFR use"].filter(Boolean).join(", ") || "private VFR"}</dd></div>
         </dl>
@@ -170,7 +170,7 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
           <details className="mt-3 rounded border border-sand-300 bg-white p-3">
             <summary className="cursor-pointer font-bold text-fin-600">Edit the record</summary>
             <div className="mt-3">
-              <AircraftForm slug={club.slug} currency={club.currency} values={{ ...plane, hourlyRate: minorToDecimalString(plane.hourlyRateMinor, currencyExponent(club.currency)) }} />
+              <AircraftForm slug={club.slug} currency={club.currency} locale={club.locale} values={{ ...plane, hourlyRate: minorToDecimalString(plane.hourlyRateMinor, currencyExponent(club.currency)) }} />
             </div>
           </details>
         ) : null}

@@ -4,10 +4,10 @@ import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
-import { ageingByMember } from "@/db/queries/money-accounts";
+import { ageingByMember } from "@/db/queries/money-member-accounts";
 import { sendReminders } from "@/lib/actions/money/send-dues-reminders";
 import { AGEING_BUCKETS } from "@/lib/money";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
 
@@ -26,18 +26,18 @@ export default async function AgeingPage({ params }: { params: Promise<{ club: s
         {AGEING_BUCKETS.map((b) => (
           <div key={b.key} className="card">
             <span className="block text-sm text-ink-500">{b.label}</span>
-            <span className="text-lg font-bold"><Money minor={totals[b.key]} currency={club.currency} /></span>
+            <span className="text-lg font-bold"><Money minor={totals[b.key]} currency={club.currency} locale={club.locale} /></span>
           </div>
         ))}
         <div className="card">
           <span className="block text-sm text-ink-500">Total</span>
-          <span className="text-lg font-bold"><Money minor={totals.totalMinor} currency={club.currency} /></span>
+          <span className="text-lg font-bold"><Money minor={totals.totalMinor} currency={club.currency} locale={club.locale} /></span>
         </div>
       </section>
       <DataTable
         label="Ageing by member"
         csvName={`ageing-${club.slug}-${today}`}
-        currency={club.currency}
+        currency={club.currency} locale={club.locale}
         rows={rows.map((r) => ({ ...r, href: `/clubs/${club.slug}/money/members/${r.userId}` }))}
         columns={[
           { key: "name", header: "Member", kind: "link", hrefKey: "href" },

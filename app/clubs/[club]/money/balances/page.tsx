@@ -4,9 +4,9 @@ import { ActionForm } from "@/components/money/action-form";
 import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { PageHeader } from "@/components/ui/page-header";
-import { listMemberBalances } from "@/db/queries/money-accounts";
+import { listMemberBalances } from "@/db/queries/money-member-accounts";
 import { recordManualPayment } from "@/lib/actions/money/record-manual-payment";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
 
@@ -26,7 +26,7 @@ export default async function BalancesPage({ params }: { params: Promise<{ club:
         <DataTable
           label="Member balances"
           csvName={`balances-${club.slug}-${today}`}
-          currency={club.currency}
+          currency={club.currency} locale={club.locale}
           rows={rows}
           filter={{ key: "arrearsWord", label: "Standing", options: [{ value: "In arrears", label: "In arrears" }, { value: "Up to date", label: "Up to date" }] }}
           columns={[

@@ -10,8 +10,8 @@ import { assignDuesPlan } from "@/lib/actions/money/assign-dues-plan";
 import { saveMoneySettings } from "@/lib/actions/money/save-rates";
 import { saveDuesPlan } from "@/lib/actions/money/save-dues-plan";
 import { currencyExponent, minorToDecimalString } from "@/lib/money";
-import { monthLabel } from "@/lib/ledger/months";
-import { DEFAULT_MONEY_SETTINGS, clubToday } from "@/lib/ledger/settings";
+import { monthLabel } from "@/lib/money/months";
+import { DEFAULT_MONEY_SETTINGS, clubToday } from "@/lib/money/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";
 
@@ -48,7 +48,7 @@ export default async function BillingPage({ params }: { params: Promise<{ club: 
           {plans.map((p) => (
             <details key={p.id} className="card">
               <summary className="cursor-pointer font-bold">
-                {p.name} · {PERIOD_WORDS[p.period]} · <Money minor={p.amountMinor} currency={club.currency} />{p.active ? "" : " · not billed"}
+                {p.name} · {PERIOD_WORDS[p.period]} · <Money minor={p.amountMinor} currency={club.currency} locale={club.locale} />{p.active ? "" : " · not billed"}
               </summary>
               {canEdit ? <div className="mt-3"><ActionForm action={saveDuesPlan} slug={club.slug} label={`Edit ${p.name}`} submitLabel="Save plan" hidden={{ planId: p.id }} fields={planFields(p)} grid /></div> : null}
             </details>
@@ -67,7 +67,7 @@ export default async function BillingPage({ params }: { params: Promise<{ club: 
           label="Dues assignments"
           prefix="d_"
           csvName={`dues-${club.slug}`}
-          currency={club.currency}
+          currency={club.currency} locale={club.locale}
           rows={assignments.map((a) => ({ name: a.name ?? a.email, plan: a.planName ?? "No plan", category: a.category ? CATEGORY_WORDS[a.category] : "—", startsOn: a.startsOn, joinedOn: a.joinedOn }))}
           columns={[
             { key: "name", header: "Member" },
@@ -102,8 +102,8 @@ export default async function BillingPage({ params }: { params: Promise<{ club: 
             <ul className="divide-y divide-sand-200 text-sm">
               {runs.map((r) => (
                 <li key={r.id} className="flex flex-wrap justify-between gap-2 py-2">
-                  <span>{monthLabel(r.periodStart.slice(0, 7))}</span>
-                  <span>{r.entriesPosted} postings, <Money minor={r.totalMinor} currency={club.currency} />, {r.statementsIssued} statements</span>
+                  <span>{monthLabel(r.periodStart.slice(0, 7), club.locale)}</span>
+                  <span>{r.entriesPosted} postings, <Money minor={r.totalMinor} currency={club.currency} locale={club.locale} />, {r.statementsIssued} statements</span>
                 </li>
               ))}
             </ul>

@@ -8,7 +8,7 @@ import { approveBillAction } from "@/lib/actions/money/approve-bill";
 import { enterBillAction } from "@/lib/actions/money/enter-bill";
 import { payBillAction } from "@/lib/actions/money/pay-bill";
 import { saveBillApprovalAction } from "@/lib/actions/money/save-bill-approval";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { formatMoney, minorToDecimalString, currencyExponent } from "@/lib/money";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";
@@ -34,7 +34,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
   const toPay = list.filter((b) => b.status === "approved");
   return (
     <>
-      <PageHeader title="Bills" lead={`What the club owes its vendors. A bill is booked to its category when entered and paid from the bank; bills above ${formatMoney(threshold, club.currency)} need a second officer's approval first.`} />
+      <PageHeader title="Bills" lead={`What the club owes its vendors. A bill is booked to its category when entered and paid from the bank; bills above ${formatMoney(threshold, club.currency, club.locale)} need a second officer's approval first.`} />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/bills`} />
       <section aria-labelledby="bills-h" className="mb-8">
         <h2 id="bills-h" className="mb-3 text-lg font-bold">Bills ({list.length})</h2>
@@ -44,7 +44,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
               <li key={b.id} className="card">
                 <div className="flex flex-wrap items-baseline justify-between gap-2">
                   <span><span className="font-bold">{b.vendor}</span>{b.reference ? <span className="text-ink-700"> · {b.reference}</span> : null} · {b.categoryName}</span>
-                  <span className="flex items-baseline gap-3"><Money minor={b.amountMinor} currency={club.currency} /><span className="text-sm font-bold"><span aria-hidden="true">{STATUS[b.status].shape} </span>{STATUS[b.status].word}</span></span>
+                  <span className="flex items-baseline gap-3"><Money minor={b.amountMinor} currency={club.currency} locale={club.locale} /><span className="text-sm font-bold"><span aria-hidden="true">{STATUS[b.status].shape} </span>{STATUS[b.status].word}</span></span>
                 </div>
                 <p className="text-sm text-ink-700">
                   Dated {b.billDate} · due {b.dueOn}{b.status !== "paid" && b.dueOn < today ? <span className="font-bold text-stop-800"> (overdue)</span> : null} · entered by {b.enteredBy}
@@ -63,7 +63,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
       {canApprove && toApprove.length ? (
         <section className="card mb-8 max-w-2xl" aria-labelledby="approve-h">
           <h2 id="approve-h" className="mb-3 text-lg font-bold">Approve a bill</h2>
-          <ActionForm action={approveBillAction} slug={club.slug} label="Approve a bill" submitLabel="Approve" fields={[{ name: "billId", label: "Bill", type: "select", options: toApprove.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency)} · due ${b.dueOn}` })) }]} />
+          <ActionForm action={approveBillAction} slug={club.slug} label="Approve a bill" submitLabel="Approve" fields={[{ name: "billId", label: "Bill", type: "select", options: toApprove.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency, club.locale)} · due ${b.dueOn}` })) }]} />
         </section>
       ) : null}
       {canEnter ? (
@@ -77,7 +77,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
             submitLabel="Pay from the bank"
             grid
             fields={[
-              { name: "billId", label: "Bill", type: "select", options: toPay.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency)} · due ${b.dueOn}` })) },
+              { name: "billId", label: "Bill", type: "select", options: toPay.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency, club.locale)} · due ${b.dueOn}` })) },
               { name: "paidOn", label: "Paid on", type: "date", defaultValue: today },
             ]}
           />

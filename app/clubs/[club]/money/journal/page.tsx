@@ -5,11 +5,11 @@ import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
-import { listMemberBalances } from "@/db/queries/money-accounts";
+import { listMemberBalances } from "@/db/queries/money-member-accounts";
 import { accountBalances, listJournal } from "@/db/queries/money-ledger";
 import { postAdjustment } from "@/lib/actions/money/post-adjustment";
 import { reverseJournalEntry } from "@/lib/actions/money/reverse-entry";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { ENTRY_KINDS } from "@/db/schema/money";
 import { can } from "@/permissions";
@@ -48,7 +48,7 @@ export default async function JournalPage({ params }: { params: Promise<{ club: 
         <DataTable
           label="Journal entries"
           csvName={`journal-${club.slug}`}
-          currency={club.currency}
+          currency={club.currency} locale={club.locale}
           rows={rows}
           filter={{ key: "kind", label: "Kind", options: ENTRY_KINDS.map((k) => ({ value: k, label: KIND_WORDS[k] ?? k })) }}
           columns={[
@@ -75,7 +75,7 @@ export default async function JournalPage({ params }: { params: Promise<{ club: 
                   <tr key={b.code} className="border-t border-sand-200">
                     <td className="py-1">{b.name}</td>
                     <td className="py-1 capitalize text-ink-700">{b.type}</td>
-                    <td className="py-1 text-right"><Money minor={b.balanceMinor} currency={club.currency} /></td>
+                    <td className="py-1 text-right"><Money minor={b.balanceMinor} currency={club.currency} locale={club.locale} /></td>
                   </tr>
                 ))}
               </tbody>

@@ -22,7 +22,7 @@ export default async function PaymentsPage({ params }: { params: Promise<{ club:
       <DataTable
         label="Payments"
         csvName={`payments-${club.slug}`}
-        currency={club.currency}
+        currency={club.currency} locale={club.locale}
         rows={rows}
         filter={{ key: "statusWord", label: "Status", options: Object.values(STATUS).map((s) => ({ value: s, label: s })) }}
         columns={[

@@ -29,7 +29,7 @@ export default async function RatesPage({ params }: { params: Promise<{ club: st
     <>
       <PageHeader title="Hourly rates" lead="The break-even rate for an aircraft: fixed costs spread over the hours it flies, plus what each hour costs, plus the engine reserve (overhaul cost ÷ TBO). Each part is rounded to the cent before adding, so the table adds up." />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/rates`} />
-      <RateCalculator slug={club.slug} currency={club.currency} unit={club.unitSystem === "metric" ? "litre" : "gallon"} profiles={profiles} canSave={can(ability, "update", "Rates")} />
+      <RateCalculator slug={club.slug} currency={club.currency} locale={club.locale} unit={club.unitSystem === "metric" ? "litre" : "gallon"} profiles={profiles} canSave={can(ability, "update", "Rates")} />
     </>
   );
 }

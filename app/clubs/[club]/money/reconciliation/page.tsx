@@ -6,7 +6,7 @@ import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
 import { listBankStatements } from "@/db/queries/money-reconcile";
 import { importBankStatement } from "@/lib/actions/money/import-bank-statement";
-import { lockedThrough } from "@/lib/ledger/post-entry";
+import { lockedThrough } from "@/db/queries/money-post-entry";
 import { explainDenied, can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
 
@@ -33,7 +33,7 @@ export default async function ReconciliationPage({ params }: { params: Promise<{
                   <tr key={s.id} className="border-t border-sand-200">
                     <td className="px-3 py-2"><Link href={`${base}/${s.id}`}>{s.periodStart} to {s.periodEnd}</Link></td>
                     <td className="break-all px-3 py-2">{s.fileName} ({s.format.toUpperCase()})</td>
-                    <td className="px-3 py-2 text-right"><Money minor={s.closingBalanceMinor} currency={club.currency} /></td>
+                    <td className="px-3 py-2 text-right"><Money minor={s.closingBalanceMinor} currency={club.currency} locale={club.locale} /></td>
                     <td className="px-3 py-2 tabular">{s.matchedCount} of {s.lineCount}</td>
                     <td className="px-3 py-2">{s.lockedAt ? <span><span aria-hidden="true">■ </span>Reconciled and locked</span> : <span><span aria-hidden="true">□ </span>Open</span>}</td>
                   </tr>

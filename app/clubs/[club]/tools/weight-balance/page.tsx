@@ -59,7 +59,7 @@ export default async function WeightBalanceToolPage({ params, searchParams }: { 
         </section>
         <section className="card min-w-0">
           {profile && result ? (
-            <LoadingResult unitSystem={profile.unitSystem} takeoff={result.takeoff} landing={result.landing} problems={result.problems} envelope={profile.envelopeNormal} utility={profile.envelopeUtility ?? null} maxTakeoffWeight={profile.maxTakeoffWeight} maxLandingWeight={profile.maxLandingWeight} />
+            <LoadingResult unitSystem={profile.unitSystem} locale={club.locale} fuelKind={profile.fuelKind} takeoff={result.takeoff} landing={result.landing} problems={result.problems} envelope={profile.envelopeNormal} utility={profile.envelopeUtility ?? null} maxTakeoffWeight={profile.maxTakeoffWeight} maxLandingWeight={profile.maxLandingWeight} />
           ) : (
             <p className="text-ink-700">Choose an aircraft, enter the loading and work it out: both points appear on the envelope here.</p>
           )}

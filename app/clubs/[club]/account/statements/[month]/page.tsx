@@ -5,8 +5,8 @@ import { ActionButton } from "@/components/money/action-form";
 import { StatementView } from "@/components/money/statement-view";
 import { PageHeader } from "@/components/ui/page-header";
 import { emailStatement } from "@/lib/actions/money/email-statement";
-import { monthLabel } from "@/lib/ledger/months";
-import { statementFor } from "@/lib/ledger/statements";
+import { monthLabel } from "@/lib/money/months";
+import { statementFor } from "@/db/queries/money-statements";
 import { authorizePage, ownRecord } from "@/lib/server/authorize";
 import { monthField } from "@/lib/validation/money";
 
@@ -21,11 +21,11 @@ export default async function MyStatementPage({ params }: { params: Promise<{ cl
   return (
     <div className="max-w-4xl">
       <PageHeader
-        title={`Statement for ${monthLabel(parsed.data)}`}
+        title={`Statement for ${monthLabel(parsed.data, club.locale)}`}
         lead={<Link href={`/clubs/${club.slug}/account`}>Back to my account</Link>}
         actions={<a className="inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold" href={`/api/clubs/${club.slug}/statements/${user.id}/${parsed.data}`}>Download PDF</a>}
       />
-      <StatementView figures={figures} currency={club.currency} title={`${club.name} statement`} />
+      <StatementView figures={figures} currency={club.currency} locale={club.locale} title={`${club.name} statement`} />
       <div className="mt-4"><ActionButton action={emailStatement} slug={club.slug} hidden={{ memberUserId: user.id, month: parsed.data }} label="E-mail me this statement" pendingText="Queueing…" /></div>
     </div>
   );

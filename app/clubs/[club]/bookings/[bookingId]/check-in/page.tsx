@@ -27,7 +27,7 @@ export default async function CheckInPage({ params }: { params: Promise<{ club: 
       <PageHeader title={`Check in · ${booking.registration}`} lead="The flight-log entry and the charge for the flight, in one step." actions={back} />
       <section className="card">
         {booking.status === "dispatched" || booking.status === "checked_in" ? (
-          <CheckInForm slug={club.slug} bookingId={booking.id} checkedIn={booking.status === "checked_in"} hobbs={plane.currentHobbs} tach={plane.currentTach} metric={club.unitSystem === "metric"} rateText={`${formatMoney(plane.hourlyRateMinor, club.currency)} per ${plane.rateMeter === "tach" ? "tach" : "Hobbs"} hour`} />
+          <CheckInForm slug={club.slug} bookingId={booking.id} checkedIn={booking.status === "checked_in"} hobbs={plane.currentHobbs} tach={plane.currentTach} metric={club.unitSystem === "metric"} rateText={`${formatMoney(plane.hourlyRateMinor, club.currency, club.locale)} per ${plane.rateMeter === "tach" ? "tach" : "Hobbs"} hour`} />
         ) : (
           <p>Dispatch the booking first: record and confirm the preflight.</p>
         )}

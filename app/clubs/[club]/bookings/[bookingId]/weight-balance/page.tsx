@@ -47,6 +47,8 @@ export default async function BookingWeightBalancePage({ params }: { params: Pro
           {saved ? (
             <LoadingResult
               unitSystem={profile.unitSystem}
+              locale={club.locale}
+              fuelKind={profile.fuelKind}
               takeoff={saved.takeoff}
               landing={saved.landing}
               problems={saved.problems}

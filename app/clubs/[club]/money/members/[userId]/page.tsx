@@ -6,10 +6,10 @@ import { ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
-import { getMemberAccount, getMemberName } from "@/db/queries/money-accounts";
+import { getMemberAccount, getMemberName } from "@/db/queries/money-member-accounts";
 import { refundPayment } from "@/lib/actions/money/refund-payment";
 import { minorToDecimalString, currencyExponent } from "@/lib/money";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";
 
@@ -28,14 +28,14 @@ export default async function MemberAccountPage({ params }: { params: Promise<{ 
     <>
       <PageHeader title={member.name} lead={<><Link href={`/clubs/${club.slug}/money/balances`}>Member balances</Link> · {member.email}</>} />
       <MoneyNav slug={club.slug} ability={ability} />
-      <AccountView data={data} currency={club.currency} timeZone={club.timeZone} slug={club.slug} userId={userId} statementHref={(m) => `/clubs/${club.slug}/money/members/${userId}/statements/${m}`} />
+      <AccountView data={data} currency={club.currency} locale={club.locale} timeZone={club.timeZone} slug={club.slug} userId={userId} statementHref={(m) => `/clubs/${club.slug}/money/members/${userId}/statements/${m}`} />
       {canRefund && refundable.length ? (
         <section className="mt-8" aria-labelledby="refund-h">
           <h2 id="refund-h" className="mb-2 text-lg font-bold">Refund a card payment</h2>
           <div className="grid gap-4 lg:grid-cols-2">
             {refundable.map((p) => (
               <div key={p.id} className="card">
-                <p className="mb-3 text-sm">{p.receivedOn} · <Money minor={p.amountMinor} currency={club.currency} /> by card{p.refundedMinor ? <> · <Money minor={p.refundedMinor} currency={club.currency} /> refunded already</> : null}</p>
+                <p className="mb-3 text-sm">{p.receivedOn} · <Money minor={p.amountMinor} currency={club.currency} locale={club.locale} /> by card{p.refundedMinor ? <> · <Money minor={p.refundedMinor} currency={club.currency} locale={club.locale} /> refunded already</> : null}</p>
                 <ActionForm
                   action={refundPayment}
                   slug={club.slug}

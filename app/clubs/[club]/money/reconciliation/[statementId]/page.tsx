@@ -24,7 +24,7 @@ export default async function StatementWorkspacePage({ params }: { params: Promi
       <PageHeader title={`Statement ${st.periodStart} to ${st.periodEnd}`} lead={<><Link href={`/clubs/${club.slug}/money/reconciliation`}>All statements</Link> · {st.fileName} · {st.lineCount} lines{st.skippedCount ? `, ${st.skippedCount} skipped as already imported` : ""}</>} />
       <MoneyNav slug={club.slug} ability={ability} />
       {can(ability, "reconcile", "Reconciliation") ? (
-        <ReconcileWorkspace slug={club.slug} currency={club.currency} initial={initial} renderedAt={Date.now()} />
+        <ReconcileWorkspace slug={club.slug} currency={club.currency} locale={club.locale} initial={initial} renderedAt={Date.now()} />
       ) : (
         <p className="text-ink-700">Only a treasurer can match lines and lock the period.</p>
       )}

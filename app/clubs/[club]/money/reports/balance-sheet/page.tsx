@@ -3,7 +3,7 @@ import { MoneyNav } from "@/components/money/money-nav";
 import { PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
 import { PageHeader } from "@/components/ui/page-header";
 import { reportPostings } from "@/db/queries/money-reports";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { reportPresets } from "@/lib/money/report-periods";
 import { balanceSheet, balanceSheetLines } from "@/lib/money/reports";
 import { formatMoney } from "@/lib/money";
@@ -43,13 +43,13 @@ export default async function BalanceSheetPage({ params, searchParams }: { param
       <p role="status" className={`mb-4 max-w-2xl rounded px-3 py-2 text-sm font-bold ${sheet.balanced ? "bg-go-100 text-go-800" : "bg-stop-100 text-stop-800"}`}>
         <span aria-hidden="true">{sheet.balanced ? "✓ " : "▲ "}</span>
         {sheet.balanced
-          ? `Balanced: assets ${formatMoney(sheet.assetsMinor, club.currency)} = liabilities ${formatMoney(sheet.liabilitiesMinor, club.currency)} + equity ${formatMoney(sheet.equityMinor, club.currency)}.`
-          : `Not balanced: assets ${formatMoney(sheet.assetsMinor, club.currency)} differ from liabilities + equity by ${formatMoney(sheet.assetsMinor - sheet.liabilitiesMinor - sheet.equityMinor, club.currency)}. Check the journal for an unbalanced entry.`}
+          ? `Balanced: assets ${formatMoney(sheet.assetsMinor, club.currency, club.locale)} = liabilities ${formatMoney(sheet.liabilitiesMinor, club.currency, club.locale)} + equity ${formatMoney(sheet.equityMinor, club.currency, club.locale)}.`
+          : `Not balanced: assets ${formatMoney(sheet.assetsMinor, club.currency, club.locale)} differ from liabilities + equity by ${formatMoney(sheet.assetsMinor - sheet.liabilitiesMinor - sheet.equityMinor, club.currency, club.locale)}. Check the journal for an unbalanced entry.`}
       </p>
       <ReportTable
         caption={`Balance sheet at ${asOf}`}
         lines={lines}
-        currency={club.currency}
+        currency={club.currency} locale={club.locale}
         groups={["asset", "liability", "equity"]}
         totals={[
           { label: "Total assets", minor: sheet.assetsMinor, strong: true },

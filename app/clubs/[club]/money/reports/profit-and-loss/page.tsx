@@ -3,7 +3,7 @@ import { MoneyNav } from "@/components/money/money-nav";
 import { PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
 import { PageHeader } from "@/components/ui/page-header";
 import { reportPostings } from "@/db/queries/money-reports";
-import { clubToday } from "@/lib/ledger/settings";
+import { clubToday } from "@/lib/money/settings";
 import { reportPresets } from "@/lib/money/report-periods";
 import { profitAndLoss } from "@/lib/money/reports";
 import { authorizePage } from "@/lib/server/authorize";
@@ -42,7 +42,7 @@ export default async function ProfitAndLossPage({ params, searchParams }: { para
       <ReportTable
         caption={`Profit and loss, ${period.from} to ${period.to}`}
         lines={pnl.byAccount}
-        currency={club.currency}
+        currency={club.currency} locale={club.locale}
         groups={["income", "expense"]}
         totals={[
           { label: "Total income", minor: pnl.incomeMinor },

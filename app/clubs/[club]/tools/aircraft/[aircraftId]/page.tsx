@@ -35,6 +35,8 @@ export default async function AircraftToolsSetupPage({ params }: { params: Promi
             slug={club.slug}
             aircraftId={plane.id}
             units={units}
+            unitSystem={club.unitSystem}
+            locale={club.locale}
             defaults={{
               emptyWeight: num(p?.emptyWeight), emptyArm: num(p?.emptyArm), maxTakeoffWeight: num(p?.maxTakeoffWeight), maxLandingWeight: num(p?.maxLandingWeight),
               fuelKind: p?.fuelKind ?? "avgas", burnPerHour: num(p?.burnPerHour),

@@ -1,8 +1,8 @@
-import { getMemberName } from "@/db/queries/money-accounts";
-import { monthLabel } from "@/lib/ledger/months";
-import { clubToday } from "@/lib/ledger/settings";
-import { renderStatementPdf } from "@/lib/ledger/statement-pdf";
-import { statementFor } from "@/lib/ledger/statements";
+import { getMemberName } from "@/db/queries/money-member-accounts";
+import { monthLabel } from "@/lib/money/months";
+import { clubToday } from "@/lib/money/settings";
+import { renderStatementPdf } from "@/lib/money/statement-pdf";
+import { statementFor } from "@/db/queries/money-statements";
 import { apiError, withClub } from "@/lib/server/api";
 import { monthField } from "@/lib/validation/money";
 import { canOn } from "@/permissions";
@@ -26,8 +26,9 @@ export async function GET(_req: Request, { params }: { params: Promise<{ club: s
       clubName: ctx.club.name,
       memberName: member.name,
       memberEmail: member.email,
-      periodLabel: monthLabel(parsed.data),
+      periodLabel: monthLabel(parsed.data, ctx.club.locale),
       currency: ctx.club.currency,
+      locale: ctx.club.locale,
       figures,
       balanceNowMinor: figures.balanceNowMinor,
       generatedOn: clubToday(ctx.club),

@@ -1,13 +1,14 @@
+import "server-only";
 // Card payments in the books. Every posting is keyed by the provider's own id (payment intent,
 // refund, payout), so it does not matter which webhook arrives first, or how often.
 import { and, eq, inArray, or, sql } from "drizzle-orm";
 import { cardPayouts, clubs, paymentRefunds, payments, type PaymentRow } from "@/db/schema";
-import { accountId, memberAccountId, type DbLike } from "./accounts";
-import { LedgerError } from "./errors";
+import { accountId, memberAccountId, type DbLike } from "./money-accounts";
+import { LedgerError } from "@/lib/money/errors";
 import { lockedPeriodNote } from "@/lib/money/open-period";
-import { openPostingDate, postEntry } from "./post-entry";
-import { queueReceipt } from "./receipts";
-import { clubToday } from "./settings";
+import { openPostingDate, postEntry } from "./money-post-entry";
+import { queueReceipt } from "./money-receipts";
+import { clubToday } from "@/lib/money/settings";
 
 /** What the provider says about one payment, read fresh from it (never from the event alone). */
 export type CardPaymentSnapshot = {

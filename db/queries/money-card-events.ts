@@ -1,3 +1,4 @@
+import "server-only";
 // What a verified webhook event means for the books. The event only says that something
 // happened: the current state is read back from the provider through the SDK, so events
 // that arrive late, out of order or twice all lead to the same postings.
@@ -5,9 +6,9 @@ import { eq } from "drizzle-orm";
 import type Stripe from "stripe";
 import type { Db, Tx } from "@/db/client";
 import { clubs, paymentEvents, paymentRefunds, payments } from "@/db/schema";
-import { recordCardPayment, recordCardRefund, recordPayoutShare, markCheckoutExpired, type CardPaymentSnapshot, type PayoutShare } from "./card-payments";
-import { isLedgerError } from "./errors";
-import { clubToday } from "./settings";
+import { recordCardPayment, recordCardRefund, recordPayoutShare, markCheckoutExpired, type CardPaymentSnapshot, type PayoutShare } from "./money-card-payments";
+import { isLedgerError } from "@/lib/money/errors";
+import { clubToday } from "@/lib/money/settings";
 
 export type EventResult = { handled: "processed" | "duplicate" | "ignored"; detail: string };
 

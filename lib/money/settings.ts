@@ -1,9 +1,7 @@
-import { eq } from "drizzle-orm";
-import { clubs, moneySettings } from "@/db/schema";
 import { addDays, isoDateInTimeZone, type IsoDate } from "@/lib/dates";
-import type { LateFeePolicy } from "@/lib/money";
-import type { DbLike } from "./accounts";
+import type { LateFeePolicy } from "./receivables";
 
+// A club's money terms as the rules use them; db/queries/money-settings.ts reads them.
 export type MoneySettings = {
   paymentTermsDays: number;
   lateFeeFlatMinor: number;
@@ -14,18 +12,6 @@ export type MoneySettings = {
 };
 
 export const DEFAULT_MONEY_SETTINGS = { paymentTermsDays: 14, lateFeeFlatMinor: 0, lateFeeBasisPoints: 0, fuelCreditCapPerUnitMinor: 0 } as const;
-
-export function getMoneySettings(tx: DbLike, clubId: string): MoneySettings {
-  const row = tx.select().from(moneySettings).where(eq(moneySettings.clubId, clubId)).get();
-  const club = tx.select({ settings: clubs.settings }).from(clubs).where(eq(clubs.id, clubId)).get();
-  return {
-    paymentTermsDays: row?.paymentTermsDays ?? DEFAULT_MONEY_SETTINGS.paymentTermsDays,
-    lateFeeFlatMinor: row?.lateFeeFlatMinor ?? DEFAULT_MONEY_SETTINGS.lateFeeFlatMinor,
-    lateFeeBasisPoints: row?.lateFeeBasisPoints ?? DEFAULT_MONEY_SETTINGS.lateFeeBasisPoints,
-    fuelCreditCapPerUnitMinor: row?.fuelCreditCapPerUnitMinor ?? DEFAULT_MONEY_SETTINGS.fuelCreditCapPerUnitMinor,
-    lateFeeAfterDays: club?.settings.lateFeeAfterDays ?? 30,
-  };
-}
 
 export function lateFeePolicyOf(settings: MoneySettings): LateFeePolicy {
   return { flatMinor: settings.lateFeeFlatMinor, percent: settings.lateFeeBasisPoints / 100 };

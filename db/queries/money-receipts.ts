@@ -1,10 +1,11 @@
+import "server-only";
 import { and, eq } from "drizzle-orm";
 import { clubs, memberships, users } from "@/db/schema";
 import { enqueueEmail } from "@/lib/email/outbox";
-import { moneyFormatter } from "./money-format";
+import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
-import type { DbLike } from "./accounts";
-import { memberBalance } from "./balances";
+import type { DbLike } from "./money-accounts";
+import { memberBalance } from "./money-member-balances";
 
 const METHOD_WORDS = { card: "card", cheque: "cheque", cash: "cash", transfer: "bank transfer" } as const;
 
@@ -18,7 +19,7 @@ export function queueReceipt(tx: DbLike, clubId: string, p: { memberUserId: stri
     .where(and(eq(memberships.clubId, clubId), eq(memberships.userId, p.memberUserId)))
     .get();
   if (!club || !person) return;
-  const money = moneyFormatter(club.currency);
+  const money = moneyFormatter(club.currency, club.locale);
   enqueueEmail(tx, {
     clubId,
     to: person.email,

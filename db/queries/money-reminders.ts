@@ -1,12 +1,13 @@
+import "server-only";
 import { and, eq } from "drizzle-orm";
 import { clubs, duesReminders, memberships } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
 import { enqueueEmails, type EnqueueInput } from "@/lib/email/outbox";
-import { moneyFormatter } from "./money-format";
+import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
-import type { DbLike } from "./accounts";
-import { memberContacts, memberPositions } from "./balances";
-import { LedgerError } from "./errors";
+import type { DbLike } from "./money-accounts";
+import { memberContacts, memberPositions } from "./money-member-balances";
+import { LedgerError } from "@/lib/money/errors";
 
 /**
  * Reminds every active member with charges past due on `asOf`, through the outbox, at most
@@ -18,7 +19,7 @@ export function sendDuesReminders(tx: DbLike, clubId: string, asOf: IsoDate): nu
   const active = new Set(tx.select({ userId: memberships.userId }).from(memberships).where(and(eq(memberships.clubId, clubId), eq(memberships.status, "active"))).all().map((m) => m.userId));
   const contacts = memberContacts(tx, clubId);
   const emails: EnqueueInput<"dues-reminder">[] = [];
-  const money = moneyFormatter(club.currency);
+  const money = moneyFormatter(club.currency, club.locale);
   for (const [userId, p] of memberPositions(tx, clubId)) {
     const overdue = p.items.filter((i) => i.dueDate < asOf).reduce((s, i) => s + i.openMinor, 0);
     const contact = contacts.get(userId);

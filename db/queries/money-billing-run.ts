@@ -1,3 +1,4 @@
+import "server-only";
 // The billing run: dues for one month, late fees for members in arrears, and the previous
 // month's statements with their e-mails. Every posting carries an idempotency key, so a second
 // run of the same month posts nothing and sends nothing.
@@ -5,13 +6,14 @@ import { and, eq, sql } from "drizzle-orm";
 import { billingRuns, clubs, duesPlans, memberDues, memberships } from "@/db/schema";
 import { compareIsoDates, type IsoDate } from "@/lib/dates";
 import { duesForMember, duesPeriod, lateFee } from "@/lib/money";
-import { accountId, memberAccountIds, type DbLike } from "./accounts";
-import { memberPositions } from "./balances";
-import { LedgerError } from "./errors";
-import { monthRange, shiftMonthKey } from "./months";
-import { assertDateOpen, postEntries, type PostEntryInput } from "./post-entry";
-import { dueDateFor, getMoneySettings, lateFeePolicyOf } from "./settings";
-import { issueStatements } from "./statements";
+import { accountId, memberAccountIds, type DbLike } from "./money-accounts";
+import { memberPositions } from "./money-member-balances";
+import { LedgerError } from "@/lib/money/errors";
+import { monthRange, shiftMonthKey } from "@/lib/money/months";
+import { assertDateOpen, postEntries, type PostEntryInput } from "./money-post-entry";
+import { getMoneySettings } from "./money-settings";
+import { dueDateFor, lateFeePolicyOf } from "@/lib/money/settings";
+import { issueStatements } from "./money-statements";
 
 export type BillingRunResult = {
   runId: string;

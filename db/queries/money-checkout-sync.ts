@@ -1,8 +1,9 @@
+import "server-only";
 import type { Db } from "@/db/client";
-import { recordCardPayment } from "./card-payments";
-import { snapshotOfIntent } from "./card-events";
-import { isLedgerError } from "./errors";
-import { getPaymentsClient } from "./payments-client";
+import { recordCardPayment } from "./money-card-payments";
+import { snapshotOfIntent } from "./money-card-events";
+import { isLedgerError } from "@/lib/money/errors";
+import { getPaymentsClient } from "@/lib/payments/client";
 import { logError } from "@/lib/server/log";
 
 /**

@@ -1,13 +1,14 @@
+import "server-only";
 import { eq } from "drizzle-orm";
 import { clubs, statements } from "@/db/schema";
 import { enqueueEmails, type EnqueueInput } from "@/lib/email/outbox";
-import { moneyFormatter } from "./money-format";
+import { moneyFormatter } from "@/lib/money/format";
 import { appUrl } from "@/lib/server/urls";
-import type { DbLike } from "./accounts";
-import { memberContacts, memberMovements, type MemberMovementRow } from "./balances";
-import { LedgerError } from "./errors";
-import { monthLabel, monthRange } from "./months";
-import { statementFigures, type StatementFigures } from "./statement-lines";
+import type { DbLike } from "./money-accounts";
+import { memberContacts, memberMovements, type MemberMovementRow } from "./money-member-balances";
+import { LedgerError } from "@/lib/money/errors";
+import { monthLabel, monthRange } from "@/lib/money/months";
+import { statementFigures, type StatementFigures } from "@/lib/ledger/statement-lines";
 
 export function statementUrls(slug: string, memberUserId: string, month: string) {
   return {
@@ -50,7 +51,7 @@ export function issueStatements(tx: DbLike, clubId: string, input: { month: stri
   const byMember = groupByMember(memberMovements(tx, clubId));
   const contacts = memberContacts(tx, clubId);
   const emails: StatementEmail[] = [];
-  const money = moneyFormatter(club.currency);
+  const money = moneyFormatter(club.currency, club.locale);
   const due: { userId: string; f: StatementFigures; balanceNow: number; contact: { name: string; email: string } }[] = [];
   for (const userId of new Set(input.memberUserIds)) {
     const list = byMember.get(userId) ?? [];
@@ -65,7 +66,7 @@ export function issueStatements(tx: DbLike, clubId: string, input: { month: stri
     const rows = due.slice(i, i + 100).map(({ userId, f }) => ({ clubId, memberUserId: userId, periodStart: start, periodEnd: end, openingMinor: f.openingMinor, chargesMinor: f.chargesMinor, creditsMinor: f.creditsMinor, closingMinor: f.closingMinor, currency: club.currency, billingRunId: input.billingRunId ?? null, emailedAt: new Date() }));
     for (const r of tx.insert(statements).values(rows).onConflictDoNothing().returning({ userId: statements.memberUserId }).all()) issued.add(r.userId);
   }
-  const label = monthLabel(input.month);
+  const label = monthLabel(input.month, club.locale);
   for (const { userId, f, balanceNow, contact } of due) {
     if (!issued.has(userId) && !input.force) continue;
     const urls = statementUrls(club.slug, userId, input.month);

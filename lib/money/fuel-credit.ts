@@ -1,4 +1,4 @@
-import { roundQuotient } from "@/lib/money";
+import { roundQuotient } from "./decimal";
 
 export type FuelCreditInput = {
   /** Gallons or litres bought away from home (the club's unit), e.g. 18.4. */

@@ -1,8 +1,9 @@
+import "server-only";
 import { and, eq, sql } from "drizzle-orm";
 import { journalEntries, journalLines, ledgerAccounts, memberships, users } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
-import { RECEIVABLES, type DbLike } from "./accounts";
-import { oldestOpenDueDate, openItemsOf, type OpenItems } from "./open-items";
+import { RECEIVABLES, type DbLike } from "./money-accounts";
+import { oldestOpenDueDate, openItemsOf, type OpenItems } from "@/lib/money/open-items";
 
 export type MemberMovementRow = {
   memberUserId: string;

@@ -1,8 +1,9 @@
+import "server-only";
 import { isInArrears } from "@/lib/money";
 import type { IsoDate } from "@/lib/dates";
-import type { DbLike } from "./accounts";
-import { memberPositions } from "./balances";
-import { getMoneySettings } from "./settings";
+import type { DbLike } from "./money-accounts";
+import { memberPositions } from "./money-member-balances";
+import { getMoneySettings } from "./money-settings";
 
 export type ArrearsStatus = { inArrears: boolean; balanceMinor: number; oldestDueDate: IsoDate | null; graceDays: number };
 

@@ -1,6 +1,8 @@
 import PDFDocument from "pdfkit";
-import { formatMoney } from "@/lib/money";
-import type { StatementFigures } from "./statement-lines";
+import { formatDate } from "@/lib/dates";
+import { DEFAULT_LOCALE, moneyFormatter } from "./format";
+import { paperSizeFor } from "./locale";
+import type { StatementFigures } from "@/lib/ledger/statement-lines";
 
 export type StatementPdfInput = {
   clubName: string;
@@ -8,8 +10,11 @@ export type StatementPdfInput = {
   memberEmail: string;
   periodLabel: string;
   currency: string;
+  /** The club's locale (BCP 47): amounts, dates and the paper size (Letter or A4) follow it. */
+  locale?: string;
   figures: StatementFigures;
   balanceNowMinor: number;
+  /** The club's calendar date the statement is issued on (its time zone, never UTC's). */
   generatedOn: string;
 };
 
@@ -18,14 +23,20 @@ const MUTED = "#5b6b73";
 
 /** The statement as a PDF (pdfkit, built-in Helvetica), amounts right-aligned in columns. */
 export function renderStatementPdf(input: StatementPdfInput): Promise<Buffer> {
-  const doc = new PDFDocument({ size: "A4", margin: 50, info: { Title: `Statement ${input.periodLabel}`, Author: input.clubName, Creator: "Hangarline" } });
+  const locale = input.locale ?? DEFAULT_LOCALE;
+  const doc = new PDFDocument({ size: paperSizeFor(locale), margin: 50, info: { Title: `Statement ${input.periodLabel}`, Author: input.clubName, Creator: "Hangarline" } });
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
     doc.on("end", () => resolve(Buffer.concat(chunks)));
     doc.on("error", reject);
   });
-  const money = (m: number) => formatMoney(m, input.currency);
+  // The built-in Helvetica is WinAnsi: Intl's narrow no-break space (fr-FR groups, de-CH) becomes
+  // the no-break space it has.
+  const ansi = (t: string) => t.replace(/\u202f/g, "\u00a0");
+  const toMoney = moneyFormatter(input.currency, locale);
+  const money = (m: number) => ansi(toMoney(m));
+  const day = (d: string) => (d ? ansi(formatDate(d, locale)) : "");
   const f = input.figures;
   const left = 50;
   const width = doc.page.width - 100;
@@ -35,7 +46,7 @@ export function renderStatementPdf(input: StatementPdfInput): Promise<Buffer> {
   doc.fillColor(MUTED).fontSize(9).text(`HANGARLINE · ${input.clubName.toUpperCase()}`, left, 50);
   doc.fillColor(INK).fontSize(20).text(`Statement for ${input.periodLabel}`, left, 66);
   doc.fontSize(10).fillColor(INK).text(input.memberName, left, 96).fillColor(MUTED).text(input.memberEmail);
-  doc.text(`Period ${f.periodStart} to ${f.periodEnd} · issued ${input.generatedOn}`, left, 126);
+  doc.text(`Period ${day(f.periodStart)} to ${day(f.periodEnd)} · issued ${day(input.generatedOn)}`, left, 126);
 
   let y = 156;
   const header = () => {
@@ -57,7 +68,7 @@ export function renderStatementPdf(input: StatementPdfInput): Promise<Buffer> {
       y = 50;
       header();
     }
-    doc.text(date, cols.date, y).text(memo, cols.memo, y, { width: 200 });
+    doc.text(day(date), cols.date, y).text(memo, cols.memo, y, { width: 200 });
     doc.text(charge, cols.charge, y, { width: amountWidth, align: "right" });
     doc.text(credit, cols.credit, y, { width: amountWidth, align: "right" });
     doc.text(balance, cols.balance, y, { width: amountWidth, align: "right" });
@@ -76,7 +87,7 @@ export function renderStatementPdf(input: StatementPdfInput): Promise<Buffer> {
   };
   total("Charges this period", money(f.chargesMinor));
   total("Payments and credits this period", money(f.creditsMinor));
-  total(`Balance at ${f.periodEnd}`, money(f.closingMinor));
+  total(`Balance at ${day(f.periodEnd)}`, money(f.closingMinor));
   total("Balance today", money(input.balanceNowMinor));
   doc.fontSize(8).fillColor(MUTED).text("A positive balance is owed to the club; a negative balance is a credit in your favour.", left, y + 10, { width });
   doc.end();

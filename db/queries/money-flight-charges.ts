@@ -1,16 +1,18 @@
+import "server-only";
 // Posting a flight's charge to the pilot's member account. Flight check-in calls
 // postFlightCharge inside its own transaction, right after it writes the flight row.
 import { and, desc, eq } from "drizzle-orm";
 import { journalEntries } from "@/db/schema";
 import type { IsoDate } from "@/lib/dates";
 import { formatMoney, meterTimeCharge, subtractExact } from "@/lib/money";
-import { accountId, memberAccountId, type DbLike } from "./accounts";
-import { LedgerError } from "./errors";
-import { postEntry, reverseEntry } from "./post-entry";
-import { dueDateFor, getMoneySettings } from "./settings";
+import { accountId, memberAccountId, type DbLike } from "./money-accounts";
+import { LedgerError } from "@/lib/money/errors";
+import { postEntry, reverseEntry } from "./money-post-entry";
+import { getMoneySettings } from "./money-settings";
+import { dueDateFor } from "@/lib/money/settings";
 
 /** Who is posting, in which club. A ClubContext (lib/server/club-context) fits. */
-export type PostingContext = { club: { id: string; currency: string }; user?: { id: string } | null };
+export type PostingContext = { club: { id: string; currency: string; locale?: string }; user?: { id: string } | null };
 
 export type FlightChargeRequest = {
   clubId: string;
@@ -87,7 +89,7 @@ export function postFlightCharge(tx: DbLike, ctx: PostingContext, flight: Flight
   const label = flight.aircraftLabel ? `${flight.aircraftLabel} ` : "";
   const lines = [];
   if (timeChargeMinor > 0) {
-    lines.push({ accountId: member, debitMinor: timeChargeMinor, memo: `${hours.toFixed(1)} h × ${formatMoney(flight.ratePerHourMinor, ctx.club.currency)}` });
+    lines.push({ accountId: member, debitMinor: timeChargeMinor, memo: `${hours.toFixed(1)} h × ${formatMoney(flight.ratePerHourMinor, ctx.club.currency, ctx.club.locale)}` });
     lines.push({ accountId: accountId(tx, ctx.club.id, "flight-income"), creditMinor: timeChargeMinor });
   }
   if (fuelCredit > 0) {
