@@ -7,7 +7,7 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
 import { currencyExponent, formatMoney, minorToDecimalString } from "@/lib/money";
-import { toCsv } from "@/lib/ledger/csv-export";
+import { writeCsv } from "@/lib/csv";
 import { ActionButton, type ServerAction } from "./action-form";
 import { ArrearsFlag } from "./money-text";
 
@@ -124,7 +124,7 @@ export function DataTable({ rows, columns, currency, csvName, label, filter, pre
   function exportCsv() {
     const exponent = currencyExponent(currency);
     const shown = table.getPrePaginationRowModel().rows.map((r) => columns.map((c) => csvValue(c, r.original[c.key] ?? null, exponent)));
-    const blob = new Blob([toCsv(columns.map((c) => c.header), shown)], { type: "text/csv;charset=utf-8" });
+    const blob = new Blob([writeCsv(columns.map((c) => c.header), shown)], { type: "text/csv;charset=utf-8" });
     const a = document.createElement("a");
     a.href = URL.createObjectURL(blob);
     a.download = `${csvName}.csv`;
