@@ -42,7 +42,8 @@ function step(name, cmd, args) {
   if (r.status !== 0) process.exit(r.status ?? 1);
 }
 
-step("migrate and seed", tsx, ["db/seed/index.ts"]);
+// The seed writes through db/queries, whose modules import "server-only": load them as the server does.
+step("migrate and seed", tsx, ["--conditions=react-server", "db/seed/index.ts"]);
 step("build", process.execPath, [next, "build"]);
 
 const children = [

@@ -8,16 +8,17 @@ import { aircraft, bankLines, clubs, duesPlans, flights, memberDues, memberships
 import { addDays, isoDateInTimeZone, type IsoDate } from "@/lib/dates";
 import { accountId, memberAccountId } from "@/lib/ledger/accounts";
 import { memberMovements } from "@/lib/ledger/balances";
-import { parseStatementFile, storeStatement } from "@/lib/ledger/bank-import";
-import { bankViewCsv, bankViewOf } from "@/lib/ledger/bank-view";
+import { storeStatement } from "@/db/queries/money-reconcile-import";
+import { parseStatementFile } from "@/lib/reconcile";
+import { bankViewCsv, bankViewOf } from "@/db/queries/money-reconcile-bank-view";
 import { runBillingPeriod } from "@/lib/ledger/billing";
 import { recordCardPayment, recordPayoutShare } from "@/lib/ledger/card-payments";
 import { postFlightCharge } from "@/lib/ledger/flight-charges";
 import { fuelCreditMinor } from "@/lib/ledger/fuel-credit";
 import { monthOf, monthRange, shiftMonthKey } from "@/lib/ledger/months";
 import { postEntry } from "@/lib/ledger/post-entry";
-import { autoMatchStatement } from "@/lib/ledger/reconciliation";
-import { bookBankLine, lockPeriod } from "@/lib/ledger/reconcile-edits";
+import { autoMatchStatement } from "@/db/queries/money-reconcile-match";
+import { bookBankLine, lockPeriod } from "@/db/queries/money-reconcile-edits";
 import type { SeededFoundation } from "./foundation";
 
 type ClubKey = "cottonwood" | "lakeshore" | "silberau";

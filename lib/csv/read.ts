@@ -42,7 +42,7 @@ export function readCsvRecords(text: string, delimiter = ","): CsvRecord[] {
         lastEnd = context.lines;
         return record;
       },
-    }) as { record: string[]; info: { lines: number } }[];
+    }) as unknown as { record: string[]; info: { lines: number } }[];
     return rows.map(({ record, info }) => {
       // info.lines is the line the record ends on; line breaks inside its quoted fields move the start up.
       const inside = record.reduce((n, f) => n + (f.match(LINE_BREAK)?.length ?? 0), 0);

@@ -2,8 +2,9 @@
 import { z } from "zod";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
-import { parseStatementFile, storeStatement } from "@/lib/ledger/bank-import";
-import { autoMatchStatement } from "@/lib/ledger/reconciliation";
+import { storeStatement } from "@/db/queries/money-reconcile-import";
+import { parseStatementFile } from "@/lib/reconcile";
+import { autoMatchStatement } from "@/db/queries/money-reconcile-match";
 import type { CsvMapping } from "@/lib/reconcile";
 import { writeAudit } from "@/lib/server/audit";
 import { bankImportSchema, type BankImportInput } from "@/lib/validation/money";

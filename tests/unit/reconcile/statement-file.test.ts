@@ -1,7 +1,7 @@
 // Reading a bank statement for import. CSV per RFC 4180 with a byte-order mark; OFX 1.0.2 (SGML)
 // as the OFX specification lays it out (OFX header, <STMTRS>, <BANKTRANLIST>, <LEDGERBAL>).
 import { describe, expect, it } from "vitest";
-import { dedupeKeys, parseStatementFile } from "@/lib/ledger/bank-import";
+import { dedupeKeys, parseStatementFile } from "@/lib/reconcile";
 
 const mapping = { date: "Date", description: "Description", amount: "Amount", reference: "Reference" };
 
