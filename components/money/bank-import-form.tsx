@@ -3,8 +3,7 @@ import { FieldOf, type FieldSpec } from "@/components/money/action-form";
 import { FormShell } from "@/components/ui/form-shell";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { useFormAction } from "@/components/ui/use-form-action";
-import type { BankImportAnswer } from "@/lib/actions/money/import-bank-statement";
-import { importBankStatement } from "@/lib/actions/money/import-bank-statement";
+import { importBankStatement, type BankImportAnswer } from "@/lib/actions/money/import-bank-statement";
 
 function fieldsFor(currency: string): FieldSpec[] {
   return [

@@ -14,7 +14,7 @@ export type StatementAccount = {
   /** What the form sends back to choose it: its place in the file and the last digits. */
   key: string;
   maskedId: string;
-  /** ACCTTYPE (CHECKING, SAVINGS, …), "CREDIT CARD" for a card statement, or "" when not given. */
+  /** ACCTTYPE (CHECKING, SAVINGS, …), or "" when the file does not say (a card statement has none). */
   type: string;
   currency: string;
   transactions: number;
@@ -50,7 +50,7 @@ function accountOf(st: OfxStatement, index: number): StatementAccount {
   return {
     key: `${index + 1}-${id.slice(-4) || "none"}`,
     maskedId: maskAccountId(st.accountId),
-    type: st.accountType ?? (st.bankId === undefined && st.accountId !== undefined ? "CREDIT CARD" : ""),
+    type: st.accountType ?? "",
     currency: (st.currency ?? "").toUpperCase(),
     transactions: st.lines.length,
     firstDate: st.start ?? dates[0] ?? null,
