@@ -21,7 +21,7 @@ export type FieldSpec = {
   checked?: boolean;
 };
 
-function FieldOf({ spec, errors }: { spec: FieldSpec; errors?: string[] }) {
+export function FieldOf({ spec, errors }: { spec: FieldSpec; errors?: string[] }) {
   const { name, label, type = "text", options = [], defaultValue, hint, placeholder, inputMode, accept, checked } = spec;
   if (type === "select") {
     return (

@@ -8,7 +8,7 @@ import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
 import { currencyExponent, DEFAULT_LOCALE, formatMoney, minorToDecimalString } from "@/lib/money";
 import { formatDate, isIsoDate } from "@/lib/dates";
-import { toCsv } from "@/lib/ledger/csv-export";
+import { writeCsv } from "@/lib/csv";
 import { ActionButton, type ServerAction } from "./action-form";
 import { ArrearsFlag } from "./money-text";
 
@@ -125,7 +125,7 @@ export function DataTable({ rows, columns, currency, locale, csvName, label, fil
   function exportCsv() {
     const exponent = currencyExponent(currency);
     const shown = table.getPrePaginationRowModel().rows.map((r) => columns.map((c) => csvValue(c, r.original[c.key] ?? null, exponent)));
-    const blob = new Blob([toCsv(columns.map((c) => c.header), shown)], { type: "text/csv;charset=utf-8" });
+    const blob = new Blob([writeCsv(columns.map((c) => c.header), shown)], { type: "text/csv;charset=utf-8" });
     const a = document.createElement("a");
     a.href = URL.createObjectURL(blob);
     a.download = `${csvName}.csv`;

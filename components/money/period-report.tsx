@@ -1,4 +1,4 @@
-import type { PeriodReport } from "@/lib/ledger/reconciliation";
+import type { PeriodReport } from "@/db/queries/money-reconcile-match";
 import { formatMoney } from "@/lib/money";
 
 type Report = Pick<PeriodReport, "statementBalanceMinor" | "bookBalanceMinor" | "depositsInTransitMinor" | "outstandingChequesMinor" | "bankChargesMinor" | "bankCreditsMinor" | "adjustedBankBalanceMinor" | "adjustedBookBalanceMinor" | "differenceMinor" | "agrees" | "periodEnd" | "depositsInTransit" | "outstandingCheques" | "bankItemsNotInBooks">;

@@ -5,7 +5,7 @@ import { bankLines, bankStatements, journalEntries, journalLines, reconciliation
 import { addDays } from "@/lib/dates";
 import { lockedThrough } from "@/db/queries/money-post-entry";
 import { bookableAccounts } from "./money-chart";
-import { openPayouts, periodReport, unmatchedBookLines } from "@/lib/ledger/reconciliation";
+import { openPayouts, periodReport, unmatchedBookLines } from "./money-reconcile-match";
 
 export function listBankStatements(db: Db, clubId: string) {
   const rows = db.select().from(bankStatements).where(eq(bankStatements.clubId, clubId)).orderBy(desc(bankStatements.periodEnd), desc(bankStatements.createdAt)).all();

@@ -8,16 +8,17 @@ import { aircraft, bankLines, clubs, duesPlans, flights, memberDues, memberships
 import { addDays, isoDateInTimeZone, type IsoDate } from "@/lib/dates";
 import { accountId, memberAccountId } from "@/db/queries/money-accounts";
 import { memberMovements } from "@/db/queries/money-member-balances";
-import { parseStatementFile, storeStatement } from "@/lib/ledger/bank-import";
-import { bankViewCsv, bankViewOf } from "@/lib/ledger/bank-view";
+import { storeStatement } from "@/db/queries/money-reconcile-import";
+import { parseStatementFile } from "@/lib/reconcile";
+import { bankViewCsv, bankViewOf } from "@/db/queries/money-reconcile-bank-view";
 import { runBillingPeriod } from "@/db/queries/money-billing-run";
 import { recordCardPayment, recordPayoutShare } from "@/db/queries/money-card-payments";
 import { postFlightCharge } from "@/db/queries/money-flight-charges";
 import { fuelCreditMinor } from "@/lib/money/fuel-credit";
 import { monthOf, monthRange, shiftMonthKey } from "@/lib/money/months";
 import { postEntry } from "@/db/queries/money-post-entry";
-import { autoMatchStatement } from "@/lib/ledger/reconciliation";
-import { bookBankLine, lockPeriod } from "@/lib/ledger/reconcile-edits";
+import { autoMatchStatement } from "@/db/queries/money-reconcile-match";
+import { bookBankLine, lockPeriod } from "@/db/queries/money-reconcile-edits";
 import type { SeededFoundation } from "./foundation";
 
 type ClubKey = "cottonwood" | "lakeshore" | "silberau";

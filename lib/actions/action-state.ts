@@ -24,6 +24,8 @@ export class ActionError extends Error {
     message: string,
     readonly fieldErrors: Record<string, string[]> = {},
     readonly code: "invalid" | "forbidden" | "not_found" | "conflict" = "invalid",
+    /** What the form needs to ask again (e.g. the accounts found in a statement file); nothing was written. */
+    readonly data?: unknown,
   ) {
     super(message);
   }

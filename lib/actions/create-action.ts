@@ -39,8 +39,8 @@ export function zodFieldErrors(error: z.ZodError): Record<string, string[]> {
  */
 type Outcome<R> = { message?: string; data?: R; redirectTo?: string; refresh?: boolean };
 
-function fail(message: string, fieldErrors: Record<string, string[]> = {}): ActionState<never> {
-  return { ok: false, message, fieldErrors };
+function fail(message: string, fieldErrors: Record<string, string[]> = {}, data?: unknown): ActionState<never> {
+  return data === undefined ? { ok: false, message, fieldErrors } : { ok: false, message, fieldErrors, data: data as never };
 }
 
 async function settle<R>(work: () => Promise<Outcome<R>>, successMessage: string): Promise<ActionState<R>> {
@@ -48,7 +48,7 @@ async function settle<R>(work: () => Promise<Outcome<R>>, successMessage: string
   try {
     outcome = await work();
   } catch (error) {
-    if (error instanceof ActionError) return fail(error.message, error.fieldErrors);
+    if (error instanceof ActionError) return fail(error.message, error.fieldErrors, error.data);
     logError("action", "unexpected failure", error);
     return fail("Something went wrong and nothing was saved. Try again; if it keeps failing, tell a club admin.");
   }

@@ -11,6 +11,8 @@ export type CsvMapping = {
   /** Several columns (e.g. payee and memo) are joined with a space; absent → empty descriptions. */
   description?: CsvColumnRef | readonly CsvColumnRef[];
   reference?: CsvColumnRef;
+  /** A column naming each row's currency (ISO 4217), when the bank's export has one. */
+  currency?: CsvColumnRef;
   /** One signed amount column … */
   amount?: CsvColumnRef;
   /** … read with this convention (default "deposits-positive"). */
@@ -82,6 +84,7 @@ type Columns = {
   date: Resolved;
   description: Resolved[];
   reference?: Resolved;
+  currency?: Resolved;
   amount?: Resolved;
   debit?: Resolved;
   credit?: Resolved;
@@ -113,7 +116,11 @@ function readAmount(record: CsvRecord, cols: Columns, m: CsvMapping): number {
   return into - out;
 }
 
-function readRecord(record: CsvRecord, cols: Columns, m: CsvMapping): BankLine {
+function readRecord(record: CsvRecord, cols: Columns, m: CsvMapping, expected: string | undefined): BankLine {
+  const currency = optionalCell(record, cols.currency).toUpperCase();
+  if (expected && currency && currency !== expected.toUpperCase()) {
+    throw new ReconcileParseError(`the row is in ${currency}; the club's books are in ${expected.toUpperCase()}`, { row: record.line, column: cols.currency!.label });
+  }
   let date: string;
   try {
     date = parseDateText(cellOf(record, cols.date), m.dateFormat ?? "ISO");
@@ -132,9 +139,10 @@ function readRecord(record: CsvRecord, cols: Columns, m: CsvMapping): BankLine {
 
 /**
  * Reads every data row, collecting one error per unreadable row instead of stopping, so the
- * import screen can list them all. Rows whose fields are all blank are skipped.
+ * import screen can list them all. Rows whose fields are all blank are skipped. With
+ * `opts.currency` (the club's), a row whose mapped currency column names another is refused.
  */
-export function parseCsvReport(text: string, mapping: CsvMapping): CsvReport {
+export function parseCsvReport(text: string, mapping: CsvMapping, opts: { currency?: string } = {}): CsvReport {
   checkMapping(mapping);
   const records = splitCsvRecords(text, mapping.delimiter ?? ",").slice(mapping.skipRows ?? 0);
   const hasHeader = mapping.hasHeader ?? true;
@@ -148,6 +156,7 @@ export function parseCsvReport(text: string, mapping: CsvMapping): CsvReport {
     date: resolve(mapping.date),
     description: (descriptionRefs as readonly CsvColumnRef[]).map(resolve),
     reference: optional(mapping.reference),
+    currency: optional(mapping.currency),
     amount: optional(mapping.amount),
     debit: optional(mapping.debit),
     credit: optional(mapping.credit),
@@ -157,7 +166,7 @@ export function parseCsvReport(text: string, mapping: CsvMapping): CsvReport {
   for (const record of hasHeader ? records.slice(1) : records) {
     if (record.fields.every((f) => f.trim() === "")) continue;
     try {
-      lines.push(readRecord(record, cols, mapping));
+      lines.push(readRecord(record, cols, mapping, opts.currency));
     } catch (e) {
       if (!(e instanceof ReconcileParseError)) throw e;
       errors.push(e);

@@ -31,3 +31,13 @@ export {
   type ReconciliationInput,
   type ReconciliationSummary,
 } from "./summary";
+export {
+  dedupeKeys,
+  describeAccount,
+  maskAccountId,
+  parseStatementFile,
+  type ParsedStatement,
+  type ParsedStatementLine,
+  type StatementAccount,
+  type StatementFileInput,
+} from "./statement-file";

@@ -11,6 +11,13 @@ export type OfxStatementLine = BankLine & {
   /** TRNTYPE: CREDIT, DEBIT, CHECK, DEP, FEE, … */
   type?: string;
   checkNumber?: string;
+  /**
+   * <CURRENCY><CURSYM>: the amount is in this currency, not the statement's CURDEF (OFX 2.x
+   * specification, STMTTRN's CURRENCY aggregate).
+   */
+  currency?: string;
+  /** <ORIGCURRENCY><CURSYM>: the bank converted the amount into CURDEF from this currency. */
+  originalCurrency?: string;
 };
 
 export type OfxBalance = { amountMinor: number; asOf: string };
@@ -75,7 +82,10 @@ function readField<T>(node: OfxNode, name: string, read: (v: string) => T): T {
   }
 }
 
-function readTransaction(trn: OfxNode, exponent: number): OfxStatementLine {
+function readTransaction(trn: OfxNode, defaultExponent: number): OfxStatementLine {
+  // An amount in another currency is counted in that currency's minor unit.
+  const own = valueAt(trn, "CURRENCY", "CURSYM");
+  const exponent = own ? exponentOf(own) : defaultExponent;
   const date = readField(trn, "DTPOSTED", parseOfxDate);
   const amountMinor = readField(trn, "TRNAMT", (v) => readAmount(v, exponent));
   const name = valueAt(trn, "NAME") || valueAt(trn, "PAYEE", "NAME") || "";
@@ -90,6 +100,10 @@ function readTransaction(trn: OfxNode, exponent: number): OfxStatementLine {
   const type = valueAt(trn, "TRNTYPE");
   if (type) line.type = type;
   if (checkNumber !== undefined) line.checkNumber = checkNumber;
+  const currency = valueAt(trn, "CURRENCY", "CURSYM");
+  if (currency) line.currency = currency.toUpperCase();
+  const original = valueAt(trn, "ORIGCURRENCY", "CURSYM");
+  if (original) line.originalCurrency = original.toUpperCase();
   return line;
 }
 

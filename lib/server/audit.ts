@@ -7,7 +7,7 @@ export type AuditAction =
   | "aircraft.create" | "aircraft.update" | "inspection.item.create" | "inspection.item.update" | "inspection.record"
   | "squawk.triage" | "squawk.close" | "grounding.issue" | "grounding.lift" | "flight.meter.review"
   | "money.billing.run" | "money.plan.save" | "money.plan.assign" | "money.payment.manual" | "money.payment.refund"
-  | "money.entry.adjust" | "money.entry.reverse" | "money.bank.import" | "money.bank.match" | "money.bank.unmatch"
+  | "money.entry.adjust" | "money.entry.reverse" | "money.bank.import" | "money.bank.correct" | "money.bank.remove" | "money.bank.match" | "money.bank.unmatch"
   | "money.bank.ignore" | "money.bank.book" | "money.period.lock" | "money.rates.save" | "money.settings.save"
   | "money.reminders.send" | "money.statement.email"
   | "bulletin.create" | "bulletin.draft.update" | "bulletin.publish" | "bulletin.remind"

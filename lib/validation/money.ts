@@ -126,6 +126,15 @@ export const bankImportSchema = z
     creditColumn: column,
     descriptionColumn: column,
     referenceColumn: column,
+    currencyColumn: column,
+    /** For an OFX file holding several accounts: the one to import (its key from the list offered). */
+    account: z
+      .string()
+      .trim()
+      .max(40, { error: "Choose one of the accounts found in the file." })
+      .regex(/^(\d{1,3}-[^\s]{1,8})?$/, { error: "Choose one of the accounts found in the file." })
+      .optional()
+      .transform((v) => v || undefined),
     sign: z.enum(["deposits-positive", "deposits-negative"], { error: "Choose how the amount column is signed." }).default("deposits-positive"),
     dateFormat: z.enum(DATE_FORMATS, { error: "Choose the date format of the file." }).default("ISO"),
     delimiter: z.enum([",", ";", "tab"], { error: "Choose the separator." }).default(","),
@@ -140,6 +149,8 @@ export const bankImportSchema = z
   });
 
 export const statementIdSchema = z.object({ statementId: id("a statement") });
+/** A mistyped closing balance corrected. */
+export const correctStatementSchema = z.object({ statementId: id("a statement"), closingBalance: signedAmountField("the closing balance printed on the statement") });
 export const bankLineSchema = z.object({ bankLineId: id("a bank line") });
 export const ignoreLineSchema = z.object({ bankLineId: id("a bank line"), ignored: z.enum(["true", "false"]).transform((v) => v === "true") });
 

@@ -9,7 +9,7 @@ import { approveBillAction } from "@/lib/actions/money/approve-bill";
 import { enterBillAction } from "@/lib/actions/money/enter-bill";
 import { payBillAction } from "@/lib/actions/money/pay-bill";
 import { saveBillApprovalAction } from "@/lib/actions/money/save-bill-approval";
-import { unmatchedBookLines } from "@/lib/ledger/reconciliation";
+import { unmatchedBookLines } from "@/db/queries/money-reconcile-match";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { callRoute, pngFile } from "./fleet-helpers";

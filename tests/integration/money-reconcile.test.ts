@@ -10,7 +10,7 @@ import { postAdjustment } from "@/lib/actions/money/post-adjustment";
 import { bookLine, ignoreLine, lockReconciledPeriod, matchBankLine, unmatchLine } from "@/lib/actions/money/reconcile-lines";
 import { recordManualPayment } from "@/lib/actions/money/record-manual-payment";
 import { recordCardPayment, recordPayoutShare } from "@/db/queries/money-card-payments";
-import { periodReport } from "@/lib/ledger/reconciliation";
+import { periodReport } from "@/db/queries/money-reconcile-match";
 import { EMPTY, clubBySlug, db, expectRedirect, form, seedOnce, signInAs } from "./helpers";
 
 const CLUB = "cottonwood-flyers";

@@ -10,10 +10,11 @@ import { demoBankStatement, seedMoney } from "@/db/seed/money";
 import { seedSafety } from "@/db/seed/safety";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { membersInArrears } from "@/db/queries/money-arrears";
-import { parseStatementFile, storeStatement } from "@/lib/ledger/bank-import";
+import { parseStatementFile } from "@/lib/reconcile";
+import { storeStatement } from "@/db/queries/money-reconcile-import";
 import { monthOf, monthRange, shiftMonthKey } from "@/lib/money/months";
-import { autoMatchStatement } from "@/lib/ledger/reconciliation";
-import { bookBankLine, lockPeriod } from "@/lib/ledger/reconcile-edits";
+import { autoMatchStatement } from "@/db/queries/money-reconcile-match";
+import { bookBankLine, lockPeriod } from "@/db/queries/money-reconcile-edits";
 import { db } from "./helpers";
 
 let seconds = 0;

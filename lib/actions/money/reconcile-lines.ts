@@ -1,7 +1,7 @@
 "use server";
 import { clubAction } from "@/lib/actions/create-action";
-import { autoMatchStatement } from "@/lib/ledger/reconciliation";
-import { bookBankLine, lockPeriod, matchManually, setLineIgnored, undoMatch } from "@/lib/ledger/reconcile-edits";
+import { autoMatchStatement } from "@/db/queries/money-reconcile-match";
+import { bookBankLine, lockPeriod, matchManually, setLineIgnored, undoMatch } from "@/db/queries/money-reconcile-edits";
 import { formatMoney } from "@/lib/money";
 import { writeAudit } from "@/lib/server/audit";
 import type { ClubContext } from "@/lib/server/club-context";

@@ -26,7 +26,7 @@ describe("parseCsv", () => {
     expect(parseCsv(text, signed)).toEqual([
       { date: "2025-03-03", amountMinor: 125000, description: "Dues, March", reference: "DUE-301" },
       { date: "2025-03-04", amountMinor: -48000, description: 'Cheque "1042" to hangar', reference: "001042" },
-      { date: "2025-03-05", amountMinor: 7550, description: "Deposit\r\nsecond line" }, // blank Ref → no reference
+      { date: "2025-03-05", amountMinor: 7550, description: "Deposit\nsecond line" }, // blank Ref → no reference; a line break inside quotes is read as LF
     ]);
   });
   it("matches header names without regard to case or padding, and columns by index", () => {

@@ -1,11 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { ActionForm } from "@/components/money/action-form";
+import { BankImportForm } from "@/components/money/bank-import-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
 import { listBankStatements } from "@/db/queries/money-reconcile";
-import { importBankStatement } from "@/lib/actions/money/import-bank-statement";
 import { lockedThrough } from "@/db/queries/money-post-entry";
 import { explainDenied, can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
@@ -45,33 +44,9 @@ export default async function ReconciliationPage({ params }: { params: Promise<{
       </section>
       <section className="card mt-8 max-w-3xl" aria-labelledby="imp-h">
         <h2 id="imp-h" className="mb-1 text-lg font-bold">Import a bank statement</h2>
-        <p className="mb-3 text-sm text-ink-700">OFX files carry their own balance and period. For CSV, say which columns hold what (by header name), and enter the closing balance printed on the statement. Lines already imported are skipped, and matching runs straight away.</p>
+        <p className="mb-3 text-sm text-ink-700">OFX files carry their own balance and period; when one holds several accounts you choose which to import. A file or line in a currency other than the club's ({club.currency}) is refused. For CSV, say which columns hold what (by header name), and enter the closing balance printed on the statement. Lines already imported are skipped, and matching runs straight away.</p>
         {can(ability, "reconcile", "Reconciliation") ? (
-          <ActionForm
-            action={importBankStatement}
-            slug={club.slug}
-            label="Import a bank statement"
-            submitLabel="Import and match"
-            pendingText="Importing…"
-            grid
-            fields={[
-              { name: "file", label: "Statement file", type: "file", accept: ".csv,.ofx,.qfx,text/csv,application/x-ofx" },
-              { name: "format", label: "Format", type: "select", options: [{ value: "csv", label: "CSV (spreadsheet export)" }, { value: "ofx", label: "OFX" }] },
-              { name: "closingBalance", label: `Closing balance (${club.currency})`, inputMode: "decimal", hint: "As printed on the statement. Optional for OFX." },
-              { name: "dateColumn", label: "Date column", defaultValue: "Date" },
-              { name: "amountColumn", label: "Amount column", defaultValue: "Amount", hint: "Or leave empty and give debit and credit columns." },
-              { name: "descriptionColumn", label: "Description column(s)", defaultValue: "Description", hint: "Join several with +, e.g. Payee + Memo." },
-              { name: "referenceColumn", label: "Reference column", defaultValue: "Reference" },
-              { name: "debitColumn", label: "Debit column (money out)" },
-              { name: "creditColumn", label: "Credit column (money in)" },
-              { name: "sign", label: "The amount column shows deposits as", type: "select", options: [{ value: "deposits-positive", label: "Positive numbers" }, { value: "deposits-negative", label: "Negative numbers" }] },
-              { name: "dateFormat", label: "Dates look like", type: "select", options: [{ value: "ISO", label: "2026-04-30" }, { value: "MM/DD/YYYY", label: "04/30/2026" }, { value: "DD/MM/YYYY", label: "30/04/2026" }, { value: "DD.MM.YYYY", label: "30.04.2026" }] },
-              { name: "delimiter", label: "Separator", type: "select", options: [{ value: ",", label: "Comma" }, { value: ";", label: "Semicolon" }, { value: "tab", label: "Tab" }] },
-              { name: "periodStart", label: "First day (optional)", type: "date" },
-              { name: "periodEnd", label: "Last day (optional)", type: "date" },
-              { name: "decimalComma", label: "Amounts use a decimal comma (12,50)", type: "checkbox" },
-            ]}
-          />
+          <BankImportForm slug={club.slug} currency={club.currency} />
         ) : (
           <p className="text-sm text-ink-500">{explainDenied("reconcile", "Reconciliation")}</p>
         )}

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { journalLinesForExport, listJournal } from "@/db/queries/money-ledger";
 import { minorToDecimalString, currencyExponent } from "@/lib/money";
-import { toCsv } from "@/lib/ledger/csv-export";
+import { writeCsv } from "@/lib/csv";
 import { apiError, withClub } from "@/lib/server/api";
 import { isoDateField } from "@/lib/validation/money";
 import { can } from "@/permissions";
@@ -27,7 +27,7 @@ export async function GET(req: Request, { params }: { params: Promise<{ club: st
     if (!can(ctx.ability, "export", "Ledger")) return apiError("forbidden", "Only a treasurer or club admin can export the journal.");
     const exp = currencyExponent(ctx.club.currency);
     const rows = journalLinesForExport(ctx.db, ctx.club.id, range);
-    const csv = toCsv(
+    const csv = writeCsv(
       ["Date", "Entry", "Kind", "Memo", "Reference", "Account code", "Account", "Debit", "Credit", "Currency"],
       rows.map((r) => [r.date, r.entryId, r.kind, r.memo, r.reference ?? "", r.accountCode, r.account, r.debitMinor ? minorToDecimalString(r.debitMinor, exp) : "", r.creditMinor ? minorToDecimalString(r.creditMinor, exp) : "", r.currency]),
     );

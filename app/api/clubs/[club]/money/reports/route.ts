@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { reportPostings } from "@/db/queries/money-reports";
 import { currencyExponent, minorToDecimalString } from "@/lib/money";
-import { writeCsv } from "@/lib/money/csv";
+import { writeCsv } from "@/lib/csv";
 import { balanceSheet, balanceSheetLines, profitAndLoss } from "@/lib/money/reports";
 import { apiError, withClub } from "@/lib/server/api";
 import { reportAsOfSchema, reportPeriodSchema } from "@/lib/validation/money";

@@ -1,6 +1,6 @@
 import { bulletinAckStats, getBulletin } from "@/db/queries/safety-bulletins";
 import { apiError, withClub } from "@/lib/server/api";
-import { toCsv } from "@/lib/safety/csv";
+import { writeCsv } from "@/lib/csv";
 import { isRecordId } from "@/lib/validation/primitives";
 
 export const dynamic = "force-dynamic";
@@ -13,7 +13,7 @@ export async function GET(_req: Request, { params }: { params: Promise<{ club: s
     const bulletin = getBulletin(ctx.db, ctx.club.id, bulletinId);
     if (!bulletin || bulletin.status !== "published") return apiError("not_found", "Not found.");
     const stats = bulletinAckStats(ctx.db, ctx.club.id, bulletin);
-    const csv = toCsv(
+    const csv = writeCsv(
       ["Bulletin", "Version", "Member", "E-mail", "Acknowledged", "Acknowledged at (UTC)", "Deadline"],
       stats.rows.map((r) => [bulletin.title, bulletin.version, r.name ?? "", r.email, r.acknowledgedAt ? "yes" : "no", r.acknowledgedAt?.toISOString() ?? "", bulletin.acknowledgeBy ?? ""]),
     );

@@ -2,13 +2,14 @@
 // withdrawal on the bank account a day after it was booked, each card payout on its arrival
 // date, and a monthly account fee the books do not have yet. The demo seed reconciles its
 // past months with it, and the tests build the statement a treasurer would import.
+import "server-only";
 import { and, eq, notInArray } from "drizzle-orm";
 import { cardPayouts, journalEntries, journalLines } from "@/db/schema";
 import { addDays, type IsoDate } from "@/lib/dates";
 import { minorToDecimalString } from "@/lib/money";
-import { accountId, type DbLike } from "./accounts";
-import { toCsv } from "./csv-export";
-import { monthRange } from "./months";
+import { writeCsv } from "@/lib/csv";
+import { accountId, type DbLike } from "@/lib/ledger/accounts";
+import { monthRange } from "@/lib/ledger/months";
 
 export type BankViewLine = { date: IsoDate; amountMinor: number; description: string; reference?: string };
 
@@ -66,7 +67,7 @@ export function bankViewOf(tx: DbLike, clubId: string, month: string, opts: Bank
 
 /** The view as the bank's CSV export: Date, Description, Amount (deposits positive), Reference. */
 export function bankViewCsv(view: BankView, exponent = 2): string {
-  return toCsv(
+  return writeCsv(
     ["Date", "Description", "Amount", "Reference"],
     view.lines.map((l) => [l.date, l.description, minorToDecimalString(l.amountMinor, exponent), l.reference ?? ""]),
   );

@@ -1,14 +1,15 @@
 // Bank reconciliation against the books: which bank-account postings and card payouts a
 // statement line is, and the period report (standard accounting practice: adjusted bank
 // balance = statement + deposits in transit − outstanding cheques = adjusted book balance).
+import "server-only";
 import { and, eq, inArray, isNull, lte, ne, notExists, sql } from "drizzle-orm";
 import { bankLines, bankStatements, cardPayouts, journalEntries, journalLines, paymentRefunds, payments, reconciliationMatches } from "@/db/schema";
 import { addDays, type IsoDate } from "@/lib/dates";
 import { autoMatch, reconciliationSummary, type BookItem, type ReconciliationSummary } from "@/lib/reconcile";
-import { accountId, type DbLike } from "./accounts";
-import { LedgerError } from "./errors";
+import { accountId, type DbLike } from "@/lib/ledger/accounts";
+import { LedgerError } from "@/lib/ledger/errors";
+import { lockedThrough, openPostingDate, postEntries, postEntry } from "@/lib/ledger/post-entry";
 import { firstOpenDay, lockedPeriodNote } from "@/lib/money/open-period";
-import { lockedThrough, openPostingDate, postEntries, postEntry } from "./post-entry";
 
 export type BookLineItem = { id: string; journalLineId: string; entryId: string; date: IsoDate; amountMinor: number; memo: string; reference: string | null; kind: string };
 export type PayoutItem = { id: string; cardPayoutId: string; payoutId: string; date: IsoDate; amountMinor: number; feeMinor: number; carried: number };

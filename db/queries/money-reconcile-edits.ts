@@ -1,13 +1,14 @@
 // The treasurer's hand work in the reconciliation workspace: match (one bank line to one or
 // several book items — a split), book a bank item the books do not have yet, set a line aside,
 // undo a match, and lock the period once it agrees.
+import "server-only";
 import { and, eq, inArray, isNull } from "drizzle-orm";
 import { bankLines, bankStatements, cardPayouts, journalLines, ledgerAccounts, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
 import { formatMoney } from "@/lib/money";
-import { accountId, RECEIVABLES, type DbLike } from "./accounts";
-import { LedgerError } from "./errors";
-import { assertDateOpen, postEntry, reverseEntry } from "./post-entry";
-import { getOpenBankLine, matchPayout, openPayouts, periodReport, unmatchedBookLines, type PeriodReport } from "./reconciliation";
+import { accountId, RECEIVABLES, type DbLike } from "@/lib/ledger/accounts";
+import { LedgerError } from "@/lib/ledger/errors";
+import { assertDateOpen, postEntry, reverseEntry } from "@/lib/ledger/post-entry";
+import { getOpenBankLine, matchPayout, openPayouts, periodReport, unmatchedBookLines, type PeriodReport } from "./money-reconcile-match";
 
 type Actor = { clubId: string; userId: string | null; currency: string };
 
