@@ -1,3 +1,4 @@
+import { defaultLocaleFor } from "@/lib/money/locale";
 import type { Db } from "@/db/client";
 import { clubs, memberships, operatorAssignments, users } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/password";
@@ -13,7 +14,7 @@ export async function seedFoundation(db: Db, opts: { joinedOn?: string } = {}): 
     const clubIds: Record<string, string> = {};
     for (const c of DEMO_CLUBS) {
       const settings = defaultClubSettings({ ...(c.key === "lakeshore" ? { recencyDaysInType: 60 } : {}), homeLatitude: c.home.latitude, homeLongitude: c.home.longitude });
-      const [row] = tx.insert(clubs).values({ slug: c.slug, name: c.name, timeZone: c.timeZone, currency: c.currency, unitSystem: c.unitSystem, settings }).returning({ id: clubs.id }).all();
+      const [row] = tx.insert(clubs).values({ slug: c.slug, name: c.name, timeZone: c.timeZone, currency: c.currency, locale: defaultLocaleFor(c.currency, c.timeZone), unitSystem: c.unitSystem, settings }).returning({ id: clubs.id }).all();
       clubIds[c.key] = row!.id;
     }
     const userIds: Record<string, string> = {};

@@ -19,7 +19,8 @@ describe("money in the browser", () => {
     await signIn(page, "silberau.pilot@hangarline.test");
     await page.goto("/clubs/aeroclub-silberau/account");
     const before = (await page.getByTestId("account-balance").textContent()) ?? "";
-    expect(before).toMatch(/€[1-9]/);
+    // The euro club's locale is de-DE (migration 0026): amounts read "2.893,06 €" (CLDR de, ECMA-402 Intl.NumberFormat).
+    expect(before).toMatch(/^[1-9][\d.]*,\d{2}\u00a0€$/);
     await page.getByRole("button", { name: /^Pay .* by card$/ }).click();
     await page.waitForURL((url) => url.href.startsWith(`${paymentsUrl}/pay/`));
 
@@ -36,11 +37,11 @@ describe("money in the browser", () => {
     await fill("4242 4242 4242 4242");
     await page.waitForURL(/\/clubs\/aeroclub-silberau\/account\/paid\?session=/);
     await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Thank you: payment received");
-    await expect(page.getByTestId("balance-after").textContent()).resolves.toBe("€0.00");
+    await expect(page.getByTestId("balance-after").textContent()).resolves.toBe("0,00\u00a0€");
     await screenshot(page, "money-paid-desktop");
 
     await page.goto("/clubs/aeroclub-silberau/account");
-    await expect(page.getByTestId("account-balance").textContent()).resolves.toBe("€0.00");
+    await expect(page.getByTestId("account-balance").textContent()).resolves.toBe("0,00\u00a0€");
     await expect(page.getByText("Nothing to pay right now.").count()).resolves.toBe(1);
     const phone = await newPage("phone");
     await signIn(phone, "silberau.pilot@hangarline.test");

@@ -23,7 +23,7 @@ describe("operator console", () => {
     expect(summaries.map((s) => s.slug).sort()).toEqual(["aeroclub-silberau", "cottonwood-flyers", "lakeshore-aero"]);
     for (const s of summaries) {
       // Club facts, then numbers only: no list of people anywhere in the shape.
-      expect(Object.keys(s).sort()).toEqual(["activeMembers", "admins", "currency", "fleet", "id", "name", "receivables", "slug", "timeZone", "unitSystem"]);
+      expect(Object.keys(s).sort()).toEqual(["activeMembers", "admins", "currency", "fleet", "id", "locale", "name", "receivables", "slug", "timeZone", "unitSystem"]);
       expect(Object.keys(s.fleet).sort()).toEqual(["flyable", "grounded", "limited", "unknown"]);
       expect(Object.keys(s.receivables).sort()).toEqual(["over30Minor", "over90Minor", "totalMinor"]);
       for (const n of [s.activeMembers, s.admins, ...Object.values(s.fleet), ...Object.values(s.receivables)]) expect(Number.isInteger(n)).toBe(true);
