@@ -12,6 +12,7 @@ import { closeYearAction } from "@/lib/actions/money/close-year";
 import { createRecurringBillAction } from "@/lib/actions/money/create-recurring-bill";
 import { enterBillAction } from "@/lib/actions/money/enter-bill";
 import { produceDueBillsAction } from "@/lib/actions/money/produce-due-bills";
+import { reverseJournalEntry } from "@/lib/actions/money/reverse-entry";
 import { saveBudgetAction } from "@/lib/actions/money/save-budget";
 import { setRecurringBillStatusAction } from "@/lib/actions/money/set-recurring-bill-status";
 import { isoDateInTimeZone, startOfMonthAfter } from "@/lib/dates";
@@ -35,7 +36,7 @@ describe("the treasurer's books: recurring bills, budget, year-end close, PDF", 
     const club = clubBySlug(SLUG);
     clubId = club.id;
     today = isoDateInTimeZone(new Date(), club.timeZone);
-  });
+  }, 120_000);
 
   it("a recurring bill enters each due period once, through the one bill path; paused and ended ones enter nothing", async () => {
     signInAs(MEMBER);
@@ -148,6 +149,10 @@ describe("the treasurer's books: recurring bills, budget, year-end close, PDF", 
     const entry = db().select().from(journalEntries).where(and(eq(journalEntries.clubId, clubId), eq(journalEntries.kind, "year-end-close"))).all();
     expect(entry).toHaveLength(1);
     expect(entry[0]).toMatchObject({ entryDate: yearEnd, id: rows[0]!.entryId });
+    // The closing entry is not reversed (that would reopen the year in the next one).
+    const reversed = await reverseJournalEntry(EMPTY, form({ club: SLUG, entryId: entry[0]!.id, idempotencyKey: key() }));
+    expect(reversed.ok).toBe(false);
+    expect(reversed.message).toMatch(/not reversed/);
 
     // Income and expense stand at zero at the year's end; the balance sheet is unchanged and balanced.
     const postings = reportPostings(db(), clubId, { to: yearEnd });
