@@ -2,9 +2,9 @@
 import { FormShell } from "@/components/ui/form-shell";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { useFormAction } from "@/components/ui/use-form-action";
+import { MONTH_SHORT } from "@/lib/money/budget";
 import type { ServerAction } from "./action-form";
 
-export const MONTH_SHORT = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"] as const;
 
 export type BudgetGridRow = { code: string; name: string; type: "income" | "expense"; cells: string[]; annual: string };
 

@@ -7,6 +7,9 @@
 import type { AccountType } from "./chart";
 import { profitAndLoss, type Posting } from "./reports";
 
+/** Short month names for the budget's grid and tables (index 0 = January). */
+export const MONTH_SHORT = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"] as const;
+
 export type BudgetCell = { accountCode: string; month: string; amountMinor: number };
 
 export type BudgetAccount = { code: string; name: string; type: Extract<AccountType, "income" | "expense"> };

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { BudgetGrid, MONTH_SHORT } from "@/components/money/budget-grid";
+import { BudgetGrid } from "@/components/money/budget-grid";
 import { BudgetTable } from "@/components/money/budget-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { ReportTabs } from "@/components/money/report-views";
@@ -10,7 +10,7 @@ import { reportPostings } from "@/db/queries/money-reports";
 import { saveBudgetAction } from "@/lib/actions/money/save-budget";
 import { clubToday } from "@/lib/ledger/settings";
 import { currencyExponent, formatMoney, minorToDecimalString } from "@/lib/money";
-import { budgetVsActual } from "@/lib/money/budget";
+import { MONTH_SHORT, budgetVsActual } from "@/lib/money/budget";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";
 
