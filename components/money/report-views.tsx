@@ -5,13 +5,29 @@ import type { ReportLine } from "@/lib/money/reports";
 const TYPE_WORDS: Record<ReportLine["type"], string> = { asset: "Assets", liability: "Liabilities", equity: "Equity", income: "Income", expense: "Expenses" };
 
 /** The two reports' tabs, the period picker's quick choices and the CSV link. */
-export function ReportTabs({ slug, current }: { slug: string; current: "profit-and-loss" | "balance-sheet" }) {
-  const base = `/clubs/${slug}/money/reports`;
+export function ReportTabs({ slug, current }: { slug: string; current: "profit-and-loss" | "balance-sheet" | "budget" | "year-end" }) {
+  const base = `/clubs/${slug}/money`;
+  const tabs = [
+    { key: "profit-and-loss", href: `${base}/reports/profit-and-loss`, label: "Profit and loss" },
+    { key: "balance-sheet", href: `${base}/reports/balance-sheet`, label: "Balance sheet" },
+    { key: "budget", href: `${base}/reports/budget`, label: "Budget against actual" },
+    { key: "year-end", href: `${base}/reports/year-end`, label: "Year-end close" },
+  ];
   return (
-    <nav aria-label="Reports" className="mb-4 flex gap-3 text-sm font-bold">
-      <Link href={`${base}/profit-and-loss`} aria-current={current === "profit-and-loss" ? "page" : undefined}>Profit and loss</Link>
-      <Link href={`${base}/balance-sheet`} aria-current={current === "balance-sheet" ? "page" : undefined}>Balance sheet</Link>
+    <nav aria-label="Reports" className="mb-4 flex flex-wrap gap-x-4 gap-y-1 text-sm font-bold">
+      {tabs.map((t) => <Link key={t.key} href={t.href} aria-current={current === t.key ? "page" : undefined}>{t.label}</Link>)}
     </nav>
+  );
+}
+
+/** The report's downloads: the same figures as a spreadsheet (CSV) and for print (PDF). */
+export function ExportLinks({ csvHref, pdfHref }: { csvHref: string; pdfHref: string }) {
+  const cls = "inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold";
+  return (
+    <span className="flex flex-wrap gap-2">
+      <a className={cls} href={csvHref}>Download (CSV)</a>
+      <a className={cls} href={pdfHref}>Download (PDF)</a>
+    </span>
   );
 }
 

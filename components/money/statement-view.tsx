@@ -1,4 +1,4 @@
-import type { StatementFigures } from "@/lib/ledger/statement-lines";
+import type { StatementFigures } from "@/lib/money/statement-lines";
 import { DEFAULT_LOCALE } from "@/lib/money/format";
 import { formatDate } from "@/lib/dates";
 import { Money } from "./money-text";

@@ -21,7 +21,7 @@ import { findStandingCheckout } from "./safety-checkouts";
 
 // Everything the booking guards weigh, gathered from the other areas' own queries: the flight
 // line's status computation (lib/fleet), the currency board's (db/queries/currency) and the
-// ledger's arrears rule (lib/ledger/arrears). Nothing here decides; lib/bookings/guards does.
+// ledger's arrears rule (db/queries/money-arrears). Nothing here decides; lib/bookings/guards does.
 
 type Handle = Db | Tx;
 

@@ -30,9 +30,12 @@ export function billCategories(db: Db | Tx, clubId: string): { code: string; nam
 
 export type BillInput = { vendor: string; billDate: string; dueOn: string; accountCode: string; amountMinor: number; reference: string | null };
 
+/** A bill produced from a recurring bill: its template and period (one bill per pair, ever). */
+export type BillRecurrence = { recurringBillId: string; periodKey: string };
+
 export type BillRefusal = { refused: string; field?: string };
 
-export function enterBill(tx: Tx, club: { id: string; currency: string }, userId: string, input: BillInput): BillRow | BillRefusal {
+export function enterBill(tx: Tx, club: { id: string; currency: string }, userId: string, input: BillInput, recurrence?: BillRecurrence): BillRow | BillRefusal {
   const category = billCategories(tx, club.id).find((c) => c.code === input.accountCode);
   if (!category) return { refused: "Choose the category from the chart of accounts.", field: "accountCode" };
   const open = openPostingDate(tx, club.id, input.billDate);
@@ -43,11 +46,12 @@ export function enterBill(tx: Tx, club: { id: string; currency: string }, userId
     memo: `Bill: ${input.vendor}${input.reference ? ` ${input.reference}` : ""}${lockedPeriodNote(open)}`,
     lines,
     sourceType: "bill",
+    sourceKey: recurrence ? `bill-recurring:${recurrence.recurringBillId}:${recurrence.periodKey}` : undefined,
     reference: input.reference,
     createdById: userId,
   });
   const status = billNeedsApproval(input.amountMinor, { approvalOverMinor: billApprovalOverMinor(tx, club.id) }) ? "awaiting_approval" : "approved";
-  return tx.insert(bills).values({ clubId: club.id, ...input, currency: club.currency, status, enteredById: userId, entryId }).returning().all()[0]!;
+  return tx.insert(bills).values({ clubId: club.id, ...input, currency: club.currency, status, enteredById: userId, entryId, recurringBillId: recurrence?.recurringBillId ?? null, periodKey: recurrence?.periodKey ?? null }).returning().all()[0]!;
 }
 
 function ledgerId(tx: Tx, clubId: string, code: string): string {

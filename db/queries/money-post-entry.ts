@@ -1,6 +1,6 @@
 import "server-only";
 import { and, eq, inArray, max } from "drizzle-orm";
-import { clubs, journalEntries, journalLines, ledgerAccounts, reconciliationPeriods, type EntryKind } from "@/db/schema";
+import { clubs, journalEntries, journalLines, ledgerAccounts, reconciliationPeriods, yearCloses, type EntryKind } from "@/db/schema";
 import { newId } from "@/db/schema/columns";
 import { MAX_CALENDAR_YEAR, MIN_CALENDAR_YEAR, isIsoDateInRange, type IsoDate } from "@/lib/dates";
 import { assertBalanced, reversalOf } from "@/lib/money";
@@ -28,14 +28,16 @@ export type PostEntryInput = {
 
 export type PostedEntry = { entryId: string; created: boolean };
 
-/** The last day of the latest locked (reconciled) period, or null when nothing is locked. */
+/** The last day of the latest locked period (reconciled, or a closed year), or null when nothing is locked. */
 export function lockedThrough(tx: DbLike, clubId: string): IsoDate | null {
   const row = tx
     .select({ end: max(reconciliationPeriods.periodEnd) })
     .from(reconciliationPeriods)
     .where(and(eq(reconciliationPeriods.clubId, clubId), eq(reconciliationPeriods.locked, true)))
     .get();
-  return row?.end ?? null;
+  const closed = tx.select({ end: max(yearCloses.closedThrough) }).from(yearCloses).where(eq(yearCloses.clubId, clubId)).get();
+  const ends = [row?.end, closed?.end].filter((d): d is string => !!d).sort();
+  return ends.at(-1) ?? null;
 }
 
 /**
@@ -96,7 +98,9 @@ export function postEntries(tx: DbLike, clubId: string, entries: readonly PostEn
   }
   if (fresh.length === 0) return results;
   const through = lockedThrough(tx, clubId);
-  for (const { entry } of fresh) if (through && entry.date <= through) throw new PeriodLockedError(entry.date, through);
+  // The year-end close is dated the year's last day, often after December's bank statement is
+  // reconciled and locked; its own write path refuses a year already closed (closeYear).
+  for (const { entry } of fresh) if (through && entry.date <= through && entry.kind !== "year-end-close") throw new PeriodLockedError(entry.date, through);
   const club = tx.select({ currency: clubs.currency }).from(clubs).where(eq(clubs.id, clubId)).get();
   if (!club) throw new LedgerError("That club was not found.", "not-found");
   const accountIds = [...new Set(fresh.flatMap(({ entry }) => entry.lines.map((l) => l.accountId)))];

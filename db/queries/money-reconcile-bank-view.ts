@@ -8,8 +8,8 @@ import { cardPayouts, journalEntries, journalLines } from "@/db/schema";
 import { addDays, type IsoDate } from "@/lib/dates";
 import { minorToDecimalString } from "@/lib/money";
 import { writeCsv } from "@/lib/csv";
-import { accountId, type DbLike } from "@/lib/ledger/accounts";
-import { monthRange } from "@/lib/ledger/months";
+import { accountId, type DbLike } from "@/db/queries/money-accounts";
+import { monthRange } from "@/lib/money/months";
 
 export type BankViewLine = { date: IsoDate; amountMinor: number; description: string; reference?: string };
 

@@ -5,9 +5,9 @@ import "server-only";
 import { and, eq, inArray, isNull } from "drizzle-orm";
 import { bankLines, bankStatements, cardPayouts, journalLines, ledgerAccounts, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
 import { formatMoney } from "@/lib/money";
-import { accountId, RECEIVABLES, type DbLike } from "@/lib/ledger/accounts";
-import { LedgerError } from "@/lib/ledger/errors";
-import { assertDateOpen, postEntry, reverseEntry } from "@/lib/ledger/post-entry";
+import { accountId, RECEIVABLES, type DbLike } from "@/db/queries/money-accounts";
+import { LedgerError } from "@/lib/money/errors";
+import { assertDateOpen, postEntry, reverseEntry } from "@/db/queries/money-post-entry";
 import { getOpenBankLine, matchPayout, openPayouts, periodReport, unmatchedBookLines, type PeriodReport } from "./money-reconcile-match";
 
 type Actor = { clubId: string; userId: string | null; currency: string };

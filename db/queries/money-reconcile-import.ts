@@ -5,8 +5,8 @@ import "server-only";
 import { and, countDistinct, eq, inArray } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { bankLines, bankStatements, reconciliationMatches, reconciliationPeriods } from "@/db/schema";
-import { LedgerError } from "@/lib/ledger/errors";
-import { lockedThrough } from "@/lib/ledger/post-entry";
+import { LedgerError } from "@/lib/money/errors";
+import { lockedThrough } from "@/db/queries/money-post-entry";
 import { dedupeKeys, type CsvMapping, type ParsedStatement } from "@/lib/reconcile";
 
 type DbLike = Db | Tx;

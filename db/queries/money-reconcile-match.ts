@@ -6,9 +6,9 @@ import { and, eq, inArray, isNull, lte, ne, notExists, sql } from "drizzle-orm";
 import { bankLines, bankStatements, cardPayouts, journalEntries, journalLines, paymentRefunds, payments, reconciliationMatches } from "@/db/schema";
 import { addDays, type IsoDate } from "@/lib/dates";
 import { autoMatch, reconciliationSummary, type BookItem, type ReconciliationSummary } from "@/lib/reconcile";
-import { accountId, type DbLike } from "@/lib/ledger/accounts";
-import { LedgerError } from "@/lib/ledger/errors";
-import { lockedThrough, openPostingDate, postEntries, postEntry } from "@/lib/ledger/post-entry";
+import { accountId, type DbLike } from "@/db/queries/money-accounts";
+import { LedgerError } from "@/lib/money/errors";
+import { lockedThrough, openPostingDate, postEntries, postEntry } from "@/db/queries/money-post-entry";
 import { firstOpenDay, lockedPeriodNote } from "@/lib/money/open-period";
 
 export type BookLineItem = { id: string; journalLineId: string; entryId: string; date: IsoDate; amountMinor: number; memo: string; reference: string | null; kind: string };

@@ -1,15 +1,17 @@
 import "server-only";
-import { and, eq, lte, sql } from "drizzle-orm";
-import type { Db } from "@/db/client";
+import { and, eq, lte, ne, sql } from "drizzle-orm";
+import type { Db, Tx } from "@/db/client";
 import { journalEntries, journalLines, ledgerAccounts } from "@/db/schema";
 import type { Posting } from "@/lib/money/reports";
 
 /**
  * The club's journal as postings for the reports (lib/money/reports): one posting per day and
  * account, debits and credits summed, up to `to` when given. Each member's receivable account
- * is folded into "Member receivables" (its parent), as the chart shows it.
+ * is folded into "Member receivables" (its parent), as the chart shows it. For the profit and
+ * loss (and budget against actual) pass `withoutYearEndClose`: a closed year's income and
+ * expense are read without the entry that closed them into retained funds (standard practice).
  */
-export function reportPostings(db: Db, clubId: string, opts: { to?: string } = {}): Posting[] {
+export function reportPostings(db: Db | Tx, clubId: string, opts: { to?: string; withoutYearEndClose?: boolean } = {}): Posting[] {
   const code = sql<string>`case when ${ledgerAccounts.memberUserId} is null then ${ledgerAccounts.code} else ${ledgerAccounts.parentCode} end`;
   const rows = db
     .select({
@@ -23,7 +25,7 @@ export function reportPostings(db: Db, clubId: string, opts: { to?: string } = {
     .from(journalLines)
     .innerJoin(journalEntries, and(eq(journalEntries.id, journalLines.entryId), eq(journalEntries.clubId, journalLines.clubId)))
     .innerJoin(ledgerAccounts, and(eq(ledgerAccounts.id, journalLines.accountId), eq(ledgerAccounts.clubId, journalLines.clubId)))
-    .where(and(eq(journalLines.clubId, clubId), opts.to ? lte(journalEntries.entryDate, opts.to) : undefined))
+    .where(and(eq(journalLines.clubId, clubId), opts.to ? lte(journalEntries.entryDate, opts.to) : undefined, opts.withoutYearEndClose ? ne(journalEntries.kind, "year-end-close") : undefined))
     .groupBy(journalEntries.entryDate, code)
     .orderBy(journalEntries.entryDate)
     .all();

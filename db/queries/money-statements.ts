@@ -8,7 +8,7 @@ import type { DbLike } from "./money-accounts";
 import { memberContacts, memberMovements, type MemberMovementRow } from "./money-member-balances";
 import { LedgerError } from "@/lib/money/errors";
 import { monthLabel, monthRange } from "@/lib/money/months";
-import { statementFigures, type StatementFigures } from "@/lib/ledger/statement-lines";
+import { statementFigures, type StatementFigures } from "@/lib/money/statement-lines";
 
 export function statementUrls(slug: string, memberUserId: string, month: string) {
   return {

@@ -33,7 +33,7 @@ export const ledgerAccounts = sqliteTable(
 
 export const ENTRY_KINDS = [
   "opening", "dues", "late-fee", "flight", "adjustment", "card-payment", "card-refund", "manual-payment",
-  "payout-received", "bank-item", "reversal", "bill", "bill-payment",
+  "payout-received", "bank-item", "reversal", "bill", "bill-payment", "year-end-close",
 ] as const;
 export type EntryKind = (typeof ENTRY_KINDS)[number];
 
@@ -422,8 +422,87 @@ export const bills = sqliteTable(
     paidOn: text("paid_on"),
     paidById: text("paid_by_id").references(() => users.id),
     paymentEntryId: text("payment_entry_id").references(() => journalEntries.id),
+    /** The recurring bill this one was produced from, and its period ("2026-05", "2026-Q2", "2026"). */
+    recurringBillId: text("recurring_bill_id").references(() => recurringBills.id),
+    periodKey: text("period_key"),
     ...timestamps(),
   },
-  (t) => [index("bills_club_id").on(t.clubId, t.status, t.dueOn)],
+  (t) => [
+    index("bills_club_id").on(t.clubId, t.status, t.dueOn),
+    // Once per recurring bill and period, however often the due bills are produced.
+    uniqueIndex("bills_recurring_period").on(t.clubId, t.recurringBillId, t.periodKey),
+  ],
 );
 export type BillRow = typeof bills.$inferSelect;
+
+export const RECURRENCE_CADENCES = ["monthly", "quarterly", "yearly"] as const;
+export const RECURRENCE_STATUSES = ["active", "paused", "ended"] as const;
+
+/**
+ * A bill that comes back (insurance, hangar rent): each period's bill is produced once, through
+ * the one bill write path, on or after `nextOn`. `anchorDay` is the day of the month it falls on
+ * (a 31st falls on the last day of a shorter month).
+ */
+export const recurringBills = sqliteTable(
+  "recurring_bills",
+  {
+    id: id(),
+    clubId: clubId(),
+    vendor: text("vendor").notNull(),
+    accountCode: text("account_code").notNull(),
+    amountMinor: money("amount_minor"),
+    currency: text("currency").notNull(),
+    reference: text("reference"),
+    cadence: text("cadence", { enum: RECURRENCE_CADENCES }).notNull(),
+    anchorDay: integer("anchor_day").notNull(),
+    nextOn: text("next_on").notNull(),
+    endsOn: text("ends_on"),
+    /** Days from the bill's date to its due date. */
+    dueDays: integer("due_days").notNull().default(0),
+    status: text("status", { enum: RECURRENCE_STATUSES }).notNull().default("active"),
+    createdById: text("created_by_id").notNull().references(() => users.id),
+    ...timestamps(),
+  },
+  (t) => [index("recurring_bills_club_id").on(t.clubId, t.status, t.nextOn)],
+);
+export type RecurringBillRow = typeof recurringBills.$inferSelect;
+
+/** The budget of one income or expense account for one month, on the account's normal side. */
+export const budgets = sqliteTable(
+  "budgets",
+  {
+    id: id(),
+    clubId: clubId(),
+    accountCode: text("account_code").notNull(),
+    /** "YYYY-MM". */
+    month: text("month").notNull(),
+    amountMinor: money("amount_minor"),
+    currency: text("currency").notNull(),
+    updatedById: text("updated_by_id").references(() => users.id),
+    ...timestamps(),
+  },
+  (t) => [uniqueIndex("budgets_club_account_month").on(t.clubId, t.accountCode, t.month), index("budgets_club_id").on(t.clubId, t.month)],
+);
+export type BudgetRow = typeof budgets.$inferSelect;
+
+/**
+ * A closed year (append-only): its income and expense closed into retained funds by one entry
+ * dated the year's last day, and no entry dated on or before that day afterwards.
+ */
+export const yearCloses = sqliteTable(
+  "year_closes",
+  {
+    id: id(),
+    clubId: clubId(),
+    year: integer("year").notNull(),
+    /** The year's last day (YYYY-12-31): the books are locked through it. */
+    closedThrough: text("closed_through").notNull(),
+    /** The closing entry; null when the year had no income or expense to close. */
+    entryId: text("entry_id").references(() => journalEntries.id),
+    netIncomeMinor: integer("net_income_minor").notNull(),
+    closedById: text("closed_by_id").notNull().references(() => users.id),
+    ...timestamps(),
+  },
+  (t) => [uniqueIndex("year_closes_club_year").on(t.clubId, t.year)],
+);
+export type YearCloseRow = typeof yearCloses.$inferSelect;

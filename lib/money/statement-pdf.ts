@@ -2,7 +2,7 @@ import PDFDocument from "pdfkit";
 import { formatDate } from "@/lib/dates";
 import { DEFAULT_LOCALE, moneyFormatter } from "./format";
 import { paperSizeFor } from "./locale";
-import type { StatementFigures } from "@/lib/ledger/statement-lines";
+import type { StatementFigures } from "@/lib/money/statement-lines";
 
 export type StatementPdfInput = {
   clubName: string;

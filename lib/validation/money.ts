@@ -260,3 +260,50 @@ export const billIdSchema = z.object({ billId: id("the bill") });
 export const payBillSchema = z.object({ billId: id("the bill"), paidOn: isoDateField("the day paid") });
 
 export const billApprovalAmountSchema = z.object({ amount: z.string({ error: "Enter the amount." }).trim().transform((v) => v.replace(/,/g, "")).pipe(z.string().regex(/^\d{1,9}(\.\d{1,2})?$/, { error: "Enter the amount as a number, like 500 or 500.00 (0: every bill needs a second officer)." })) });
+
+/** A recurring bill (insurance, hangar rent): what, how much, how often, from when. */
+export const createRecurringBillSchema = z
+  .object({
+    vendor: text("the vendor", 120),
+    accountCode: z.string({ error: "Choose the category." }).trim().min(1, { error: "Choose the category." }).max(40, { error: "Choose the category." }),
+    amount: amountField("the amount"),
+    reference: optionalText(60).transform((v) => v ?? null),
+    cadence: z.enum(["monthly", "quarterly", "yearly"], { error: "Choose how often the bill comes: every month, every three months or every year." }),
+    firstOn: isoDateField("the first bill's date"),
+    endsOn: z
+      .string()
+      .trim()
+      .optional()
+      .transform((v) => (v ? v : null))
+      .pipe(isoDateField("the last bill's date").nullable()),
+    dueDays: z
+      .string()
+      .trim()
+      .optional()
+      .transform((v) => (v ? v : "0"))
+      .pipe(z.string().regex(/^\d{1,3}$/, { error: "Enter the days to pay as a whole number from 0 to 365." }))
+      .transform(Number)
+      .refine((n) => n <= 365, { error: "Enter the days to pay as a whole number from 0 to 365." }),
+  })
+  .refine((v) => !v.endsOn || v.endsOn >= v.firstOn, { path: ["endsOn"], error: "The last bill's date cannot be before the first." });
+
+export const recurringBillStatusSchema = z.object({
+  recurringBillId: id("the recurring bill"),
+  status: z.enum(["active", "paused", "ended"], { error: "Choose pause, resume or end." }),
+});
+
+const yearField = z
+  .string({ error: "Choose the year." })
+  .trim()
+  .regex(/^\d{4}$/, { error: "Choose the year, like 2026." })
+  .transform(Number)
+  .refine((y) => y >= 1900 && y <= 2200, { error: "Choose a year between 1900 and 2200." });
+
+/** A year's budget grid: `b.<account code>.<MM>` cells (typed amounts, blank for none) beside the year. */
+export const saveBudgetSchema = z
+  .object({ year: yearField })
+  .catchall(z.string().max(20, { error: "Enter an amount, like 250 or 250.00." }));
+
+export const BUDGET_CELL = /^b\.([a-z0-9][a-z0-9-]{1,39})\.(0[1-9]|1[0-2])$/;
+
+export const closeYearSchema = z.object({ year: yearField });

@@ -4,7 +4,7 @@ import { describe, expect, inject, it } from "vitest";
 import { openDatabase } from "@/db/client";
 import { clubs } from "@/db/schema";
 import { isoDateInTimeZone } from "@/lib/dates";
-import { newPage, screenshot, signIn } from "./harness";
+import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harness";
 
 // The treasurer's books in the browser: a bill entered with its category, paid from the bank,
 // matched to the bank statement's line, and found in the month's profit and loss. Each attempt
@@ -56,5 +56,55 @@ describe("the treasurer's books", () => {
     // At least this bill's amount (a retried attempt adds its own bill to the same month).
     expect(Number(text.replace(/^.*\$/, "").replace(/,/g, ""))).toBeGreaterThanOrEqual(Number(amount));
     await screenshot(page, "books-profit-and-loss-desktop");
+
+    // Budget against actual: the treasurer budgets the category for this month in the year grid,
+    // and the month's comparison shows the budget beside the actual that includes this bill.
+    const year = today.slice(0, 4);
+    const mm = today.slice(5, 7);
+    const monthShort = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"][Number(mm) - 1]!;
+    const budget = `${5000 + cents}.00`;
+    const budgetShown = `$${(5000 + cents).toLocaleString("en-US")}.00`;
+    await page.goto(`/clubs/lakeshore-aero/money/reports/budget?year=${year}&month=${mm}`);
+    const grid = page.getByRole("form", { name: `Budget for ${year}` });
+    await grid.getByLabel(`Hangar and tie-down, ${monthShort} ${year}`).fill(budget);
+    await grid.getByRole("button", { name: "Save budget" }).click();
+    await grid.getByRole("status").filter({ hasText: `Budget for ${year} saved: 1 month changed.` }).waitFor();
+    // The page's tables follow the answer (refreshed after it): the month's row carries the new budget.
+    const monthTable = page.getByRole("table", { name: new RegExp(`^${monthShort} ${year}: budget against actual`) });
+    const budgetRow = monthTable.getByRole("row").filter({ hasText: "Hangar and tie-down" }).filter({ hasText: budgetShown });
+    await budgetRow.waitFor();
+    const cells = await budgetRow.getByRole("cell").allTextContents();
+    expect(cells[1]).toBe(budgetShown);
+    expect(Number(cells[2]!.replace(/[$,]/g, ""))).toBeGreaterThanOrEqual(Number(amount)); // the actual includes this bill
+    expect(cells[3]).toMatch(/(favourable|unfavourable|on budget)$/);
+    await screenshot(page, "books-budget-desktop");
+
+    // A recurring bill: saved, then its due bill entered once.
+    await page.goto("/clubs/lakeshore-aero/money/bills/recurring");
+    const recurring = page.getByRole("form", { name: "Add a recurring bill" });
+    const lease = `Cove Hangar Trust ${cents}`;
+    await recurring.getByLabel("Vendor").fill(lease);
+    await recurring.getByLabel("Category").selectOption({ label: "Hangar and tie-down" });
+    await recurring.getByLabel(/^Amount each time/).fill("125.00");
+    await recurring.getByLabel("How often").selectOption({ label: "Every month" });
+    await recurring.getByRole("button", { name: "Save recurring bill" }).click();
+    await recurring.getByRole("status").filter({ hasText: `Recurring bill saved: ${lease}, $125.00, every month from ${today}.` }).waitFor();
+    const produce = page.getByRole("form", { name: "Enter due bills" });
+    await produce.getByRole("button", { name: "Enter the bills due" }).click();
+    await expect(produce.getByRole("status").filter({ hasText: /bills? entered/ }).textContent()).resolves.toContain(`${lease} ${today.slice(0, 7)}`);
+    await screenshot(page, "books-recurring-desktop");
+
+    await page.goto("/clubs/lakeshore-aero/money/reports/year-end");
+    await page.getByRole("table", { name: /The closing entry, dated \d{4}-12-31/ }).waitFor();
+    await screenshot(page, "books-year-end-desktop");
+
+    const phone = await newPage("phone");
+    await signIn(phone, "treasurer@hangarline.test");
+    for (const [path_, name] of [[`/money/reports/budget?year=${year}&month=${mm}`, "budget"], ["/money/bills/recurring", "recurring"], ["/money/reports/year-end", "year-end"]] as const) {
+      await phone.goto(`/clubs/lakeshore-aero${path_}`);
+      await phone.getByRole("heading", { level: 1 }).waitFor();
+      await expectNoHorizontalOverflow(phone);
+      await screenshot(phone, `books-${name}-phone`);
+    }
   });
 });

@@ -20,6 +20,7 @@ export const reverseJournalEntry = clubAction({
     const original = tx.select().from(journalEntries).where(and(eq(journalEntries.clubId, ctx.club.id), eq(journalEntries.id, input.entryId))).get();
     if (!original) throw new ActionError("That entry was not found in this club.", {}, "not_found");
     if (PROVIDER_KINDS.has(original.kind)) throw new ActionError("Card payments, refunds and payouts follow the payment provider: refund the payment, or undo the match in reconciliation.");
+    if (original.kind === "year-end-close") throw new ActionError("A year-end close is not reversed: the closed year stays closed. Correct it with an adjustment in the open year.", {}, "conflict");
     const through = lockedThrough(tx, ctx.club.id);
     // A correction to a locked period is dated today, so the locked month stays as reconciled.
     const date = input.date ?? (through && original.entryDate <= through ? clubToday(ctx.club) : original.entryDate);

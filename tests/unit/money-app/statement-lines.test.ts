@@ -2,7 +2,7 @@
 // A statement: opening + charges − credits = closing (standard account statement arithmetic;
 // figures are our own).
 import { describe, expect, it } from "vitest";
-import { statementFigures } from "@/lib/ledger/statement-lines";
+import { statementFigures } from "@/lib/money/statement-lines";
 import { monthLabel, monthRange, shiftMonthKey } from "@/lib/money/months";
 
 describe("statementFigures", () => {

@@ -1,9 +1,11 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { Money } from "@/components/money/money-text";
 import { PageHeader } from "@/components/ui/page-header";
 import { billApprovalOverMinor, billCategories, listBills } from "@/db/queries/money-bills";
+import { countDueRecurring } from "@/db/queries/money-recurring";
 import { approveBillAction } from "@/lib/actions/money/approve-bill";
 import { enterBillAction } from "@/lib/actions/money/enter-bill";
 import { payBillAction } from "@/lib/actions/money/pay-bill";
@@ -32,9 +34,14 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
   const categories = canEnter ? billCategories(db, club.id) : [];
   const toApprove = list.filter((b) => b.status === "awaiting_approval" && b.enteredById !== user.id);
   const toPay = list.filter((b) => b.status === "approved");
+  const dueRecurring = countDueRecurring(db, club.id, today);
   return (
     <>
-      <PageHeader title="Bills" lead={`What the club owes its vendors. A bill is booked to its category when entered and paid from the bank; bills above ${formatMoney(threshold, club.currency, club.locale)} need a second officer's approval first.`} />
+      <PageHeader
+        title="Bills"
+        lead={`What the club owes its vendors. A bill is booked to its category when entered and paid from the bank; bills above ${formatMoney(threshold, club.currency, club.locale)} need a second officer's approval first.`}
+        actions={<Link className="inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold" href={`/clubs/${club.slug}/money/bills/recurring`}>Recurring bills{dueRecurring ? ` (${dueRecurring} due)` : ""}</Link>}
+      />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/bills`} />
       <section aria-labelledby="bills-h" className="mb-8">
         <h2 id="bills-h" className="mb-3 text-lg font-bold">Bills ({list.length})</h2>
@@ -47,7 +54,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
                   <span className="flex items-baseline gap-3"><Money minor={b.amountMinor} currency={club.currency} locale={club.locale} /><span className="text-sm font-bold"><span aria-hidden="true">{STATUS[b.status].shape} </span>{STATUS[b.status].word}</span></span>
                 </div>
                 <p className="text-sm text-ink-700">
-                  Dated {b.billDate} · due {b.dueOn}{b.status !== "paid" && b.dueOn < today ? <span className="font-bold text-stop-800"> (overdue)</span> : null} · entered by {b.enteredBy}
+                  {b.periodKey ? `Recurring, ${b.periodKey} · ` : ""}Dated {b.billDate} · due {b.dueOn}{b.status !== "paid" && b.dueOn < today ? <span className="font-bold text-stop-800"> (overdue)</span> : null} · entered by {b.enteredBy}
                   {b.approvedBy ? ` · approved by ${b.approvedBy}` : ""}{b.paidOn ? ` · paid ${b.paidOn}` : ""}
                 </p>
                 {b.attachments.length ? (

@@ -18,7 +18,7 @@ export const metadata: Metadata = { title: "Journal" };
 
 const KIND_WORDS: Record<string, string> = {
   opening: "Opening balance", dues: "Dues", "late-fee": "Late fee", flight: "Flight", adjustment: "Adjustment", "card-payment": "Card payment",
-  "card-refund": "Card refund", "manual-payment": "Cheque, cash or transfer", "payout-received": "Card payout", "bank-item": "Bank item", reversal: "Reversal", bill: "Bill", "bill-payment": "Bill paid",
+  "card-refund": "Card refund", "manual-payment": "Cheque, cash or transfer", "payout-received": "Card payout", "bank-item": "Bank item", reversal: "Reversal", bill: "Bill", "bill-payment": "Bill paid", "year-end-close": "Year-end close",
 };
 const NOT_HERE = new Set(["card-payment", "card-refund", "payout-received"]);
 

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { MoneyNav } from "@/components/money/money-nav";
-import { PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
+import { ExportLinks, PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
 import { PageHeader } from "@/components/ui/page-header";
 import { reportPostings } from "@/db/queries/money-reports";
 import { clubToday } from "@/lib/money/settings";
@@ -26,12 +26,13 @@ export default async function BalanceSheetPage({ params, searchParams }: { param
   const lines = balanceSheetLines(postings, asOf);
   const base = `/clubs/${club.slug}/money/reports/balance-sheet`;
   const csvHref = `/api/clubs/${club.slug}/money/reports?report=balance-sheet&asOf=${asOf}&format=csv`;
+  const pdfHref = csvHref.replace("format=csv", "format=pdf");
   return (
     <>
       <PageHeader
         title="Balance sheet"
         lead={`What the club owns and owes at the end of ${asOf}. Equity includes the net income not yet closed into retained funds.`}
-        actions={can(ability, "export", "Ledger") ? <a className="inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold" href={csvHref}>Download (CSV)</a> : null}
+        actions={can(ability, "export", "Ledger") ? <ExportLinks csvHref={csvHref} pdfHref={pdfHref} /> : null}
       />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/reports/profit-and-loss`} />
       <ReportTabs slug={club.slug} current="balance-sheet" />

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { MoneyNav } from "@/components/money/money-nav";
-import { PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
+import { ExportLinks, PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
 import { PageHeader } from "@/components/ui/page-header";
 import { reportPostings } from "@/db/queries/money-reports";
 import { clubToday } from "@/lib/money/settings";
@@ -22,15 +22,16 @@ export default async function ProfitAndLossPage({ params, searchParams }: { para
   const parsed = reportPeriodSchema.safeParse({ from: query.from ?? fallback.from, to: query.to ?? fallback.to });
   const period = parsed.success ? parsed.data : fallback;
   const errors = asked && !parsed.success ? parsed.error.issues.map((i) => i.message) : [];
-  const pnl = profitAndLoss(reportPostings(db, club.id, { to: period.to }), period);
+  const pnl = profitAndLoss(reportPostings(db, club.id, { to: period.to, withoutYearEndClose: true }), period);
   const base = `/clubs/${club.slug}/money/reports/profit-and-loss`;
   const csvHref = `/api/clubs/${club.slug}/money/reports?report=profit-and-loss&from=${period.from}&to=${period.to}&format=csv`;
+  const pdfHref = csvHref.replace("format=csv", "format=pdf");
   return (
     <>
       <PageHeader
         title="Profit and loss"
         lead={`Income and expenses from ${period.from} to ${period.to}, both days included. Member charges count as income when charged, not when paid.`}
-        actions={can(ability, "export", "Ledger") ? <a className="inline-flex min-h-11 items-center rounded border border-fin-600 bg-white px-4 font-bold" href={csvHref}>Download (CSV)</a> : null}
+        actions={can(ability, "export", "Ledger") ? <ExportLinks csvHref={csvHref} pdfHref={pdfHref} /> : null}
       />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/reports/profit-and-loss`} />
       <ReportTabs slug={club.slug} current="profit-and-loss" />
