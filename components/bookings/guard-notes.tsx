@@ -9,7 +9,7 @@ const GUARD_LABELS: Record<string, string> = {
   limitations: "Flies with limits",
   medicalExpired: "Medical",
   inArrears: "Account in arrears",
-  statusUnknown: "Check status",
+  statusUnknown: "Status unknown",
 };
 
 /**

@@ -26,10 +26,10 @@ export function dueText(d: DueSummary): string {
   }
   if (d.useLeftHours !== null) parts.push(d.useLeftHours < 0 ? "use limit exceeded" : `${formatHours(d.useLeftHours)} h of use left`);
   if (d.otherMeter) {
-    const note = `hours cannot be computed: last done on the ${meterWord(d.otherMeter.completionMeter)}, inspections now count by the ${meterWord(d.otherMeter.currentMeter)}`;
+    const note = `missing record: the reading on the ${meterWord(d.otherMeter.currentMeter)} (last done on the ${meterWord(d.otherMeter.completionMeter)}, inspections now count by the ${meterWord(d.otherMeter.currentMeter)})`;
     return parts.length ? `${parts.join(" or ")}; ${note}` : note;
   }
-  if (d.incomplete && parts.length === 0) return d.lastDoneOn ? "cannot be computed: data missing" : "no completion on record";
+  if (d.incomplete && parts.length === 0) return d.lastDoneOn ? "missing record: a reading it needs" : "missing record: its last completion";
   return parts.join(" or ");
 }
 
@@ -42,7 +42,7 @@ export function dueTone(d: DueSummary): string {
 
 export function dueLabel(d: DueSummary): string | null {
   if (d.overdue) return "Overdue";
-  if (d.incomplete) return "Unknown";
+  if (d.incomplete) return "Status unknown";
   if (d.dueSoon) return "Due soon";
   return null;
 }

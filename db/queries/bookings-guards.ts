@@ -45,7 +45,7 @@ function statusOf(records: FleetRecords, record: FleetAircraftRecord, today: str
   try {
     return aircraftStatus(buildStatusInput({ ...records, aircraft: record, dueSoon: soon, now }), today, maintenanceHours(record));
   } catch (error) {
-    return { status: "unknown", reasons: [{ code: "status-error", text: `Status could not be computed from the records: ${error instanceof Error ? error.message : String(error)}`, grounding: false }] };
+    return { status: "unknown", reasons: [{ code: "status-error", text: `Status unknown: ${error instanceof Error ? error.message : String(error)}`, grounding: false }] };
   }
 }
 

@@ -35,7 +35,7 @@ export type GuardInput = {
     /**
      * The status at the end of the booking: the end date as "today", notices effective by then,
      * and the meter projected at the club's average flight length. Null when it cannot be
-     * computed (then the booking is warned "Check status").
+     * computed (then the booking is warned "Status unknown").
      */
     statusAtEnd: AircraftStatusResult | null;
     /** Average flight length used for the projection, in hours, for the reason text. */
@@ -89,11 +89,11 @@ function aircraftFindings(input: GuardInput): GuardFinding[] {
   }
   if (aircraft.statusNow.status === "unknown") {
     const texts = aircraft.statusNow.reasons.filter((r) => !r.grounding).map((r) => r.text);
-    out.push({ guard: "statusUnknown", reason: `Check status: ${reg}'s status cannot be computed from its records (${texts.join("; ") || "records missing"}).` });
+    out.push({ guard: "statusUnknown", reason: `Status unknown: ${reg} is missing a record its status needs (${texts.join("; ") || "record not named"}).` });
   }
   const atEnd = aircraft.statusAtEnd;
   if (!atEnd) {
-    out.push({ guard: "statusUnknown", reason: `Check status: whether anything on ${reg} comes due before this booking ends cannot be computed.` });
+    out.push({ guard: "statusUnknown", reason: `Status unknown: ${reg} is missing a record needed to tell whether anything comes due before this booking ends.` });
     return out;
   }
   const nowTexts = new Set(aircraft.statusNow.reasons.map((r) => r.text));
@@ -167,7 +167,7 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
     if (current.length) out.push({ guard: "notCurrent", reason: `${member.name} is not current: ${current.join("; ")}.` });
     if (input.carryingPassengers && input.nightFlight && lapses(member.passengerNightLastDay, window.endDate)) {
       const why = input.nightUnknown
-        ? "Night could not be computed (the club's home field position is not recorded), so this booking is treated as touching night"
+        ? "Night unknown (missing record: the club's home field position), so this booking is treated as touching night"
         : "This booking touches night (from one hour after sunset to one hour before sunrise at the home field)";
       const standing = member.passengerNightLastDay
         ? `night passenger currency runs out on ${member.passengerNightLastDay}`

@@ -114,7 +114,7 @@ function cannotCompute(error: unknown): AircraftStatusResult {
   const detail = error instanceof Error ? error.message : String(error);
   return {
     status: "unknown",
-    reasons: [{ code: "status-error", text: `Status could not be computed from the records: ${detail}`, grounding: false }],
+    reasons: [{ code: "status-error", text: `Status unknown: ${detail}`, grounding: false }],
   };
 }
 

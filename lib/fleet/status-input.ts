@@ -21,7 +21,7 @@ function need(value: number | null, what: string, item: FleetItemRecord): number
   return value;
 }
 
-/** A rule missing its interval cannot be computed: it throws, and the caller says "Check status". */
+/** A rule missing its interval cannot be computed: it throws, and the caller says "Status unknown". */
 export function toRule(item: FleetItemRecord): InspectionRule {
   const overrun = item.overrunHours ?? undefined;
   switch (item.ruleKind) {

@@ -45,10 +45,10 @@ describe("evaluateBookingGuards", () => {
     expect(guardsOf(evaluateBookingGuards(input({ aircraft: { statusAtEnd: atEnd } }), settings))).toEqual({ refusals: ["grounded"], warnings: [] });
   });
 
-  it("a status that cannot be computed is always a warning ('Check status'), never flyable and never silent", () => {
+  it("a status that cannot be computed is always a warning ('Status unknown'), never flyable and never silent", () => {
     const unknown = { status: "unknown" as const, reasons: [{ code: "no-completion", text: "Annual inspection: no completion on record", grounding: false }] };
     const out = evaluateBookingGuards(input({ aircraft: { statusNow: unknown, statusAtEnd: unknown } }), settings);
-    expect(out.warnings).toEqual([{ guard: "statusUnknown", reason: "Check status: N0123X's status cannot be computed from its records (Annual inspection: no completion on record)." }]);
+    expect(out.warnings).toEqual([{ guard: "statusUnknown", reason: "Status unknown: N0123X is missing a record its status needs (Annual inspection: no completion on record)." }]);
     expect(guardsOf(evaluateBookingGuards(input({ aircraft: { statusAtEnd: null } }), settings)).warnings).toEqual(["statusUnknown"]);
   });
 
