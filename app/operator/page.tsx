@@ -22,7 +22,7 @@ export default async function OperatorHome() {
               <div><dt className="text-ink-500">Active members</dt><dd className="text-xl font-bold tabular">{c.activeMembers}</dd></div>
               <div><dt className="text-ink-500">Admins</dt><dd className="text-xl font-bold tabular">{c.admins}</dd></div>
               <div><dt className="text-ink-500">Receivables</dt><dd className="text-xl font-bold tabular">{formatMoney(c.receivables.totalMinor, c.currency)}</dd></div>
-              <div><dt className="text-ink-500">Over 30 days past due</dt><dd className="text-xl font-bold tabular">{formatMoney(c.receivables.over30Minor, c.currency)}</dd></div>
+              <div><dt className="text-ink-500">Overdue more than 30 days</dt><dd className="text-xl font-bold tabular">{formatMoney(c.receivables.over30Minor, c.currency)}</dd></div>
             </dl>
             <p className="mt-3 text-sm font-bold text-ink-700">Fleet</p>
             <ul className="mt-1 flex flex-wrap gap-2 text-sm" aria-label={`Fleet status of ${c.name}`}>

@@ -8,7 +8,7 @@ const GUARD_LABELS: Record<string, string> = {
   flightReview: "Flight review",
   limitations: "Flies with limits",
   medicalExpired: "Medical",
-  inArrears: "Account in arrears",
+  inArrears: "Account overdue",
   statusUnknown: "Status unknown",
 };
 

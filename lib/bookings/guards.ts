@@ -182,7 +182,7 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
   }
   if (member.arrears?.inArrears) {
     const since = member.arrears.oldestDueDate ? `, unpaid since ${member.arrears.oldestDueDate}` : "";
-    out.push({ guard: "inArrears", reason: `${member.name}'s account is in arrears: ${member.arrears.owedText} owed${since}.` });
+    out.push({ guard: "inArrears", reason: `${member.name}'s account is overdue: ${member.arrears.owedText} owed${since}.` });
   }
   return out;
 }

@@ -132,10 +132,10 @@ describe("booking guards: refused or warned as the club decides, always with the
     setGuards(SLUG, { inArrears: "warn" });
     const warned = await attempt("owes@example.test", "N0527L");
     expect(warned.fieldErrors.warningGuards).toEqual(["limitations", "inArrears"]);
-    expect(warned.fieldErrors.warnings?.[1]).toMatch(/^owes's account is in arrears: \$180\.00 owed, unpaid since \d{4}-\d{2}-\d{2}\.$/);
+    expect(warned.fieldErrors.warnings?.[1]).toMatch(/^owes's account is overdue: \$180\.00 owed, unpaid since \d{4}-\d{2}-\d{2}\.$/);
     setGuards(SLUG, { inArrears: "refuse" });
     const refused = await attempt("owes@example.test", "N0527L", { acceptedGuards: ["inArrears"] });
-    expect(refused.fieldErrors.refusals?.[0]).toMatch(/in arrears/);
+    expect(refused.fieldErrors.refusals?.[0]).toMatch(/account is overdue/);
     setGuards(SLUG, { inArrears: "warn" });
   });
 });

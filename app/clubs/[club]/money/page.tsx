@@ -37,7 +37,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
     { label: "Members owe the club", value: <Money minor={owed} currency={club.currency} />, href: `${base}/balances` },
     { label: "In the bank (books)", value: <Money minor={by("bank")} currency={club.currency} />, href: `${base}/reconciliation` },
     { label: "Card payments not yet paid out", value: <Money minor={by("card-clearing")} currency={club.currency} />, href: `${base}/payments` },
-    { label: "Members in arrears", value: <span className="tabular font-mono">{arrears.length}</span>, href: `${base}/ageing` },
+    { label: "Members overdue", value: <span className="tabular font-mono">{arrears.length}</span>, href: `${base}/ageing` },
   ];
   return (
     <>
@@ -59,7 +59,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
       <div className="mt-6 grid gap-6 lg:grid-cols-2">
         <section className="card" aria-labelledby="run-h">
           <h2 id="run-h" className="mb-1 text-lg font-bold">Billing run</h2>
-          <p className="mb-3 text-sm text-ink-700">Posts the month&apos;s dues (prorated for members who joined during the period), late fees for members in arrears, and e-mails the previous month&apos;s statements. Running a month again posts nothing twice.</p>
+          <p className="mb-3 text-sm text-ink-700">Posts the month&apos;s dues (prorated for members who joined during the period), late fees for members whose accounts are overdue, and e-mails the previous month&apos;s statements. Running a month again posts nothing twice.</p>
           {canPost ? (
             <ActionForm
               action={runBilling}
@@ -85,7 +85,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
         </section>
         <section className="card" aria-labelledby="arrears-h">
           <h2 id="arrears-h" className="mb-1 text-lg font-bold">Overdue accounts</h2>
-          {arrears.length === 0 ? <p className="text-ink-700">Nobody is in arrears.</p> : (
+          {arrears.length === 0 ? <p className="text-ink-700">No account is overdue.</p> : (
             <ul className="mb-3 divide-y divide-sand-200 text-sm">
               {arrears.map((m) => (
                 <li key={m.userId} className="flex flex-wrap justify-between gap-2 py-2">
@@ -96,7 +96,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
             </ul>
           )}
           {canPost ? <ActionButton action={sendReminders} slug={club.slug} label="E-mail dues reminders" pendingText="Queueing…" /> : null}
-          <p className="mt-2 text-sm text-ink-500">Reminders go to every member with charges past due, at most once a day each.</p>
+          <p className="mt-2 text-sm text-ink-500">Reminders go to every member with overdue charges, at most once a day each.</p>
         </section>
       </div>
     </>
