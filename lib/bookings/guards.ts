@@ -151,13 +151,13 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
     if (member.flightReviewLastDay === null) {
       out.push({ guard: "flightReview", reason: `${member.name} may not act as pilot in command: no verified flight review on record (14 CFR 61.56(c)). Book with an instructor, or have an instructor verify your flight review.` });
     } else if (lapses(member.flightReviewLastDay, window.endDate)) {
-      out.push({ guard: "flightReview", reason: `${member.name} may not act as pilot in command after ${member.flightReviewLastDay}: the flight review runs out before the booking ends (14 CFR 61.56(c)). Book with an instructor for a flight review.` });
+      out.push({ guard: "flightReview", reason: `${member.name} may not act as pilot in command after ${member.flightReviewLastDay}: the flight review expires before the booking ends (14 CFR 61.56(c)). Book with an instructor for a flight review.` });
     }
     const current: string[] = [];
     if (member.checkedOut && lapses(member.recencyLastDay, window.endDate)) {
       current.push(
         member.recencyLastDay
-          ? `the club's rule of a flight in the ${aircraft.typeGroup} within ${settings.recencyDaysInType} days runs out on ${member.recencyLastDay}`
+          ? `the club's rule of a flight in the ${aircraft.typeGroup} within ${settings.recencyDaysInType} days expires after ${member.recencyLastDay}`
           : `no flight in the ${aircraft.typeGroup} on record within the club's ${settings.recencyDaysInType} days`,
       );
     }
@@ -170,14 +170,14 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
         ? "Night unknown (missing record: the club's home field position), so this booking is treated as touching night"
         : "This booking touches night (from one hour after sunset to one hour before sunrise at the home field)";
       const standing = member.passengerNightLastDay
-        ? `night passenger currency runs out on ${member.passengerNightLastDay}`
+        ? `night passenger currency expires after ${member.passengerNightLastDay}`
         : "no 3 full-stop night landings within the preceding 90 days on record";
       out.push({ guard: "notCurrent", reason: `${why}: ${member.name} may not carry passengers then: ${standing} (14 CFR 61.57(b)).` });
     }
     if (member.medicalLastDay === null) {
       out.push({ guard: "medicalExpired", reason: `${member.name} has no medical certificate on record (14 CFR 61.23).` });
     } else if (lapses(member.medicalLastDay, window.endDate)) {
-      out.push({ guard: "medicalExpired", reason: `${member.name}'s medical certificate runs out on ${member.medicalLastDay}, before the booking ends (14 CFR 61.23).` });
+      out.push({ guard: "medicalExpired", reason: `${member.name}'s medical certificate expires after ${member.medicalLastDay}, before the booking ends (14 CFR 61.23).` });
     }
   }
   if (member.arrears?.inArrears) {
