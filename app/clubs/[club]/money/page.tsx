@@ -53,7 +53,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
       </section>
       <p role="status" className={`mt-4 rounded border px-3 py-2 text-sm ${problems.length ? "border-stop-600 bg-stop-100 text-stop-800" : "border-go-600 bg-go-100 text-go-800"}`}>
         <span aria-hidden="true">{problems.length ? "▲ " : "✓ "}</span>
-        {problems.length ? `${problems.length} journal entries do not balance — tell the developers; nothing should ever allow this.` : `All ${countEntries(db, club.id)} journal entries balance (debits equal credits).`}
+        {problems.length ? `${problems.length} journal entries do not balance. This should never happen: stop posting and ask the club's administrator to contact Hangarline support.` : `All ${countEntries(db, club.id)} journal entries balance (debits equal credits).`}
         {locked ? ` The books are locked through ${locked} (reconciled).` : " No period is locked yet."}
       </p>
       <div className="mt-6 grid gap-6 lg:grid-cols-2">
