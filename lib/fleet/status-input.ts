@@ -103,6 +103,8 @@ export function buildStatusInput(input: {
   conversions?: FleetMeterConversionRecord[];
   dueSoon: DueSoonThresholds;
   now: string;
+  /** The club's time zone, for the words of notice times. */
+  timeZone?: string;
 }): AircraftStatusInput {
   const id = input.aircraft.id;
   const byItem = new Map<string, FleetCompletionRecord[]>();
@@ -119,5 +121,6 @@ export function buildStatusInput(input: {
     dueSoon: input.dueSoon,
     meter: input.aircraft.maintenanceMeter,
     now: input.now,
+    ...(input.timeZone ? { timeZone: input.timeZone } : {}),
   };
 }
