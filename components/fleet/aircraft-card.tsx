@@ -24,7 +24,7 @@ export function AircraftCard({ entry, slug }: { entry: FlightLineEntry; slug: st
       <header className="flex flex-wrap items-start justify-between gap-2">
         <div className="min-w-0">
           <h2 id={headingId} className="text-xl font-bold">
-            <Link href={href}>{a.registration}</Link>
+            <Link href={href} className="tap">{a.registration}</Link>
           </h2>
           <p className="text-sm text-ink-700">{a.make} {a.model}{a.homeField ? ` · ${a.homeField}` : ""}</p>
         </div>
@@ -62,7 +62,7 @@ export function AircraftCard({ entry, slug }: { entry: FlightLineEntry; slug: st
 
       <footer className="mt-auto flex flex-wrap items-center justify-between gap-2 border-t border-sand-200 pt-2 text-sm text-ink-700">
         <span className="tabular font-mono">Hobbs {meter(a.hobbs)} · Tach {meter(a.tach)}</span>
-        <Link href={`${href}#squawks`}>
+        <Link href={`${href}#squawks`} className="tap">
           {entry.openSquawks.length === 0 ? "No open squawks" : `${entry.openSquawks.length} open squawk${entry.openSquawks.length === 1 ? "" : "s"}`}
           {entry.openSquawks.some((s) => s.triage === "untriaged") ? ` (${TRIAGE_WORDS.untriaged.toLowerCase()})` : ""}
         </Link>

@@ -71,7 +71,7 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
 
   return (
     <div className="max-w-5xl">
-      <p className="mb-2 text-sm"><Link href={`${base}/flight-line`}>← Flight line</Link></p>
+      <p className="mb-2 text-sm"><Link href={`${base}/flight-line`} className="tap">← Flight line</Link></p>
       <PageHeader title={plane.registration} lead={`${plane.make} ${plane.model} · ${plane.category}, ${plane.classRating}${plane.tailwheel ? ", tailwheel" : ""}${plane.homeField ? ` · ${plane.homeField}` : ""}`} actions={<StatusBadge status={entry.status} large />} />
       <SafetyCaution compact />
 
