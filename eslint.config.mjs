@@ -15,6 +15,11 @@ const NO_UTC_CALENDAR_DATE = {
   selector: "CallExpression[callee.property.name=/^(slice|substring|substr|split)$/][callee.object.type='CallExpression'][callee.object.callee.property.name='toISOString']",
   message: "Screens show the club's day and time: use isoDateInTimeZone(instant, club.timeZone) or formatLocalTime(instant, club.timeZone), never toISOString().slice(…).",
 };
+// The same mistake on an ISO string already made: "…T…Z".split("T")[0] or .replace("T", " ").
+const NO_UTC_SPLIT = {
+  selector: "CallExpression[callee.property.name=/^(split|replace)$/][arguments.0.type='Literal'][arguments.0.value='T']",
+  message: "An ISO instant split at \"T\" is a UTC date or time: use isoDateInTimeZone(instant, club.timeZone) or formatLocalTime(instant, club.timeZone).",
+};
 
 // Pure rules (lib/<area>) hold no database, framework or request plumbing, so they run the same in
 // a page, an action, the browser, a script and a unit test; reads and writes live in db/queries/
@@ -75,11 +80,20 @@ export default tseslint.config(
     // Screens: both rules (a later block's rule replaces an earlier one's, so both are listed).
     files: ["app/**/*.{ts,tsx}", "components/**/*.{ts,tsx}"],
     ignores: ["components/ability-boundary.tsx"],
-    rules: { "no-restricted-syntax": ["error", NO_DIRECT_ABILITY, NO_UTC_CALENDAR_DATE] },
+    rules: { "no-restricted-syntax": ["error", NO_DIRECT_ABILITY, NO_UTC_CALENDAR_DATE, NO_UTC_SPLIT] },
   },
   {
     files: ["components/ability-boundary.tsx"],
-    rules: { "no-restricted-syntax": ["error", NO_UTC_CALENDAR_DATE] },
+    rules: { "no-restricted-syntax": ["error", NO_UTC_CALENDAR_DATE, NO_UTC_SPLIT] },
+  },
+  {
+    // Action answers and e-mails reach people too: the club's day and time there as well.
+    files: ["lib/actions/**/*.ts"],
+    rules: { "no-restricted-syntax": ["error", NO_DIRECT_ABILITY, NO_UTC_CALENDAR_DATE, NO_UTC_SPLIT] },
+  },
+  {
+    files: ["emails/**/*.{ts,tsx}"],
+    rules: { "no-restricted-syntax": ["error", NO_UTC_CALENDAR_DATE, NO_UTC_SPLIT] },
   },
   {
     // Server logs go through lib/server/log.ts, which withholds SQL parameters and masks

@@ -13,6 +13,12 @@ const config: Config = {
         go: { 100: "#dcefe2", 600: "#2d7a4a", 800: "#1c5132" },
         stop: { 100: "#f7dede", 600: "#b3312f", 800: "#7a1f1d" },
         ask: { 100: "#e6e4f4", 600: "#5a4fa3", 800: "#3a3270" },
+        // Aircraft status: our own four, told apart by glyph and border as much as by hue
+        // (never a green / amber / red set): open sky, dusk violet, hangar-door plum, fog slate.
+        sky: { 50: "#eef6fb", 100: "#d9ecf6", 600: "#1d6a93", 800: "#0f4461" },
+        dusk: { 50: "#f4f0fa", 100: "#e7ddf4", 600: "#6a43a8", 800: "#442a70" },
+        plum: { 50: "#fbeff4", 100: "#f4d9e5", 600: "#8e2356", 800: "#5c1236" },
+        fog: { 50: "#f3f4f4", 100: "#e3e6e7", 600: "#56646b", 800: "#2f3a40" },
       },
       fontFamily: {
         sans: ["var(--font-sans)", "system-ui", "sans-serif"],

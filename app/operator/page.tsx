@@ -6,6 +6,7 @@ import { listOperatorClubSummaries } from "@/db/queries/operator";
 import { authorizeOperatorPage } from "@/lib/server/authorize";
 import { formatMoney } from "@/lib/money";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
+import { STATUS_TEXT_TONE, StatusShape } from "@/components/ui/status-badge";
 
 export default async function OperatorHome() {
   const user = await authorizeOperatorPage();
@@ -22,12 +23,12 @@ export default async function OperatorHome() {
               <div><dt className="text-ink-500">Active members</dt><dd className="text-xl font-bold tabular">{c.activeMembers}</dd></div>
               <div><dt className="text-ink-500">Admins</dt><dd className="text-xl font-bold tabular">{c.admins}</dd></div>
               <div><dt className="text-ink-500">Receivables</dt><dd className="text-xl font-bold tabular">{formatMoney(c.receivables.totalMinor, c.currency, c.locale)}</dd></div>
-              <div><dt className="text-ink-500">Over 30 days past due</dt><dd className="text-xl font-bold tabular">{formatMoney(c.receivables.over30Minor, c.currency, c.locale)}</dd></div>
+              <div><dt className="text-ink-500">Overdue more than 30 days</dt><dd className="text-xl font-bold tabular">{formatMoney(c.receivables.over30Minor, c.currency, c.locale)}</dd></div>
             </dl>
             <p className="mt-3 text-sm font-bold text-ink-700">Fleet</p>
             <ul className="mt-1 flex flex-wrap gap-2 text-sm" aria-label={`Fleet status of ${c.name}`}>
               {(["flyable", "limited", "grounded", "unknown"] as const).map((s) => (
-                <li key={s} className="rounded border border-sand-300 bg-sand-50 px-2 py-1"><span className="tabular font-bold">{c.fleet[s]}</span> {STATUS_WORDS[s]}</li>
+                <li key={s} className={`inline-flex items-center gap-1 rounded border border-sand-300 bg-sand-50 px-2 py-1 ${STATUS_TEXT_TONE[s]}`}><StatusShape status={s} size={14} /><span className="tabular font-bold">{c.fleet[s]}</span> {STATUS_WORDS[s]}</li>
               ))}
             </ul>
             {c.admins === 0 ? <p className="mt-2 text-sm text-sock-700">No active admin yet: appoint one.</p> : null}

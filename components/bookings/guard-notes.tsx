@@ -8,8 +8,8 @@ const GUARD_LABELS: Record<string, string> = {
   flightReview: "Flight review",
   limitations: "Flies with limits",
   medicalExpired: "Medical",
-  inArrears: "Account in arrears",
-  statusUnknown: "Check status",
+  inArrears: "Account overdue",
+  statusUnknown: "Status unknown",
 };
 
 /**

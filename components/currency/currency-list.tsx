@@ -3,7 +3,7 @@ import { CurrencyStateBadge } from "./state-badge";
 
 function until(item: CurrencyItem): string {
   if (!item.lastDay) return item.key.startsWith("passenger") || item.key.startsWith("recency") ? "No qualifying flights logged" : "Nothing recorded";
-  return item.state === "expired" ? `Lapsed after ${item.lastDay}` : `Through ${item.lastDay}`;
+  return item.state === "expired" ? `Expired after ${item.lastDay}` : `Expires after ${item.lastDay}`;
 }
 
 /** What the member's own unverified entries would make of an item: shown, never counted. */

@@ -9,7 +9,7 @@ export function SendRemindersForm({ slug, days }: { slug: string; days: number }
   return (
     <FormShell form={form} label="Send expiry reminders">
       <input type="hidden" name="club" value={slug} />
-      <p className="mb-2 text-sm text-ink-700">E-mails each member whose medical, flight review or other document lapses within {days} days (the club setting), once per expiry date.</p>
+      <p className="mb-2 text-sm text-ink-700">E-mails each member whose medical, flight review or other document expires within {days} days (the club setting), once per expiry date.</p>
       <SubmitButton variant="secondary" pendingText="Queuing…">Send expiry reminders</SubmitButton>
     </FormShell>
   );

@@ -11,8 +11,8 @@ import { DOCUMENT_KIND_LABELS } from "@/lib/safety/labels";
 const COPY: Record<DocumentKind, { issued: string; reference: string; details: string; expires: string | null }> = {
   pilot_certificate: { issued: "Date issued", reference: "Certificate number", details: "Certificate level and ratings", expires: null },
   flight_review: { issued: "Date of the review", reference: "Logbook reference (optional)", details: "Instructor who gave it", expires: null },
-  renters_insurance: { issued: "Policy start", reference: "Policy number", details: "Insurer and limits", expires: "Policy end" },
-  club_agreement: { issued: "Date signed", reference: "Agreement version (optional)", details: "Notes (optional)", expires: "Valid until (optional)" },
+  renters_insurance: { issued: "Policy start", reference: "Policy number", details: "Insurer and limits", expires: "Policy expires on" },
+  club_agreement: { issued: "Date signed", reference: "Agreement version (optional)", details: "Notes (optional)", expires: "Expires on (optional)" },
 };
 
 export function DocumentForm({ slug, today }: { slug: string; today: string }) {
@@ -35,7 +35,7 @@ export function DocumentForm({ slug, today }: { slug: string; today: string }) {
         <Field label={copy.reference} name="reference" maxLength={80} autoComplete="off" errors={e.reference} />
         <Field label={copy.details} name="details" maxLength={500} errors={e.details} />
       </div>
-      {kind === "flight_review" ? <p className="mb-4 text-sm text-ink-700">Valid through the end of the 24th calendar month after the review month (14 CFR 61.56(c)); Hangarline works the date out.</p> : null}
+      {kind === "flight_review" ? <p className="mb-4 text-sm text-ink-700">Expires at the end of the 24th calendar month after the review month (14 CFR 61.56(c)); Hangarline works the date out.</p> : null}
       <Field label="Scan or photo (optional)" name="file" type="file" accept="application/pdf,image/jpeg,image/png,image/webp,image/heic" errors={e.file} hint="PDF or photo, up to 10 MB. Instructors, the safety officer and club admins can open it." />
       <SubmitButton>Record document</SubmitButton>
     </FormShell>

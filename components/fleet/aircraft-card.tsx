@@ -4,10 +4,13 @@ import { formatHours } from "@/lib/airworthiness";
 import { pickNextDue } from "@/lib/fleet/flight-line";
 import { TRIAGE_WORDS } from "@/lib/fleet/status-words";
 import type { FlightLineEntry } from "@/lib/fleet/types";
-import { dueLabel, dueText, dueTone } from "./due-text";
+import { DUE_STATE_WORDS, dueState, remainingWords } from "@/lib/fleet/due-words";
+import { DueGlyph } from "./due-view";
+
+const DUE_TONE = { overdue: "text-plum-800", unknown: "text-fog-800", soon: "text-dusk-800", ok: "text-ink-700" } as const;
 
 function meter(value: number | null): string {
-  return value === null ? "not recorded" : formatHours(value);
+  return value === null ? "missing record" : formatHours(value);
 }
 
 /** One aircraft on the flight line: status word and shape, every reason, next due, open squawks. */
@@ -21,7 +24,7 @@ export function AircraftCard({ entry, slug }: { entry: FlightLineEntry; slug: st
       <header className="flex flex-wrap items-start justify-between gap-2">
         <div className="min-w-0">
           <h2 id={headingId} className="text-xl font-bold">
-            <Link href={href}>{a.registration}</Link>
+            <Link href={href} className="tap">{a.registration}</Link>
           </h2>
           <p className="text-sm text-ink-700">{a.make} {a.model}{a.homeField ? ` · ${a.homeField}` : ""}</p>
         </div>
@@ -34,7 +37,7 @@ export function AircraftCard({ entry, slug }: { entry: FlightLineEntry; slug: st
         ) : (
           <ul className="space-y-1 text-sm">
             {entry.reasons.map((r, i) => (
-              <li key={`${r.code}-${i}`} className={`flex gap-2 ${r.grounding ? "font-bold text-stop-800" : "text-ink-900"}`}>
+              <li key={`${r.code}-${i}`} className={`flex gap-2 ${r.grounding ? "font-bold text-plum-800" : "text-ink-900"}`}>
                 <span aria-hidden="true">{r.grounding ? "■" : "•"}</span>
                 <span className="min-w-0 break-words">{r.grounding ? <span className="sr-only">Grounding reason: </span> : null}{r.text}</span>
               </li>
@@ -48,8 +51,9 @@ export function AircraftCard({ entry, slug }: { entry: FlightLineEntry; slug: st
           <h3 className="text-sm font-bold uppercase tracking-wide text-ink-500">Next due</h3>
           <ul className="mt-1 space-y-0.5 text-sm">
             {next.map((d) => (
-              <li key={d.key} className={dueTone(d)}>
-                {dueLabel(d) ? `${dueLabel(d)}: ` : ""}{d.name} {dueText(d)}
+              <li key={d.key} className={`flex gap-1.5 ${DUE_TONE[dueState(d)]}`}>
+                <span className="mt-0.5"><DueGlyph state={dueState(d)} size={14} /></span>
+                <span className="min-w-0"><span className="font-bold">{d.name}</span>{dueState(d) === "ok" ? "" : ` · ${DUE_STATE_WORDS[dueState(d)]}`}: {remainingWords(d)}</span>
               </li>
             ))}
           </ul>
@@ -58,7 +62,7 @@ export function AircraftCard({ entry, slug }: { entry: FlightLineEntry; slug: st
 
       <footer className="mt-auto flex flex-wrap items-center justify-between gap-2 border-t border-sand-200 pt-2 text-sm text-ink-700">
         <span className="tabular font-mono">Hobbs {meter(a.hobbs)} · Tach {meter(a.tach)}</span>
-        <Link href={`${href}#squawks`}>
+        <Link href={`${href}#squawks`} className="tap">
           {entry.openSquawks.length === 0 ? "No open squawks" : `${entry.openSquawks.length} open squawk${entry.openSquawks.length === 1 ? "" : "s"}`}
           {entry.openSquawks.some((s) => s.triage === "untriaged") ? ` (${TRIAGE_WORDS.untriaged.toLowerCase()})` : ""}
         </Link>

@@ -3,7 +3,7 @@ import { useQuery } from "@tanstack/react-query";
 import { useRef } from "react";
 import type { FlightLineEntry } from "@/lib/fleet/types";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
-import { StatusShape } from "@/components/ui/status-badge";
+import { STATUS_TEXT_TONE, StatusShape } from "@/components/ui/status-badge";
 import { AircraftCard } from "./aircraft-card";
 
 export type FlightLineData = { today: string; generatedAt: string; timeZone: string; entries: FlightLineEntry[] };
@@ -41,7 +41,7 @@ export function FlightLineBoard({ slug, initial }: { slug: string; initial: Flig
       <div className="mb-4 flex flex-wrap items-center justify-between gap-2 text-sm">
         <ul className="flex flex-wrap gap-3" aria-label="Fleet summary">
           {(["grounded", "unknown", "limited", "flyable"] as const).filter((s) => counts[s]).map((s) => (
-            <li key={s} className="inline-flex items-center gap-1"><StatusShape status={s} size={14} /> {counts[s]} {STATUS_WORDS[s].toLowerCase()}</li>
+            <li key={s} className={`inline-flex items-center gap-1 font-bold ${STATUS_TEXT_TONE[s]}`}><StatusShape status={s} size={14} /> {counts[s]} {STATUS_WORDS[s].toLowerCase()}</li>
           ))}
         </ul>
         <p role="status" aria-live="polite" className={isError ? "font-bold text-stop-800" : "text-ink-500"}>

@@ -63,16 +63,17 @@ export function TriageSquawkForm({ slug, squawkId, current, limitation, determin
 export function CloseSquawkForm({ slug, squawkId, today, needsMechanic }: { slug: string; squawkId: string; today: string; needsMechanic: boolean }) {
   const form = useFormAction(closeSquawk);
   const { state } = form;
+  // "Return to service" is said only of what grounded or limited the aircraft; a note is just closed.
   return (
-    <FormShell form={form} label="Close squawk with return to service">
+    <FormShell form={form} label={needsMechanic ? "Close squawk with return to service" : "Close note"}>
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="squawkId" value={squawkId} />
       <TextAreaField label="What was done" name="repairNotes" id={`repair-${squawkId}`} required errors={state.fieldErrors.repairNotes} />
-      <Field label={`Mechanic's name${needsMechanic ? "" : " (optional for a note)"}`} name="rtsMechanicName" id={`rts-name-${squawkId}`} errors={state.fieldErrors.rtsMechanicName} />
-      <Field label={`Certificate number${needsMechanic ? "" : " (optional for a note)"}`} name="rtsCertificate" id={`rts-cert-${squawkId}`} errors={state.fieldErrors.rtsCertificate} />
-      <Field label="Return-to-service date" name="rtsOn" id={`rts-on-${squawkId}`} type="date" defaultValue={today} max={today} errors={state.fieldErrors.rtsOn} />
+      <Field label={`Mechanic's name${needsMechanic ? "" : " (optional)"}`} name="rtsMechanicName" id={`rts-name-${squawkId}`} errors={state.fieldErrors.rtsMechanicName} />
+      <Field label={`Certificate number${needsMechanic ? "" : " (optional)"}`} name="rtsCertificate" id={`rts-cert-${squawkId}`} errors={state.fieldErrors.rtsCertificate} />
+      <Field label={needsMechanic ? "Return-to-service date" : "Date closed"} name="rtsOn" id={`rts-on-${squawkId}`} type="date" defaultValue={today} max={today} errors={state.fieldErrors.rtsOn} />
       <FileField label="Work order or logbook page (optional)" name="document" id={`rts-doc-${squawkId}`} accept="image/jpeg,image/png,image/webp,image/heic,application/pdf" hint="PDF or photo, up to 10 MB." errors={state.fieldErrors.document} />
-      <SubmitButton variant="primary">Close and return to service</SubmitButton>
+      <SubmitButton variant="primary">{needsMechanic ? "Close and return to service" : "Close note"}</SubmitButton>
     </FormShell>
   );
 }

@@ -41,7 +41,7 @@ export function SquawkList({ slug, timeZone, rows, events, files, today, canTria
             <p className="text-sm text-ink-500">{FOUND_DURING_WORDS[s.foundDuring]} · reported by {s.reportedByName ?? "a member"}{s.suspectedGrounding ? " · reporter thinks it may affect airworthiness" : ""}</p>
             {s.limitation && s.status === "open" ? <p className="mt-1 text-sm font-bold text-sock-700">Limitation: {s.limitation}</p> : null}
             {s.status === "closed" ? (
-              <p className="mt-1 text-sm">Returned to service {s.rtsOn}{s.rtsMechanicName ? ` by ${s.rtsMechanicName}, certificate ${s.rtsCertificate}` : ""}: {s.repairNotes}</p>
+              <p className="mt-1 text-sm">{s.triage === "note" ? "Closed" : "Returned to service"} {s.rtsOn}{s.rtsMechanicName ? ` by ${s.rtsMechanicName}, certificate ${s.rtsCertificate}` : ""}: {s.repairNotes}</p>
             ) : null}
             {photos.length ? (
               <ul className="mt-2 flex flex-wrap gap-2" aria-label="Files">
@@ -80,7 +80,7 @@ export function SquawkList({ slug, timeZone, rows, events, files, today, canTria
                 ) : null}
                 {canClose ? (
                   <details className="rounded border border-sand-200 p-2">
-                    <summary className="cursor-pointer font-bold text-fin-600">Close (return to service)</summary>
+                    <summary className="cursor-pointer font-bold text-fin-600">{s.triage === "note" ? "Close the note" : "Close (return to service)"}</summary>
                     <div className="mt-2"><CloseSquawkForm slug={slug} squawkId={s.id} today={today} needsMechanic={s.triage !== "note"} /></div>
                   </details>
                 ) : null}

@@ -28,7 +28,7 @@ export function AccountView({ data, currency, locale, timeZone, slug, userId, st
         <h2 id="balance-h" className="text-lg font-bold">Balance</h2>
         <p className="mt-1 text-3xl font-bold" data-testid="account-balance"><Money minor={data.balanceMinor} currency={currency} locale={locale} credit /></p>
         <p className="text-ink-700">{balanceWords(data.balanceMinor)}</p>
-        {data.overdueMinor > 0 ? <p className="mt-1 text-sm text-ink-700">Past due: <Money minor={data.overdueMinor} currency={currency} locale={locale} /> (oldest due {data.oldestDueDate ? formatDate(data.oldestDueDate, locale ?? DEFAULT_LOCALE) : "—"})</p> : null}
+        {data.overdueMinor > 0 ? <p className="mt-1 text-sm text-ink-700">Overdue: <Money minor={data.overdueMinor} currency={currency} locale={locale} /> (oldest due {data.oldestDueDate ? formatDate(data.oldestDueDate, locale ?? DEFAULT_LOCALE) : "—"})</p> : null}
         <p className="mt-2"><ArrearsFlag inArrears={data.inArrears} /></p>
         {payButton ? <div className="mt-4">{payButton}</div> : null}
       </section>

@@ -11,7 +11,7 @@ export function ArrearsFlag({ inArrears }: { inArrears: boolean }) {
   if (!inArrears) return <span className="inline-flex items-center gap-1 text-ink-700"><span aria-hidden="true">○</span>Up to date</span>;
   return (
     <span className="inline-flex items-center gap-1 rounded border border-stop-600 bg-stop-100 px-1.5 font-bold text-stop-800">
-      <span aria-hidden="true">▲</span>In arrears
+      <span aria-hidden="true">▲</span>Overdue
     </span>
   );
 }

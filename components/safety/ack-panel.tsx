@@ -1,5 +1,6 @@
 "use client";
 import { useQuery } from "@tanstack/react-query";
+import { formatInstantWords } from "@/lib/dates/words";
 import { ShapeIcon } from "./status-shapes";
 import { RemindForm } from "./publish-draft-form";
 
@@ -12,7 +13,7 @@ export type AckSnapshot = {
 };
 
 /** Who has and has not acknowledged; refreshes itself so the count moves as members acknowledge. */
-export function AckPanel({ slug, bulletinId, initial, canExport, canRemind, current }: { slug: string; bulletinId: string; initial: AckSnapshot; canExport: boolean; canRemind: boolean; current: boolean }) {
+export function AckPanel({ slug, bulletinId, initial, canExport, canRemind, current, timeZone }: { slug: string; bulletinId: string; initial: AckSnapshot; canExport: boolean; canRemind: boolean; current: boolean; timeZone: string }) {
   const { data } = useQuery({
     queryKey: ["bulletin-acks", slug, bulletinId],
     queryFn: async () => {
@@ -52,7 +53,7 @@ export function AckPanel({ slug, bulletinId, initial, canExport, canRemind, curr
                     <span className="inline-flex items-center gap-1 text-sock-700"><ShapeIcon shape="ring" />Not yet</span>
                   )}
                 </td>
-                <td className="whitespace-nowrap px-3 py-2 font-mono tabular">{r.acknowledgedAt ? r.acknowledgedAt.slice(0, 16).replace("T", " ") : "—"}</td>
+                <td className="whitespace-nowrap px-3 py-2 font-mono tabular">{r.acknowledgedAt ? formatInstantWords(r.acknowledgedAt, timeZone) : "—"}</td>
               </tr>
             ))}
             {data.rows.length === 0 ? <tr><td colSpan={3} className="px-3 py-4 text-center text-ink-500">Nobody is in this audience.</td></tr> : null}

@@ -9,7 +9,7 @@ export function clubNavItems(slug: string, ability: AppAbility, userId: string):
   const items: (NavItem & { show: boolean })[] = [
     { href: base, label: "Club home", description: "Notices and what needs you", show: can(ability, "read", "Club") },
     { href: `${base}/flight-line`, label: "Flight line", description: "Which aircraft can fly and why", show: can(ability, "read", "Aircraft") },
-    { href: `${base}/maintenance`, label: "Maintenance", description: "Inspections, squawks, return to service", show: can(ability, "record", "Inspection") || can(ability, "triage", "Squawk") },
+    { href: `${base}/maintenance`, label: "Maintenance", description: "Inspections, squawks and repairs", show: can(ability, "record", "Inspection") || can(ability, "triage", "Squawk") },
     { href: `${base}/flights`, label: "Flight log", description: "Meter times and landings", show: can(ability, "read", "Flight") },
     { href: `${base}/bookings`, label: "Bookings", description: "Reserve an aircraft", show: can(ability, "create", "Booking") },
     { href: `${base}/safety`, label: "Safety", description: "Bulletins, reports, currency", show: can(ability, "read", "Bulletin") },

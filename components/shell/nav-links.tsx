@@ -14,7 +14,7 @@ export function NavLinks({ items, home }: { items: NavItem[]; home: string }) {
             <Link
               href={item.href}
               aria-current={active ? "page" : undefined}
-              className={`block rounded px-3 py-2 no-underline ${active ? "bg-white font-bold text-fin-700" : "text-sand-50 hover:bg-fin-500 hover:no-underline"}`}
+              className={`flex min-h-11 items-center rounded px-3 py-2 no-underline ${active ? "bg-white font-bold text-fin-700" : "text-sand-50 hover:bg-fin-500 hover:no-underline"}`}
             >
               {item.label}
             </Link>

@@ -41,11 +41,11 @@ export function aircraftAverageFlightHours(db: Handle, clubId: string, plane: Pi
 }
 
 /** The flight line's own status rules on one aircraft's records; never "flyable" by default. */
-function statusOf(records: FleetRecords, record: FleetAircraftRecord, today: string, now: string, soon: { days: number; hours: number }): AircraftStatusResult {
+function statusOf(records: FleetRecords, record: FleetAircraftRecord, today: string, now: string, soon: { days: number; hours: number }, timeZone: string): AircraftStatusResult {
   try {
-    return aircraftStatus(buildStatusInput({ ...records, aircraft: record, dueSoon: soon, now }), today, maintenanceHours(record));
+    return aircraftStatus(buildStatusInput({ ...records, aircraft: record, dueSoon: soon, now, timeZone }), today, maintenanceHours(record));
   } catch (error) {
-    return { status: "unknown", reasons: [{ code: "status-error", text: `Status could not be computed from the records: ${error instanceof Error ? error.message : String(error)}`, grounding: false }] };
+    return { status: "unknown", reasons: [{ code: "status-error", text: `Status unknown: ${error instanceof Error ? error.message : String(error)}`, grounding: false }] };
   }
 }
 
@@ -55,7 +55,7 @@ export function aircraftStatusNowAndAtEnd(db: Handle, club: Club, plane: Aircraf
   const soon = { days: club.settings.dueSoonDays, hours: club.settings.dueSoonHours };
   const average = aircraftAverageFlightHours(db, club.id, plane);
   if (!record) return { statusNow: { status: "unknown" as const, reasons: [] }, statusAtEnd: null, average };
-  const statusNow = statusOf(records, record, isoDateInTimeZone(now, club.timeZone), now.toISOString(), soon);
+  const statusNow = statusOf(records, record, isoDateInTimeZone(now, club.timeZone), now.toISOString(), soon, club.timeZone);
 
   // Every active booking that ends after now and starts before this one ends flies about one
   // average flight first (this booking included, counted once even while it is being changed).
@@ -64,7 +64,7 @@ export function aircraftStatusNowAndAtEnd(db: Handle, club: Club, plane: Aircraf
   const projected = projectedMeterHours(meter, average, Math.max(ahead, 1));
   const endRecord = record.maintenanceMeter === "hobbs" ? { ...record, currentHobbs: projected } : { ...record, currentTach: projected };
   const end = window.endsAt.getTime() > now.getTime() ? window.endsAt : now;
-  const statusAtEnd = projected === null ? null : statusOf(records, endRecord, isoDateInTimeZone(end, club.timeZone), end.toISOString(), soon);
+  const statusAtEnd = projected === null ? null : statusOf(records, endRecord, isoDateInTimeZone(end, club.timeZone), end.toISOString(), soon, club.timeZone);
   return { statusNow, statusAtEnd, average };
 }
 

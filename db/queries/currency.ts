@@ -141,7 +141,7 @@ export function listClaims(db: Reader, clubId: string): ClaimRow[] {
     rows.push({ kind: "flight_review", id: r.id, userId: r.userId, what: `Flight review of ${r.issuedOn}${r.details ? ` (${r.details})` : ""}`, uploadId: r.uploadId, at: r.createdAt.getTime() });
   }
   for (const r of db.select().from(medicalCertificates).where(and(eq(medicalCertificates.clubId, clubId), isNull(medicalCertificates.verifiedAt))).all()) {
-    rows.push({ kind: "medical", id: r.id, userId: r.userId, what: `Medical valid through ${r.expiresOn}`, uploadId: null, at: r.createdAt.getTime() });
+    rows.push({ kind: "medical", id: r.id, userId: r.userId, what: `Medical, expires after ${r.expiresOn}`, uploadId: null, at: r.createdAt.getTime() });
   }
   for (const r of db.select().from(outsideFlightEntries).where(and(eq(outsideFlightEntries.clubId, clubId), isNull(outsideFlightEntries.verifiedAt))).all()) {
     const cls = r.category && r.classRating ? `${r.category}, ${r.classRating}${r.tailwheel ? ", tailwheel" : ""}` : "class not recorded";

@@ -186,7 +186,7 @@ function thresholds(club: Club) {
 /** The flight line computed now from the records, bypassing the snapshot (tests compare the two). */
 export function computeFlightLine(db: Db, club: Club, now: Date = new Date()): FlightLine {
   const today = isoDateInTimeZone(now, club.timeZone);
-  const entries = buildFlightLine(loadFleetRecords(db, club.id), today, now.toISOString(), thresholds(club));
+  const entries = buildFlightLine(loadFleetRecords(db, club.id), today, now.toISOString(), thresholds(club), club.timeZone);
   return { today, generatedAt: now.toISOString(), timeZone: club.timeZone, entries };
 }
 
@@ -247,7 +247,7 @@ function flightLineSnapshot(db: Db, club: Club, now: Date): FlightLineSnapshot {
   const key = `${today}|${club.timeZone}|${soon.days}|${soon.hours}`;
   return clubSnapshot<FlightLineSnapshot>(db, FLIGHT_LINE, club.id, key, now.getTime(), () => {
     const records = fleetRecordsSnapshot(db, club.id, now.getTime());
-    const line = { entries: buildFlightLine(records, today, now.toISOString(), soon) };
+    const line = { entries: buildFlightLine(records, today, now.toISOString(), soon, club.timeZone) };
     let validFrom = -Infinity;
     let validUntil = Infinity;
     for (const e of line.entries) {
@@ -296,6 +296,6 @@ export function getAircraftStatusEntry(db: Db, club: Club, aircraftId: string, n
   const today = isoDateInTimeZone(now, club.timeZone);
   const records = loadAircraftRecords(db, club.id, aircraftId, now);
   if (records.aircraft.length === 0) return undefined;
-  const [entry] = buildFlightLine(records, today, now.toISOString(), thresholds(club));
+  const [entry] = buildFlightLine(records, today, now.toISOString(), thresholds(club), club.timeZone);
   return entry ? { ...entry, today } : undefined;
 }

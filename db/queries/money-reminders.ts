@@ -29,7 +29,7 @@ export function sendDuesReminders(tx: DbLike, clubId: string, asOf: IsoDate): nu
     emails.push({
       clubId,
       to: contact.email,
-      subject: `${club.name}: ${money(Math.min(overdue, p.balanceMinor))} past due on your account`,
+      subject: `${club.name}: ${money(Math.min(overdue, p.balanceMinor))} overdue on your account`,
       template: "dues-reminder",
       payload: {
         clubName: club.name,

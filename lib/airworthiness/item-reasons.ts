@@ -9,12 +9,12 @@ function cite(item: InspectionItem): string {
 }
 
 const MISSING_TEXT: Record<MissingData, { code: string; text: string }> = {
-  "no-completion": { code: "no-completion", text: "no completion on record" },
-  "no-completion-hours": { code: "hours-unknown", text: "no meter hours recorded with the last completion" },
-  "no-current-hours": { code: "hours-unknown", text: "current meter hours not known" },
-  "no-expiry-date": { code: "expiry-unknown", text: "no expiry date recorded with the last completion" },
-  "no-use-record": { code: "use-unknown", text: "cumulative use not recorded" },
-  "other-meter": { code: "other-meter", text: "the last completion was read on another meter" },
+  "no-completion": { code: "no-completion", text: "missing record: its last completion" },
+  "no-completion-hours": { code: "hours-unknown", text: "missing record: the meter reading at its last completion" },
+  "no-current-hours": { code: "hours-unknown", text: "missing record: the aircraft's current meter reading" },
+  "no-expiry-date": { code: "expiry-unknown", text: "missing record: the expiry date of its last completion" },
+  "no-use-record": { code: "use-unknown", text: "missing record: its cumulative use" },
+  "other-meter": { code: "other-meter", text: "missing record: its last completion's reading on the meter inspections now count by" },
 };
 
 const METER_WORD: Record<MeterName, string> = { hobbs: "Hobbs", tach: "tach" };
@@ -26,7 +26,7 @@ function otherMeterText(next: NextDue): string | null {
   const at = next.lastDone?.hours;
   const reading = typeof at === "number" ? ` at ${formatHours(at)} h` : "";
   return `last done${reading} on the ${METER_WORD[m.completionMeter]}, but inspections now count by the ${METER_WORD[m.currentMeter]}; ` +
-    `its due point on the ${METER_WORD[m.currentMeter]} is not known until maintenance records the reading on the ${METER_WORD[m.currentMeter]}`;
+    `missing record: its due point on the ${METER_WORD[m.currentMeter]}, until maintenance records that completion's reading on the ${METER_WORD[m.currentMeter]}`;
 }
 
 function missingReasons(item: InspectionItem, next: NextDue): RankedReason[] {

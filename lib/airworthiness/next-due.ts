@@ -87,7 +87,7 @@ export function isHoursBased(item: InspectionItem): boolean {
  * Meter provenance: when the governing completion was read on another meter than `meter`
  * (the aircraft switched from Hobbs to tach, or back), its due point cannot be placed on the
  * meter now read: the two run at different rates and nothing in the completion says where it
- * stands on the other. The hours part is then "other-meter" (Check status) until maintenance
+ * stands on the other. The hours part is then "other-meter" (Status unknown) until maintenance
  * records a reading on the new meter. When either meter is absent or null (records from
  * before meters were stored, callers that do not say), the completion is taken as read on
  * the meter now: the behaviour before this rule, kept so that old callers see no change; the

@@ -1,6 +1,7 @@
 // Reasons from open squawks and grounding notices.
 
 import type { IsoDate } from "@/lib/dates";
+import { formatInstantWords } from "@/lib/dates/words";
 import { makeReason, type RankedReason } from "./reason";
 import type { GroundingNotice, Squawk } from "./types";
 
@@ -57,14 +58,19 @@ function isEffective(notice: GroundingNotice, today: IsoDate, now: string | unde
   return notice.effectiveAt.slice(0, 10) <= today;
 }
 
-export function noticeReasons(notices: GroundingNotice[], today: IsoDate, now?: string): RankedReason[] {
+/** The notice's instant on the club's clock ("Wed 2 Dec 2026, 20:25"); without the club's zone, in UTC and said so. */
+function when(instant: string, timeZone: string | undefined): string {
+  return timeZone ? formatInstantWords(instant, timeZone) : `${formatInstantWords(instant, "UTC")} UTC`;
+}
+
+export function noticeReasons(notices: GroundingNotice[], today: IsoDate, now?: string, timeZone?: string): RankedReason[] {
   return notices
     .filter((n) => !n.liftedAt)
     .map((n) => {
       const reason = n.reason.trim() || "(no reason given)";
       if (isEffective(n, today, now)) {
-        return makeReason("grounded", "notice-active", `Grounding notice in effect since ${n.effectiveAt}: ${reason}`);
+        return makeReason("grounded", "notice-active", `Grounding notice in effect since ${when(n.effectiveAt, timeZone)}: ${reason}`);
       }
-      return makeReason("advisory", "notice-pending", `Grounding notice takes effect ${n.effectiveAt}: ${reason}`);
+      return makeReason("advisory", "notice-pending", `Grounding notice takes effect ${when(n.effectiveAt, timeZone)}: ${reason}`);
     });
 }

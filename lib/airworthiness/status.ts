@@ -33,7 +33,7 @@ export function aircraftStatus(
   parseIsoDate(today); // a bad "today" is a caller's bug: fail loudly, not "flyable"
   const soon = input.dueSoon ?? DEFAULT_DUE_SOON;
   const reasons: RankedReason[] = [
-    ...noticeReasons(input.notices ?? [], today, input.now),
+    ...noticeReasons(input.notices ?? [], today, input.now, input.timeZone),
     ...squawkReasons(input.squawks ?? []),
   ];
   for (const item of input.items) {

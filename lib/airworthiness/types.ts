@@ -115,6 +115,8 @@ export interface AircraftStatusInput {
   /** ISO instant of "now" for notice effective times; without it, a notice counts from the
    *  start of its effective date (earlier, never later, than the real instant). */
   now?: string;
+  /** The club's IANA time zone: notice times are written on its clock. Absent: written in UTC, said so. */
+  timeZone?: string;
 }
 
 export type AircraftStatus = "flyable" | "limited" | "grounded" | "unknown";

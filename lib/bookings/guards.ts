@@ -35,7 +35,7 @@ export type GuardInput = {
     /**
      * The status at the end of the booking: the end date as "today", notices effective by then,
      * and the meter projected at the club's average flight length. Null when it cannot be
-     * computed (then the booking is warned "Check status").
+     * computed (then the booking is warned "Status unknown").
      */
     statusAtEnd: AircraftStatusResult | null;
     /** Average flight length used for the projection, in hours, for the reason text. */
@@ -89,11 +89,11 @@ function aircraftFindings(input: GuardInput): GuardFinding[] {
   }
   if (aircraft.statusNow.status === "unknown") {
     const texts = aircraft.statusNow.reasons.filter((r) => !r.grounding).map((r) => r.text);
-    out.push({ guard: "statusUnknown", reason: `Check status: ${reg}'s status cannot be computed from its records (${texts.join("; ") || "records missing"}).` });
+    out.push({ guard: "statusUnknown", reason: `Status unknown: ${reg} is missing a record its status needs (${texts.join("; ") || "record not named"}).` });
   }
   const atEnd = aircraft.statusAtEnd;
   if (!atEnd) {
-    out.push({ guard: "statusUnknown", reason: `Check status: whether anything on ${reg} comes due before this booking ends cannot be computed.` });
+    out.push({ guard: "statusUnknown", reason: `Status unknown: ${reg} is missing a record needed to tell whether anything comes due before this booking ends.` });
     return out;
   }
   const nowTexts = new Set(aircraft.statusNow.reasons.map((r) => r.text));
@@ -151,13 +151,13 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
     if (member.flightReviewLastDay === null) {
       out.push({ guard: "flightReview", reason: `${member.name} may not act as pilot in command: no verified flight review on record (14 CFR 61.56(c)). Book with an instructor, or have an instructor verify your flight review.` });
     } else if (lapses(member.flightReviewLastDay, window.endDate)) {
-      out.push({ guard: "flightReview", reason: `${member.name} may not act as pilot in command after ${member.flightReviewLastDay}: the flight review runs out before the booking ends (14 CFR 61.56(c)). Book with an instructor for a flight review.` });
+      out.push({ guard: "flightReview", reason: `${member.name} may not act as pilot in command after ${member.flightReviewLastDay}: the flight review expires before the booking ends (14 CFR 61.56(c)). Book with an instructor for a flight review.` });
     }
     const current: string[] = [];
     if (member.checkedOut && lapses(member.recencyLastDay, window.endDate)) {
       current.push(
         member.recencyLastDay
-          ? `the club's rule of a flight in the ${aircraft.typeGroup} within ${settings.recencyDaysInType} days runs out on ${member.recencyLastDay}`
+          ? `the club's rule of a flight in the ${aircraft.typeGroup} within ${settings.recencyDaysInType} days expires after ${member.recencyLastDay}`
           : `no flight in the ${aircraft.typeGroup} on record within the club's ${settings.recencyDaysInType} days`,
       );
     }
@@ -167,22 +167,22 @@ function memberFindings(input: GuardInput, settings: Pick<ClubSettings, "recency
     if (current.length) out.push({ guard: "notCurrent", reason: `${member.name} is not current: ${current.join("; ")}.` });
     if (input.carryingPassengers && input.nightFlight && lapses(member.passengerNightLastDay, window.endDate)) {
       const why = input.nightUnknown
-        ? "Night could not be computed (the club's home field position is not recorded), so this booking is treated as touching night"
+        ? "Night unknown (missing record: the club's home field position), so this booking is treated as touching night"
         : "This booking touches night (from one hour after sunset to one hour before sunrise at the home field)";
       const standing = member.passengerNightLastDay
-        ? `night passenger currency runs out on ${member.passengerNightLastDay}`
+        ? `night passenger currency expires after ${member.passengerNightLastDay}`
         : "no 3 full-stop night landings within the preceding 90 days on record";
       out.push({ guard: "notCurrent", reason: `${why}: ${member.name} may not carry passengers then: ${standing} (14 CFR 61.57(b)).` });
     }
     if (member.medicalLastDay === null) {
       out.push({ guard: "medicalExpired", reason: `${member.name} has no medical certificate on record (14 CFR 61.23).` });
     } else if (lapses(member.medicalLastDay, window.endDate)) {
-      out.push({ guard: "medicalExpired", reason: `${member.name}'s medical certificate runs out on ${member.medicalLastDay}, before the booking ends (14 CFR 61.23).` });
+      out.push({ guard: "medicalExpired", reason: `${member.name}'s medical certificate expires after ${member.medicalLastDay}, before the booking ends (14 CFR 61.23).` });
     }
   }
   if (member.arrears?.inArrears) {
     const since = member.arrears.oldestDueDate ? `, unpaid since ${member.arrears.oldestDueDate}` : "";
-    out.push({ guard: "inArrears", reason: `${member.name}'s account is in arrears: ${member.arrears.owedText} owed${since}.` });
+    out.push({ guard: "inArrears", reason: `${member.name}'s account is overdue: ${member.arrears.owedText} owed${since}.` });
   }
   return out;
 }

@@ -102,6 +102,7 @@ export function summarizeDue(items: InspectionItem[], flags: ReturnType<typeof t
       useLeftHours: next.useLeftHours,
       overdue: next.overdue,
       incomplete: next.missing.length > 0,
+      required: item.required,
       dueSoon: !next.overdue && (daysSoon || hoursSoon),
       ifrOnly: item.ifrOnly,
     });
@@ -114,7 +115,7 @@ function cannotCompute(error: unknown): AircraftStatusResult {
   const detail = error instanceof Error ? error.message : String(error);
   return {
     status: "unknown",
-    reasons: [{ code: "status-error", text: `Status could not be computed from the records: ${detail}`, grounding: false }],
+    reasons: [{ code: "status-error", text: `Status unknown: ${detail}`, grounding: false }],
   };
 }
 
@@ -123,13 +124,15 @@ export function buildFlightLineEntry(
   today: string,
   now: string,
   dueSoon: DueSoonThresholds,
+  /** The club's time zone: notice times in the reasons are written on its clock. */
+  timeZone?: string,
 ): FlightLineEntry {
   const a = records.aircraft;
   const hours = maintenanceHours(a);
   let result: AircraftStatusResult;
   let due: DueSummary[] = [];
   try {
-    const input = buildStatusInput({ ...records, dueSoon, now });
+    const input = buildStatusInput({ ...records, dueSoon, now, timeZone });
     result = aircraftStatus(input, today, hours);
     due = summarizeDue(input.items, input.flags, today, hours, dueSoon, input.meter);
   } catch (error) {
@@ -160,7 +163,7 @@ export function buildFlightLineEntry(
 }
 
 /** Every aircraft of the fleet, in the order given. Records are grouped once, not per aircraft. */
-export function buildFlightLine(records: FleetRecords, today: string, now: string, dueSoon: DueSoonThresholds): FlightLineEntry[] {
+export function buildFlightLine(records: FleetRecords, today: string, now: string, dueSoon: DueSoonThresholds, timeZone?: string): FlightLineEntry[] {
   const items = groupBy(records.items, (i) => i.aircraftId);
   const itemAircraft = new Map(records.items.map((i) => [i.id, i.aircraftId]));
   const completions = groupBy(records.completions, (c) => itemAircraft.get(c.itemId) ?? "");
@@ -172,6 +175,7 @@ export function buildFlightLine(records: FleetRecords, today: string, now: strin
       today,
       now,
       dueSoon,
+      timeZone,
     ),
   );
 }

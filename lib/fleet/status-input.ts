@@ -21,7 +21,7 @@ function need(value: number | null, what: string, item: FleetItemRecord): number
   return value;
 }
 
-/** A rule missing its interval cannot be computed: it throws, and the caller says "Check status". */
+/** A rule missing its interval cannot be computed: it throws, and the caller says "Status unknown". */
 export function toRule(item: FleetItemRecord): InspectionRule {
   const overrun = item.overrunHours ?? undefined;
   switch (item.ruleKind) {
@@ -103,6 +103,8 @@ export function buildStatusInput(input: {
   conversions?: FleetMeterConversionRecord[];
   dueSoon: DueSoonThresholds;
   now: string;
+  /** The club's time zone, for the words of notice times. */
+  timeZone?: string;
 }): AircraftStatusInput {
   const id = input.aircraft.id;
   const byItem = new Map<string, FleetCompletionRecord[]>();
@@ -119,5 +121,6 @@ export function buildStatusInput(input: {
     dueSoon: input.dueSoon,
     meter: input.aircraft.maintenanceMeter,
     now: input.now,
+    ...(input.timeZone ? { timeZone: input.timeZone } : {}),
   };
 }

@@ -5,7 +5,7 @@ export const STATUS_WORDS: Record<AircraftStatus, string> = {
   flyable: "Flyable",
   limited: "Flyable with limits",
   grounded: "Grounded",
-  unknown: "Check status",
+  unknown: "Status unknown",
 };
 
 export const TRIAGE_WORDS = {

@@ -1,6 +1,8 @@
 // Club-local wall-clock times ↔ UTC instants. The database keeps instants; people type and read
 // times in the club's own time zone.
 
+import { formatInstantWords } from "@/lib/dates/words";
+
 // Making an Intl.DateTimeFormat costs far more than using one: one per time zone, kept.
 const offsetFormats = new Map<string, Intl.DateTimeFormat>();
 
@@ -29,17 +31,7 @@ export function localTimeToInstant(local: string, timeZone: string): Date {
   return new Date(Math.min(first, second));
 }
 
-/** An instant as "2026-05-01 14:00" in the club's time zone, for reasons and e-mails. */
+/** An instant in words on the club's clock, "Fri 1 May 2026, 14:00", for screens, reasons and e-mails. */
 export function formatLocalTime(instant: Date, timeZone: string): string {
-  const parts = new Intl.DateTimeFormat("en-CA", {
-    timeZone,
-    hourCycle: "h23",
-    year: "numeric",
-    month: "2-digit",
-    day: "2-digit",
-    hour: "2-digit",
-    minute: "2-digit",
-  }).formatToParts(instant);
-  const get = (t: string) => parts.find((p) => p.type === t)?.value ?? "";
-  return `${get("year")}-${get("month")}-${get("day")} ${get("hour")}:${get("minute")}`;
+  return formatInstantWords(instant, timeZone);
 }

@@ -107,6 +107,9 @@ export interface DueSummary {
   incomplete: boolean;
   dueSoon: boolean;
   ifrOnly: boolean;
+  /** A required item grounds the aircraft when it comes due (an IFR-only one stops IFR flight).
+   *  Absent: taken as required, so an item is never shown as harmless by default. */
+  required?: boolean;
 }
 
 export interface FlightLineEntry {

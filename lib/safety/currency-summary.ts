@@ -6,9 +6,9 @@ export type CurrencyState = "current" | "expiring" | "expired" | "missing";
 
 export const CURRENCY_STATE_LABELS: Record<CurrencyState, string> = {
   current: "Current",
-  expiring: "Ends soon",
-  expired: "Lapsed",
-  missing: "Not on record",
+  expiring: "Expires soon",
+  expired: "Expired",
+  missing: "Missing record",
 };
 
 /**

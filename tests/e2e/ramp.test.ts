@@ -178,7 +178,7 @@ describe("ramp mode", () => {
     const res = await page.goto(`${CLUB}/flight-line`);
     expect(res?.fromServiceWorker()).toBe(true);
     await page.locator(`article[data-registration="${REG}"]`).waitFor();
-    expect(await page.locator(`article[data-registration="${REG}"] [data-status]`).first().textContent()).toMatch(/Flyable|Flyable with limits|Grounded|Check status/);
+    expect(await page.locator(`article[data-registration="${REG}"] [data-status]`).first().textContent()).toMatch(/Flyable|Flyable with limits|Grounded|Status unknown/);
     await page.getByRole("note", { name: "Airworthiness caution" }).waitFor();
 
     await context.setOffline(false);

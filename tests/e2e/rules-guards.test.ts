@@ -68,7 +68,7 @@ describe("rules before the pilot, in the browser", () => {
       // The action's own answer: refused, with the reason in plain words.
       const answer = form.getByRole("alert").filter({ hasText: /^Not booked:/ });
       await answer.waitFor();
-      expect(await answer.textContent()).toMatch(/Gus Henneberry may not act as pilot in command after \d{4}-\d{2}-\d{2}: the flight review runs out before the booking ends \(14 CFR 61\.56\(c\)\)/);
+      expect(await answer.textContent()).toMatch(/Gus Henneberry may not act as pilot in command after \d{4}-\d{2}-\d{2}: the flight review expires before the booking ends \(14 CFR 61\.56\(c\)\)/);
       const refusals = page.getByRole("alert", { name: "Why it cannot be booked" });
       expect(await refusals.textContent()).toMatch(/may not act as pilot in command/);
       expect(await refusals.textContent()).not.toMatch(/not current: the flight review/);

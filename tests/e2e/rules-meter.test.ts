@@ -4,7 +4,7 @@ import { newPage, screenshot, signIn } from "./harness";
 
 // Lakeshore Aero's N0534L (no other browser test relies on it): after its inspections switch from
 // the tach to the Hobbs, its hours-based items cannot be placed on the Hobbs, so it reads
-// "Check status" with both meters named, on its page and on the flight line. N0549L takes a
+// "Status unknown" with both meters named, on its page and on the flight line. N0549L takes a
 // squawk marked possibly unsafe. No retries, no sleeps: each step waits for the page's own answer.
 const CLUB = "/clubs/lakeshore-aero";
 const REG = "N0534L";
@@ -12,7 +12,7 @@ const REG = "N0534L";
 const ANSWER = { timeout: 120_000 };
 
 describe("meter provenance, squawk alerts and medical dates in the browser", { retry: 0 }, () => {
-  it("after a switch from tach to Hobbs the aircraft shows Check status naming both meters", async () => {
+  it("after a switch from tach to Hobbs the aircraft shows Status unknown naming both meters", async () => {
     const page = await newPage("desktop");
     await signIn(page, "maintenance@hangarline.test");
     await page.goto(`${CLUB}/flight-line`, { waitUntil: "networkidle" });
@@ -48,16 +48,16 @@ describe("meter provenance, squawk alerts and medical dates in the browser", { r
     await page.getByText(/inspections count hobbs/).waitFor();
     const why = page.getByRole("region", { name: "Why this status" });
     await why.getByText(/Oil change: last done at [\d.]+ h on the tach, but inspections now count by the Hobbs/).waitFor();
-    await page.getByText("Check status").first().waitFor();
+    await page.getByText("Status unknown").first().waitFor();
     await page.getByRole("note", { name: "Airworthiness caution" }).first().waitFor();
-    await screenshot(page, "rules-meter-aircraft-check-status");
+    await screenshot(page, "rules-meter-aircraft-status-unknown");
 
     await page.goto(`${CLUB}/flight-line`, { waitUntil: "networkidle" });
     const after = page.locator(`article[data-registration="${REG}"]`);
     expect(await after.getAttribute("data-status")).toBe("unknown");
-    await after.getByText("Check status", { exact: true }).waitFor();
+    await after.getByText("Status unknown", { exact: true }).waitFor();
     await after.getByText(/on the tach, but inspections now count by the Hobbs/).first().waitFor();
-    await screenshot(page, "rules-meter-flight-line-check-status");
+    await screenshot(page, "rules-meter-flight-line-status-unknown");
   });
 
   it("a squawk marked possibly unsafe says who was e-mailed, quoting the description", async () => {

@@ -110,7 +110,7 @@ describe("booking guards: refused or warned as the club decides, always with the
   it("flight review run out: refused by default (14 CFR 61.56(c)), warned only when the club says so", async () => {
     const refused = await attempt("stale@example.test", "N0527L", { acceptedGuards: ["limitations", "flightReview"] });
     expect(refused.ok).toBe(false);
-    expect(refused.fieldErrors.refusals).toEqual([expect.stringMatching(/^stale may not act as pilot in command after \d{4}-\d{2}-\d{2}: the flight review runs out before the booking ends \(14 CFR 61\.56\(c\)\)/)]);
+    expect(refused.fieldErrors.refusals).toEqual([expect.stringMatching(/^stale may not act as pilot in command after \d{4}-\d{2}-\d{2}: the flight review expires before the booking ends \(14 CFR 61\.56\(c\)\)/)]);
     expect(refused.message).toMatch(/^Not booked: stale may not act as pilot in command/);
     setGuards(SLUG, { flightReview: "warn" });
     const warned = await attempt("stale@example.test", "N0527L");
@@ -121,7 +121,7 @@ describe("booking guards: refused or warned as the club decides, always with the
   it("medical expired: refused or warned, with the expiry date", async () => {
     setGuards(SLUG, { medicalExpired: "refuse" });
     const refused = await attempt("nomedical@example.test", "N0527L");
-    expect(refused.fieldErrors.refusals?.[0]).toBe(`nomedical's medical certificate runs out on ${addDays(today(), -1)}, before the booking ends (14 CFR 61.23).`);
+    expect(refused.fieldErrors.refusals?.[0]).toBe(`nomedical's medical certificate expires after ${addDays(today(), -1)}, before the booking ends (14 CFR 61.23).`);
     setGuards(SLUG, { medicalExpired: "warn" });
     const warned = await attempt("nomedical@example.test", "N0527L");
     expect(warned.fieldErrors.warningGuards).toEqual(["limitations", "medicalExpired"]);
@@ -132,10 +132,10 @@ describe("booking guards: refused or warned as the club decides, always with the
     setGuards(SLUG, { inArrears: "warn" });
     const warned = await attempt("owes@example.test", "N0527L");
     expect(warned.fieldErrors.warningGuards).toEqual(["limitations", "inArrears"]);
-    expect(warned.fieldErrors.warnings?.[1]).toMatch(/^owes's account is in arrears: \$180\.00 owed, unpaid since \d{4}-\d{2}-\d{2}\.$/);
+    expect(warned.fieldErrors.warnings?.[1]).toMatch(/^owes's account is overdue: \$180\.00 owed, unpaid since \d{4}-\d{2}-\d{2}\.$/);
     setGuards(SLUG, { inArrears: "refuse" });
     const refused = await attempt("owes@example.test", "N0527L", { acceptedGuards: ["inArrears"] });
-    expect(refused.fieldErrors.refusals?.[0]).toMatch(/in arrears/);
+    expect(refused.fieldErrors.refusals?.[0]).toMatch(/account is overdue/);
     setGuards(SLUG, { inArrears: "warn" });
   });
 });

@@ -41,7 +41,7 @@ describe("aircraft records and inspection completions", () => {
     expect(bad.fieldErrors.currentHobbs?.[0]).toMatch(/current Hobbs/);
   });
 
-  it("a new aircraft gets the default items and says 'Check status' until completions are recorded", async () => {
+  it("a new aircraft gets the default items and says 'Status unknown' until completions are recorded", async () => {
     signInAs("silberau.technik@hangarline.test");
     const to = await expectRedirect(() => createAircraft(EMPTY, form(FIELDS)));
     aircraftId = to.split("/").at(-1)!;

@@ -82,7 +82,8 @@ describe("grounding notices", () => {
     expect(state.ok).toBe(true);
     const entry = await statusOf("N0534L");
     expect(entry.status).not.toBe("grounded");
-    // 08:00 in America/Chicago on 1 June is 13:00 UTC (CDT, UTC−5)
-    expect(entry.reasons.find((r) => r.code === "notice-pending")?.text).toBe("Grounding notice takes effect 2199-06-01T13:00:00.000Z: Ramp closed for resurfacing");
+    // Said on the club's clock (America/Chicago) as typed, never as the UTC instant 2199-06-01T13:00:00.000Z
+    // (ECMA-402 Intl.DateTimeFormat; 1 June 2199 is a Saturday, proleptic Gregorian calendar).
+    expect(entry.reasons.find((r) => r.code === "notice-pending")?.text).toBe("Grounding notice takes effect Sat 1 Jun 2199, 08:00: Ramp closed for resurfacing");
   });
 });

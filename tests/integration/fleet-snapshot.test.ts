@@ -33,7 +33,7 @@ function fromWholeHistory(now: Date) {
     .prepare("SELECT id, item_id AS itemId, done_on AS doneOn, hours, expires_on AS expiresOn, meter FROM inspection_completions WHERE club_id = ? ORDER BY rowid")
     .all(club.id) as FleetCompletionRecord[];
   const today = isoDateInTimeZone(now, club.timeZone);
-  return buildFlightLine({ ...records, completions }, today, now.toISOString(), { days: club.settings.dueSoonDays, hours: club.settings.dueSoonHours });
+  return buildFlightLine({ ...records, completions }, today, now.toISOString(), { days: club.settings.dueSoonDays, hours: club.settings.dueSoonHours }, club.timeZone);
 }
 
 /** Reads twice (the second from the snapshot) and compares both with fresh computations. */

@@ -61,7 +61,7 @@ describe("rules before the pilot: night, flight review, limitations, claims", ()
     expect(cleared, cleared.message).toMatchObject({ ok: true });
     expect(clubBySlug(SLUG).settings).toMatchObject({ homeLatitude: null, homeLongitude: null });
     const noon = await book("daytime@example.test", "N0527L", NOON, { carryingPassengers: "on" });
-    expect(nightFindings(noon)).toEqual([expect.stringMatching(/^Night could not be computed \(the club's home field position is not recorded\)/)]);
+    expect(nightFindings(noon)).toEqual([expect.stringMatching(/^Night unknown \(missing record: the club's home field position\)/)]);
     // Half a position is refused and nothing changes.
     signInAs("admin@hangarline.test");
     const half = await updateHomePosition(EMPTY, form({ club: SLUG, homeLatitude: "41.7", homeLongitude: "" }));

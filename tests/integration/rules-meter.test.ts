@@ -74,13 +74,13 @@ describe("meter provenance: switching the meter inspections count by", () => {
     expect(conversionsOf(plane.id)).toHaveLength(0);
   });
 
-  it("accepts the switch with the conversion reading, records it, and the 100-hour becomes Check status naming both meters", async () => {
+  it("accepts the switch with the conversion reading, records it, and the 100-hour becomes Status unknown naming both meters", async () => {
     signInAs("maintenance@hangarline.test");
     const before = planeByRegistration(CLUB, "N0527L");
     expect((await detail(before.id)).status).toBe("limited"); // the demo's deferred squawk
     const state = await updateAircraft(EMPTY, aircraftForm("N0527L", { maintenanceMeter: "hobbs", conversionReading: before.currentHobbs!.toFixed(1) }));
     expect(state.ok).toBe(true);
-    expect(state.message).toMatch(/Check status/);
+    expect(state.message).toMatch(/Status unknown/);
     expect(planeByRegistration(CLUB, "N0527L").maintenanceMeter).toBe("hobbs");
     const [conversion] = conversionsOf(before.id);
     expect(conversion).toMatchObject({ completionId: null, fromMeter: "tach", fromReading: before.currentTach, toMeter: "hobbs", toReading: before.currentHobbs });

@@ -126,8 +126,8 @@ describe("member documents and medicals", () => {
     expect(await first.json()).toEqual({ queued: 2 });
     const mail = db().select().from(emailOutbox).where(eq(emailOutbox.template, "document-expiry")).all();
     expect(mail.map((m) => [m.toAddress, m.subject]).sort()).toEqual([
-      ["pilot2@hangarline.test", "Medical lapsed on 2025-01-31"],
-      ["pilot2@hangarline.test", `Renter's insurance runs out on ${ends}`],
+      ["pilot2@hangarline.test", "Medical expired on 2025-01-31"],
+      ["pilot2@hangarline.test", `Renter's insurance expires on ${ends}`],
     ]);
     const again = await remindersRoute(new Request("http://app.test/x", { method: "POST" }), { params: Promise.resolve({ club: CLUB }) });
     expect(await again.json()).toEqual({ queued: 0 });

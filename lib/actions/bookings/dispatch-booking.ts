@@ -11,7 +11,7 @@ import { loadBookingForParty } from "./booking-access";
 
 // Dispatch: the member confirms the preflight record of this booking. A grounded aircraft is
 // never dispatched, whatever the booking guards allowed when it was booked; findings and a
-// status that cannot be computed ("Check status") need the member's explicit tick.
+// status that cannot be computed ("Status unknown") need the member's explicit tick.
 export const dispatchBooking = clubAction({
   schema: dispatchBookingSchema,
   permission: ["create", "Flight"],
@@ -43,7 +43,7 @@ export const dispatchBooking = clubAction({
     const concerns = [
       ...(record.outcome === "findings" ? record.items.filter((i) => i.result === "finding").map((i) => `Finding: ${i.label}${i.note ? ` — ${i.note}` : ""}`) : []),
       ...(record.outcome === "findings" && record.findingCount > record.items.filter((i) => i.result === "finding").length ? ["The record has fuel, sump or oil findings."] : []),
-      ...(status.status === "unknown" ? [`Check status: ${status.reasons.filter((r) => !r.grounding).map((r) => r.text).join("; ")}`] : []),
+      ...(status.status === "unknown" ? [`Status unknown: ${status.reasons.filter((r) => !r.grounding).map((r) => r.text).join("; ")}`] : []),
     ];
     if (concerns.length && !input.acceptFindings) {
       throw new ActionError("Read what the preflight and the records show. Tick that you, as pilot in command, have dealt with each before flight.", { acceptFindings: concerns });

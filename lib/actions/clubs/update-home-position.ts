@@ -16,7 +16,7 @@ export const updateHomePosition = clubAction({
     tx.update(clubs).set({ settings: { ...club.settings, ...after }, updatedAt: new Date() }).where(eq(clubs.id, club.id)).run();
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "club.settings.update", subjectType: "Club", subjectId: club.id, before, after });
     return {
-      message: after.homeLatitude === null ? "Home field position cleared: night cannot be computed until it is entered again." : `Home field position saved: ${after.homeLatitude}, ${after.homeLongitude}. Night is now computed from sunrise and sunset there.`,
+      message: after.homeLatitude === null ? "Home field position cleared: night is unknown until it is entered again." : `Home field position saved: ${after.homeLatitude}, ${after.homeLongitude}. Night is now computed from sunrise and sunset there.`,
       refresh: true,
     };
   },

@@ -45,7 +45,7 @@ export function queueDocumentReminders(tx: Tx, club: Pick<Club, "id" | "slug" | 
       return {
         clubId: club.id,
         to: person.email,
-        subject: lapsed ? `${d.label} lapsed on ${d.expiresOn}` : `${d.label} runs out on ${d.expiresOn}`,
+        subject: lapsed ? `${d.label} expired on ${d.expiresOn}` : `${d.label} expires on ${d.expiresOn}`,
         template: "document-expiry" as const,
         payload: { clubName: club.name, memberName: person.name ?? person.email, documentLabel: d.label, expiresOn: d.expiresOn!, lapsed, url },
       };

@@ -43,7 +43,7 @@ export const closeSquawk = clubAction({
         closedById: user.id,
       };
       tx.update(squawks).set(change).where(and(eq(squawks.clubId, club.id), eq(squawks.id, current.id))).run();
-      const who = input.rtsMechanicName ? ` Returned to service by ${input.rtsMechanicName}, certificate ${input.rtsCertificate}, on ${input.rtsOn}.` : "";
+      const who = input.rtsMechanicName ? ` ${current.triage === "note" ? "Closed" : "Returned to service"} by ${input.rtsMechanicName}, certificate ${input.rtsCertificate}, on ${input.rtsOn}.` : "";
       recordSquawkEvent(tx, { clubId: club.id, squawkId: current.id, kind: "closed", actorId: user.id, fromTriage: current.triage, toTriage: current.triage, note: `${input.repairNotes}${who}` });
       insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: current.id, uploadedById: user.id }, stored);
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "squawk.close", subjectType: "Squawk", subjectId: current.id, before: { status: current.status, triage: current.triage }, after: { ...change, closedAt: change.closedAt.toISOString() } });

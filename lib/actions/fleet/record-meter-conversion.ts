@@ -12,7 +12,7 @@ import { recordMeterConversionSchema } from "@/lib/validation/fleet";
 const METER_WORD = { hobbs: "Hobbs", tach: "tach" } as const;
 
 // After the aircraft switched the meter its inspections count by, an hours-based item whose
-// last completion was read on the old meter is "Check status". Maintenance, from the logbooks,
+// last completion was read on the old meter is "Status unknown". Maintenance, from the logbooks,
 // records where that completion stands on the new meter: a meter_conversions row that points at
 // the completion (the completion itself is append-only and keeps its original reading). The
 // rules then use that reading; the history keeps both.

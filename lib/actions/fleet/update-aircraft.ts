@@ -19,7 +19,7 @@ import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFile
 //   at the switch, typed again beside the current reading as a deliberate check. It is kept as
 //   a meter_conversions row (no completion: nothing was inspected), with the old meter's reading
 //   at the same moment. It does not translate old completions by itself: Hobbs and tach run at
-//   different rates, so each hours-based item stays "Check status" until maintenance records
+//   different rates, so each hours-based item stays "Status unknown" until maintenance records
 //   where its last completion stands on the new meter (recordMeterConversion) or a new one.
 // - Lowering a current reading takes the maintenance role (the right to record inspections)
 //   and a reason; it is audited on its own with the reason. Raising stays an ordinary edit.
@@ -89,7 +89,7 @@ export const updateAircraft = clubAction({
       }
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "aircraft.update", subjectType: "Aircraft", subjectId: current.id, before, after: { ...values, ...(photoId ? { photoUploadId: photoId } : {}) } });
       const message = switching
-        ? `Aircraft record saved. Inspections now count by the ${METER_WORD[input.maintenanceMeter]}; hours-based items show "Check status" until maintenance records their last completion on the ${METER_WORD[input.maintenanceMeter]}.`
+        ? `Aircraft record saved. Inspections now count by the ${METER_WORD[input.maintenanceMeter]}; hours-based items show "Status unknown" until maintenance records their last completion on the ${METER_WORD[input.maintenanceMeter]}.`
         : undefined;
       return { message, refresh: true };
     });

@@ -10,6 +10,7 @@ import { hashToken, newSecretToken } from "@/lib/server/tokens";
 import { appUrl } from "@/lib/server/urls";
 import { inviteMemberSchema } from "@/lib/validation/members";
 import { ROLE_LABELS } from "@/permissions";
+import { formatLocalTime } from "@/lib/fleet/time";
 
 const VALID_DAYS = 14;
 
@@ -48,7 +49,7 @@ export const inviteMember = clubAction({
         clubName: club.name,
         invitedBy: user.name ?? user.email,
         roles: input.roles.map((r) => ROLE_LABELS[r]),
-        expiresOn: expiresAt.toISOString().slice(0, 10),
+        expiresOn: formatLocalTime(expiresAt, club.timeZone),
       },
     });
     writeAudit(tx, { clubId: club.id, actorId: user.id, action: "member.invite", subjectType: "Invitation", subjectId: row!.id, after: { email: input.email, roles: input.roles } });

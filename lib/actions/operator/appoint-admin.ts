@@ -2,6 +2,7 @@ import { and, eq, isNull } from "drizzle-orm";
 import type { Tx } from "@/db/client";
 import { invitations, memberships, users, type Club } from "@/db/schema";
 import { ActionError } from "@/lib/actions/action-state";
+import { formatLocalTime } from "@/lib/fleet/time";
 import { enqueueEmail } from "@/lib/email/outbox";
 import { writeAudit } from "@/lib/server/audit";
 import { hashToken, newSecretToken } from "@/lib/server/tokens";
@@ -48,7 +49,7 @@ export function appointAdmin(tx: Tx, club: Club, email: string, actor: { id: str
     to: address,
     subject: `You are invited to run ${club.name} on Hangarline`,
     template: "invitation",
-    payload: { url: appUrl(`/invitations/${token}`), clubName: club.name, invitedBy: actor.name ?? actor.email, roles: ["Member", "Club admin"], expiresOn: expiresAt.toISOString().slice(0, 10) },
+    payload: { url: appUrl(`/invitations/${token}`), clubName: club.name, invitedBy: actor.name ?? actor.email, roles: ["Member", "Club admin"], expiresOn: formatLocalTime(expiresAt, club.timeZone) },
   });
   writeAudit(tx, { clubId: club.id, actorId: actor.id, action: "member.invite", subjectType: "Invitation", subjectId: inv!.id, after: { email: address, roles: ["member", "admin"], via: "operator" } });
   return "invited";

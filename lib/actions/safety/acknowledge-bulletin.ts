@@ -3,6 +3,7 @@ import { bulletinAcknowledgements } from "@/db/schema";
 import { getAcknowledgement, getBulletin, isUserInAudience } from "@/db/queries/safety-bulletins";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
+import { formatLocalTime } from "@/lib/fleet/time";
 import { bulletinIdSchema } from "@/lib/validation/safety";
 
 export const acknowledgeBulletin = clubAction({
@@ -20,7 +21,7 @@ export const acknowledgeBulletin = clubAction({
     const inserted = tx.insert(bulletinAcknowledgements).values({ clubId: club.id, bulletinId: bulletin.id, userId: user.id }).onConflictDoNothing().run();
     if (inserted.changes === 0) {
       const existing = getAcknowledgement(tx, club.id, bulletin.id, user.id);
-      return { message: `You already acknowledged this on ${existing?.acknowledgedAt.toISOString().slice(0, 10) ?? "an earlier day"}.` };
+      return { message: `You already acknowledged this on ${existing ? formatLocalTime(existing.acknowledgedAt, club.timeZone) : "an earlier day"}.` };
     }
     return { refresh: true };
   },

@@ -6,6 +6,8 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { enqueueEmails } from "@/lib/email/outbox";
 import { kickOutbox } from "@/lib/email/runner";
+import { isoDateInTimeZone } from "@/lib/dates";
+import { formatLocalTime } from "@/lib/fleet/time";
 import { URGENCY_LABELS } from "@/lib/safety/labels";
 import { writeAudit } from "@/lib/server/audit";
 import { appUrl } from "@/lib/server/urls";
@@ -24,7 +26,7 @@ export const remindBulletin = clubAction({
     if (bulletin.supersededAt) throw new ActionError("This version has been replaced; remind members about the newest version.", {}, "conflict");
     const now = new Date();
     if (bulletin.lastRemindedAt && now.getTime() - bulletin.lastRemindedAt.getTime() < REMINDER_GAP_MS) {
-      throw new ActionError(`A reminder went out at ${bulletin.lastRemindedAt.toISOString().slice(11, 16)} UTC; wait an hour before sending another.`, {}, "conflict");
+      throw new ActionError(`A reminder went out at ${formatLocalTime(bulletin.lastRemindedAt, club.timeZone)}; wait an hour before sending another.`, {}, "conflict");
     }
     const outstanding = bulletinAckStats(tx, club.id, bulletin).rows.filter((r) => r.acknowledgedAt === null);
     if (outstanding.length === 0) return { message: "Everyone in the audience has acknowledged; no reminder needed." };
@@ -36,7 +38,7 @@ export const remindBulletin = clubAction({
         to: p.email,
         subject: `Reminder: please acknowledge "${bulletin.title}"`,
         template: "bulletin-reminder" as const,
-        payload: { clubName: club.name, title: bulletin.title, urgency: URGENCY_LABELS[bulletin.urgency], acknowledgeBy: bulletin.acknowledgeBy, publishedOn: bulletin.publishedAt!.toISOString().slice(0, 10), url },
+        payload: { clubName: club.name, title: bulletin.title, urgency: URGENCY_LABELS[bulletin.urgency], acknowledgeBy: bulletin.acknowledgeBy, publishedOn: isoDateInTimeZone(bulletin.publishedAt!, club.timeZone), url },
       })),
     );
     tx.update(bulletins).set({ lastRemindedAt: now }).where(and(eq(bulletins.clubId, club.id), eq(bulletins.id, bulletin.id))).run();

@@ -21,8 +21,8 @@ describe("meter provenance: a completion read on another meter", () => {
     expect(switched.status).toBe("unknown"); // common practice: no due point on the tach is known
     const reason = switched.reasons.find((r) => r.code === "other-meter");
     expect(reason?.text).toBe(
-      "100-hour inspection: last done at 1020.0 h on the Hobbs, but inspections now count by the tach; its due point on the tach " +
-        "is not known until maintenance records the reading on the tach (14 CFR 91.409(b))",
+      "100-hour inspection: last done at 1020.0 h on the Hobbs, but inspections now count by the tach; missing record: its due point " +
+        "on the tach, until maintenance records that completion's reading on the tach (14 CFR 91.409(b))",
     );
     expect(reason?.grounding).toBe(false);
   });

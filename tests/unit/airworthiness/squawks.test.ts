@@ -84,7 +84,7 @@ describe("aircraftStatus: grounding notices", () => {
     expect(active.reasons).toEqual([
       {
         code: "notice-active",
-        text: "Grounding notice in effect since 2026-05-15T14:00:00Z: Bird strike on the right wing",
+        text: "Grounding notice in effect since Fri 15 May 2026, 14:00 UTC: Bird strike on the right wing", // no club zone given: UTC, said so
         grounding: true,
       },
     ]);
@@ -100,6 +100,14 @@ describe("aircraftStatus: grounding notices", () => {
     );
     expect(early.status).toBe("flyable");
     expect(codes(early)).toEqual(["notice-pending"]);
+  });
+
+  it("writes the notice's time on the club's clock, never as a raw instant (ECMA-402 Intl.DateTimeFormat; CDT is UTC−5, from memory)", () => {
+    const active = aircraftStatus(aircraft(VFR_PRIVATE, { notices: [notice], now: "2026-05-15T14:00:00Z", timeZone: "America/Chicago" }), TODAY, METER);
+    expect(active.reasons[0]?.text).toBe("Grounding notice in effect since Fri 15 May 2026, 09:00: Bird strike on the right wing");
+    const early = aircraftStatus(aircraft(VFR_PRIVATE, { notices: [notice], now: "2026-05-15T13:59:00Z", timeZone: "America/Chicago" }), TODAY, METER);
+    expect(early.reasons[0]?.text).toBe("Grounding notice takes effect Fri 15 May 2026, 09:00: Bird strike on the right wing");
+    expect(active.reasons[0]?.text).not.toMatch(/\d{4}-\d{2}-\d{2}T/);
   });
 
   it("counts a notice from the start of its date when no instant is given", () => {

@@ -41,7 +41,7 @@ describe("aircraftStatus: inspections", () => {
     expect(result.reasons).toEqual([
       {
         code: "no-completion",
-        text: "Annual inspection: no completion on record (14 CFR 91.409(a))",
+        text: "Annual inspection: missing record: its last completion (14 CFR 91.409(a))",
         grounding: false,
       },
     ]);
@@ -62,7 +62,7 @@ describe("aircraftStatus: inspections", () => {
     const items = changeItem(currentItems(VFR_PRIVATE), "oil-change", { completions: [{ date: "2026-04-01" }] });
     const result = aircraftStatus({ flags: VFR_PRIVATE, items }, TODAY, METER);
     expect(result.status).toBe("unknown");
-    expect(result.reasons[0]?.text).toBe("Oil change: no meter hours recorded with the last completion (club rule)");
+    expect(result.reasons[0]?.text).toBe("Oil change: missing record: the meter reading at its last completion (club rule)");
   });
 });
 
@@ -187,7 +187,7 @@ describe("aircraftStatus: IFR-only tests", () => {
     const items = changeItem(currentItems(IFR_TRAINER), "vor-check", { completions: [] });
     const result = aircraftStatus(aircraft(IFR_TRAINER, { items }), TODAY, METER);
     expect(result.status).toBe("unknown"); // 14 CFR 91.171(a) applies; no record to decide from
-    expect(result.reasons[0]?.text).toBe("VOR check: no completion on record (14 CFR 91.171(a))");
+    expect(result.reasons[0]?.text).toBe("VOR check: missing record: its last completion (14 CFR 91.171(a))");
   });
 
   it("counts the VOR check in days", () => {

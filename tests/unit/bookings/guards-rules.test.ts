@@ -27,7 +27,7 @@ describe("night passenger currency (14 CFR 61.57(b))", () => {
     const out = evaluateBookingGuards(input({ carryingPassengers: true, nightFlight: true, member: { passengerNightLastDay: "2026-05-09" } }), settings);
     const night = [...out.refusals, ...out.warnings].filter((f) => f.reason.includes("14 CFR 61.57(b)"));
     expect(night).toHaveLength(1); // 14 CFR 61.57(b): lapsed the day before the booking
-    expect(night[0]!.reason).toContain("night passenger currency runs out on 2026-05-09");
+    expect(night[0]!.reason).toContain("night passenger currency expires after 2026-05-09");
   });
 
   it("no night landings on record at all is the same finding", () => {
@@ -48,7 +48,7 @@ describe("night passenger currency (14 CFR 61.57(b))", () => {
 
   it("when night could not be computed the reason says so", () => {
     const out = evaluateBookingGuards(input({ carryingPassengers: true, nightFlight: true, nightUnknown: true, member: { passengerNightLastDay: null } }), settings);
-    expect(out.warnings[0]!.reason).toMatch(/^Night could not be computed .* treated as touching night: .*\(14 CFR 61\.57\(b\)\)\.$/); // 14 CFR 61.57(b)
+    expect(out.warnings[0]!.reason).toMatch(/^Night unknown .* treated as touching night: .*\(14 CFR 61\.57\(b\)\)\.$/); // 14 CFR 61.57(b)
   });
 });
 

@@ -45,10 +45,10 @@ describe("evaluateBookingGuards", () => {
     expect(guardsOf(evaluateBookingGuards(input({ aircraft: { statusAtEnd: atEnd } }), settings))).toEqual({ refusals: ["grounded"], warnings: [] });
   });
 
-  it("a status that cannot be computed is always a warning ('Check status'), never flyable and never silent", () => {
+  it("a status that cannot be computed is always a warning ('Status unknown'), never flyable and never silent", () => {
     const unknown = { status: "unknown" as const, reasons: [{ code: "no-completion", text: "Annual inspection: no completion on record", grounding: false }] };
     const out = evaluateBookingGuards(input({ aircraft: { statusNow: unknown, statusAtEnd: unknown } }), settings);
-    expect(out.warnings).toEqual([{ guard: "statusUnknown", reason: "Check status: N0123X's status cannot be computed from its records (Annual inspection: no completion on record)." }]);
+    expect(out.warnings).toEqual([{ guard: "statusUnknown", reason: "Status unknown: N0123X is missing a record its status needs (Annual inspection: no completion on record)." }]);
     expect(guardsOf(evaluateBookingGuards(input({ aircraft: { statusAtEnd: null } }), settings)).warnings).toEqual(["statusUnknown"]);
   });
 
@@ -63,7 +63,7 @@ describe("evaluateBookingGuards", () => {
     const out = evaluateBookingGuards(input({ member: { flightReviewLastDay: "2026-05-09", recencyLastDay: null } }), settings);
     expect(out.warnings).toEqual([{ guard: "notCurrent", reason: "Test Pilot is not current: no flight in the Kestrel K160 on record within the club's 90 days." }]);
     // 14 CFR 61.56(c): the review ran out the day before the booking: refused, not "not current".
-    expect(out.refusals).toEqual([{ guard: "flightReview", reason: "Test Pilot may not act as pilot in command after 2026-05-09: the flight review runs out before the booking ends (14 CFR 61.56(c)). Book with an instructor for a flight review." }]);
+    expect(out.refusals).toEqual([{ guard: "flightReview", reason: "Test Pilot may not act as pilot in command after 2026-05-09: the flight review expires before the booking ends (14 CFR 61.56(c)). Book with an instructor for a flight review." }]);
     // Still good on its last day (the day itself counts).
     expect(evaluateBookingGuards(input({ member: { flightReviewLastDay: "2026-05-10", recencyLastDay: "2026-05-10" } }), settings)).toEqual({ refusals: [], warnings: [] });
   });
@@ -76,7 +76,7 @@ describe("evaluateBookingGuards", () => {
 
   it("an expired medical names its last day (14 CFR 61.23)", () => {
     expect(evaluateBookingGuards(input({ member: { medicalLastDay: "2026-04-30" } }), settings).refusals).toEqual([
-      { guard: "medicalExpired", reason: "Test Pilot's medical certificate runs out on 2026-04-30, before the booking ends (14 CFR 61.23)." },
+      { guard: "medicalExpired", reason: "Test Pilot's medical certificate expires after 2026-04-30, before the booking ends (14 CFR 61.23)." },
     ]);
   });
 

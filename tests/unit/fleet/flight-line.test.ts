@@ -27,7 +27,7 @@ describe("buildFlightLine", () => {
     expect(a2!.due.find((d) => d.key === "100-hour")).toMatchObject({ dueHours: 1120, hoursLeft: 50, overdue: false });
   });
 
-  it("says 'Check status' with the reason when a rule cannot be computed, never flyable", () => {
+  it("says 'Status unknown' with the reason when a rule cannot be computed, never flyable", () => {
     const broken = base.items.map((i) => (i.aircraftId === "a3" && i.key === "annual" ? { ...i, months: null } : i));
     const line = buildFlightLine({ ...base, items: broken }, TODAY, NOW, SOON);
     expect(line[2]!.status).toBe("unknown");
@@ -35,7 +35,7 @@ describe("buildFlightLine", () => {
     expect(line[2]!.reasons[0]!.text).toMatch(/Annual inspection: the rule has no number of months/);
   });
 
-  it("says 'Check status' when the meter the inspections count has never been read", () => {
+  it("says 'Status unknown' when the meter the inspections count has never been read", () => {
     const line = buildFlightLine({ ...base, aircraft: [plane("a1", { currentTach: null })] }, TODAY, NOW, SOON);
     expect(line[0]!.status).toBe("unknown");
     expect(line[0]!.reasons.map((r) => r.code)).toContain("hours-unknown");

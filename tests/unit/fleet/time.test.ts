@@ -16,8 +16,8 @@ describe("club-local times", () => {
   });
 
   it("writes an instant back in the club's zone", () => {
-    expect(formatLocalTime(new Date("2026-07-10T13:00:00Z"), "America/Chicago")).toBe("2026-07-10 08:00");
-    expect(formatLocalTime(new Date("2026-12-31T23:30:00Z"), "Europe/Berlin")).toBe("2027-01-01 00:30");
+    expect(formatLocalTime(new Date("2026-07-10T13:00:00Z"), "America/Chicago")).toBe("Fri 10 Jul 2026, 08:00");
+    expect(formatLocalTime(new Date("2026-12-31T23:30:00Z"), "Europe/Berlin")).toBe("Fri 1 Jan 2027, 00:30");
   });
 
   it("refuses text that is not a local date and time", () => {

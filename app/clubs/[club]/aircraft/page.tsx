@@ -41,7 +41,7 @@ export default async function AircraftListPage({ params }: { params: Promise<{ c
       {can(ability, "create", "Aircraft") ? (
         <section className="card mt-6" aria-labelledby="add-h">
           <h2 id="add-h" className="mb-3 text-lg font-bold">Add an aircraft</h2>
-          <p className="mb-3 text-sm text-ink-700">It starts with the default inspection items (annual, 100-hour, ELT, ELT battery, transponder, altimeter/static, VOR check, oil change); those that do not apply to its use are left out of its status. It shows &quot;Check status&quot; until their last completions are recorded.</p>
+          <p className="mb-3 text-sm text-ink-700">It starts with the default inspection items (annual, 100-hour, ELT, ELT battery, transponder, altimeter/static, VOR check, oil change); those that do not apply to its use are left out of its status. It shows &quot;Status unknown&quot;, naming the missing record, until their last completions are recorded.</p>
           <AircraftForm slug={club.slug} currency={club.currency} locale={club.locale} />
         </section>
       ) : null}

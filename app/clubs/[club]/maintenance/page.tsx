@@ -3,7 +3,8 @@ import Link from "next/link";
 import { ReviewMeterFlagForm } from "@/components/fleet/flight-forms";
 import { NoticeList } from "@/components/fleet/notice-list";
 import { SquawkList } from "@/components/fleet/squawk-list";
-import { dueLabel, dueText, dueTone } from "@/components/fleet/due-text";
+import { DueGlyph } from "@/components/fleet/due-view";
+import { DUE_STATE_WORDS, dueState, remainingWords } from "@/lib/fleet/due-words";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { StatusBadge } from "@/components/ui/status-badge";
@@ -62,13 +63,13 @@ export default async function MaintenancePage({ params }: { params: Promise<{ cl
       </section>
 
       <section aria-labelledby="due-h" className="mt-8">
-        <h2 id="due-h" className="mb-3 text-xl font-bold">Overdue, unknown or due soon</h2>
+        <h2 id="due-h" className="mb-3 text-xl font-bold">Overdue, status unknown or coming up</h2>
         {attention.length === 0 ? <p className="text-ink-700">Nothing inside the club&apos;s due-soon window ({club.settings.dueSoonDays} days, {club.settings.dueSoonHours} h).</p> : (
           <ul className="card divide-y divide-sand-200 py-1">
             {attention.map(({ entry, d }) => (
               <li key={`${entry.aircraft.id}-${d.key}`} className="py-2">
                 <Link href={`${base}/aircraft/${entry.aircraft.id}#due`} className="font-bold">{entry.aircraft.registration}</Link>{" "}
-                <span className={dueTone(d)}>{dueLabel(d)}: {d.name} {dueText(d)}</span>
+                <span className="inline-flex items-center gap-1 font-bold"><DueGlyph state={dueState(d)} size={14} />{DUE_STATE_WORDS[dueState(d)]}:</span> {d.name} — {remainingWords(d)}
               </li>
             ))}
           </ul>

@@ -71,13 +71,13 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
                 <div key={p.privilege} className="contents" data-privilege={p.privilege}>
                   <dt className="font-bold">{PRIVILEGE_WORDS[p.privilege]} through</dt><dd className="font-mono tabular">{p.lastDay}</dd>
                 </div>
-              )) : <><dt className="font-bold">{medical.kind === "basicmed" ? "Valid through" : "Private pilot privileges through"}</dt><dd className="font-mono tabular">{medical.expiresOn}</dd></>}
+              )) : <><dt className="font-bold">{medical.kind === "basicmed" ? "Expires after" : "Private pilot privileges expire after"}</dt><dd className="font-mono tabular">{medical.expiresOn}</dd></>}
               <dt className="font-bold">Standing</dt><dd>{medical.verifiedAt ? "✓ Verified" : "◇ Claimed: counts once an instructor or the safety officer has seen the certificate"}</dd>
               {medical.limitations ? <><dt className="font-bold">Limitations</dt><dd>{medical.limitations}</dd></> : null}
               {birthDate ? <><dt className="font-bold">Date of birth (only you see it)</dt><dd className="font-mono tabular">{birthDate}</dd></> : null}
             </dl>
           ) : <p className="mb-3 text-ink-500">No medical recorded.</p>}
-          <p className="mb-3 text-sm text-ink-700">The safety officer and instructors see only the date it runs out; club admins see the details; only you see your date of birth.</p>
+          <p className="mb-3 text-sm text-ink-700">The safety officer and instructors see only the date it expires; club admins see the details; only you see your date of birth.</p>
           <details>
             <summary className="cursor-pointer font-bold text-fin-600">Record a medical</summary>
             <div className="mt-3"><MedicalForm slug={club.slug} today={today} hasBirthDate={birthDate !== null} /></div>

@@ -37,7 +37,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
     { label: "Members owe the club", value: <Money minor={owed} currency={club.currency} locale={club.locale} />, href: `${base}/balances` },
     { label: "In the bank (books)", value: <Money minor={by("bank")} currency={club.currency} locale={club.locale} />, href: `${base}/reconciliation` },
     { label: "Card payments not yet paid out", value: <Money minor={by("card-clearing")} currency={club.currency} locale={club.locale} />, href: `${base}/payments` },
-    { label: "Members in arrears", value: <span className="tabular font-mono">{arrears.length}</span>, href: `${base}/ageing` },
+    { label: "Members overdue", value: <span className="tabular font-mono">{arrears.length}</span>, href: `${base}/ageing` },
   ];
   return (
     <>
@@ -53,13 +53,13 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
       </section>
       <p role="status" className={`mt-4 rounded border px-3 py-2 text-sm ${problems.length ? "border-stop-600 bg-stop-100 text-stop-800" : "border-go-600 bg-go-100 text-go-800"}`}>
         <span aria-hidden="true">{problems.length ? "▲ " : "✓ "}</span>
-        {problems.length ? `${problems.length} journal entries do not balance — tell the developers; nothing should ever allow this.` : `All ${countEntries(db, club.id)} journal entries balance (debits equal credits).`}
+        {problems.length ? `${problems.length} journal entries do not balance. This should never happen: stop posting and ask the club's administrator to contact Hangarline support.` : `All ${countEntries(db, club.id)} journal entries balance (debits equal credits).`}
         {locked ? ` The books are locked through ${locked} (reconciled).` : " No period is locked yet."}
       </p>
       <div className="mt-6 grid gap-6 lg:grid-cols-2">
         <section className="card" aria-labelledby="run-h">
           <h2 id="run-h" className="mb-1 text-lg font-bold">Billing run</h2>
-          <p className="mb-3 text-sm text-ink-700">Posts the month&apos;s dues (prorated for members who joined during the period), late fees for members in arrears, and e-mails the previous month&apos;s statements. Running a month again posts nothing twice.</p>
+          <p className="mb-3 text-sm text-ink-700">Posts the month&apos;s dues (prorated for members who joined during the period), late fees for members whose accounts are overdue, and e-mails the previous month&apos;s statements. Running a month again posts nothing twice.</p>
           {canPost ? (
             <ActionForm
               action={runBilling}
@@ -85,7 +85,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
         </section>
         <section className="card" aria-labelledby="arrears-h">
           <h2 id="arrears-h" className="mb-1 text-lg font-bold">Overdue accounts</h2>
-          {arrears.length === 0 ? <p className="text-ink-700">Nobody is in arrears.</p> : (
+          {arrears.length === 0 ? <p className="text-ink-700">No account is overdue.</p> : (
             <ul className="mb-3 divide-y divide-sand-200 text-sm">
               {arrears.map((m) => (
                 <li key={m.userId} className="flex flex-wrap justify-between gap-2 py-2">
@@ -96,7 +96,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
             </ul>
           )}
           {canPost ? <ActionButton action={sendReminders} slug={club.slug} label="E-mail dues reminders" pendingText="Queueing…" /> : null}
-          <p className="mt-2 text-sm text-ink-500">Reminders go to every member with charges past due, at most once a day each.</p>
+          <p className="mt-2 text-sm text-ink-500">Reminders go to every member with overdue charges, at most once a day each.</p>
         </section>
       </div>
     </>

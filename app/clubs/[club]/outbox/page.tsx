@@ -10,7 +10,7 @@ export default async function OutboxPage({ params }: { params: Promise<{ club: s
   return (
     <div className="max-w-6xl">
       <PageHeader title="Outbox" lead="Every e-mail sent on the club's behalf. Messages wait here and are retried until the provider takes them." />
-      <OutboxTable slug={club.slug} initial={rows} />
+      <OutboxTable slug={club.slug} initial={rows} timeZone={club.timeZone} />
     </div>
   );
 }

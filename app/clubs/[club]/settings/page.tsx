@@ -21,7 +21,7 @@ export default async function ClubSettingsPage({ params }: { params: Promise<{ c
         <h2 id="home-h" className="mb-2 text-lg font-bold">Home field position</h2>
         <p className="mb-3 text-sm text-ink-700">
           Sunrise and sunset here decide when a booking touches night: from one hour after sunset to one hour before sunrise (14 CFR 61.57(b)), when
-          passengers need night currency. {lat === null || lon === null ? <strong>Not recorded: night cannot be computed, so every booking with passengers is checked as if it touched night.</strong> : `Recorded: ${lat}, ${lon}.`}
+          passengers need night currency. {lat === null || lon === null ? <strong>Missing record: without it night is unknown, so every booking with passengers is checked as if it touched night.</strong> : `Recorded: ${lat}, ${lon}.`}
         </p>
         <HomePositionForm slug={club.slug} latitude={lat} longitude={lon} />
       </section>

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AircraftForm } from "@/components/fleet/aircraft-form";
 import { CompletionHistory } from "@/components/fleet/completion-history";
-import { DueTable } from "@/components/fleet/due-table";
+import { DueView } from "@/components/fleet/due-view";
 import { FlightsTable } from "@/components/fleet/flights-table";
 import { LogFlightForm } from "@/components/fleet/flight-forms";
 import { CreateItemForm, MeterConversionForm, RecordCompletionForm, UpdateItemForm } from "@/components/fleet/inspection-forms";
@@ -71,7 +71,7 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
 
   return (
     <div className="max-w-5xl">
-      <p className="mb-2 text-sm"><Link href={`${base}/flight-line`}>← Flight line</Link></p>
+      <p className="mb-2 text-sm"><Link href={`${base}/flight-line`} className="tap">← Flight line</Link></p>
       <PageHeader title={plane.registration} lead={`${plane.make} ${plane.model} · ${plane.category}, ${plane.classRating}${plane.tailwheel ? ", tailwheel" : ""}${plane.homeField ? ` · ${plane.homeField}` : ""}`} actions={<StatusBadge status={entry.status} large />} />
       <SafetyCaution compact />
 
@@ -80,10 +80,10 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
           <h2 id="reasons-h" className="mb-2 text-lg font-bold">Why this status</h2>
           {entry.reasons.length === 0 ? <p>No open squawks, notices or due items on record.</p> : (
             <ul className="space-y-1">
-              {entry.reasons.map((r, i) => <li key={i} className={r.grounding ? "font-bold text-stop-800" : ""}>{r.grounding ? "■ " : "• "}{r.text}</li>)}
+              {entry.reasons.map((r, i) => <li key={i} className={r.grounding ? "font-bold text-plum-800" : ""}>{r.grounding ? "■ " : "• "}{r.grounding ? <span className="sr-only">Grounding reason: </span> : null}{r.text}</li>)}
             </ul>
           )}
-          <p className="mt-3 font-mono text-sm tabular text-ink-700">Hobbs {plane.currentHobbs?.toFixed(1) ?? "not recorded"} · Tach {plane.currentTach?.toFixed(1) ?? "not recorded"} · inspections count {plane.maintenanceMeter}</p>
+          <p className="mt-3 font-mono text-sm tabular text-ink-700">Hobbs {plane.currentHobbs?.toFixed(1) ?? "missing record"} · Tach {plane.currentTach?.toFixed(1) ?? "missing record"} · inspections count {plane.maintenanceMeter}</p>
         </section>
         {plane.photoUploadId ? (
           <img src={`/api/clubs/${club.slug}/uploads/${plane.photoUploadId}`} alt={`Photo of ${plane.registration}`} className="h-40 w-full rounded border border-sand-300 object-cover md:w-60" />
@@ -95,7 +95,7 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
       </Section>
 
       <Section id="due" title="What comes due">
-        <DueTable due={entry.due} caption={`Inspection items of ${plane.registration}`} />
+        <DueView due={entry.due} caption={`Inspection items of ${plane.registration}`} meterNow={plane.maintenanceMeter} />
         {may.record || may.editItem ? (
           <div className="mt-3 space-y-2">
             {items.filter((i) => dueKeys.has(i.key)).map((item) => {

@@ -65,7 +65,7 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
           <span className="font-bold">{BOOKING_STATUS_MARK[booking.status]} {BOOKING_STATUS_WORDS[booking.status]}</span>
           <span className="text-ink-500">·</span>
           <span>{booking.aircraftName}</span>
-          {status ? <StatusBadge status={status.status} /> : <span className="font-bold">◇ Check status</span>}
+          <StatusBadge status={status?.status} />
         </p>
         {status && status.reasons.length ? (
           <ul className="list-disc space-y-1 pl-5 text-sm">{status.reasons.map((r, i) => <li key={i} className={r.grounding ? "font-bold text-stop-800" : ""}>{r.text}</li>)}</ul>

@@ -17,10 +17,10 @@ export default async function BalancesPage({ params }: { params: Promise<{ club:
   const { db, club, ability } = await authorizePage(slug, ["read", "Account", "all"]);
   const today = clubToday(club);
   const members = listMemberBalances(db, club.id, today);
-  const rows = members.map((m) => ({ ...m, href: `/clubs/${club.slug}/money/members/${m.userId}`, arrearsWord: m.inArrears ? "In arrears" : "Up to date" }));
+  const rows = members.map((m) => ({ ...m, href: `/clubs/${club.slug}/money/members/${m.userId}`, arrearsWord: m.inArrears ? "Overdue" : "Up to date" }));
   return (
     <>
-      <PageHeader title="Member balances" lead={`Positive balances are owed to the club. "In arrears" means a charge is more than ${club.settings.lateFeeAfterDays} days past due.`} />
+      <PageHeader title="Member balances" lead={`Positive balances are owed to the club. "Overdue" means a charge is still unpaid more than ${club.settings.lateFeeAfterDays} days after it fell due.`} />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/balances`} />
       <Suspense fallback={<div className="h-64 animate-pulse rounded bg-sand-200" />}>
         <DataTable
@@ -28,12 +28,12 @@ export default async function BalancesPage({ params }: { params: Promise<{ club:
           csvName={`balances-${club.slug}-${today}`}
           currency={club.currency} locale={club.locale}
           rows={rows}
-          filter={{ key: "arrearsWord", label: "Standing", options: [{ value: "In arrears", label: "In arrears" }, { value: "Up to date", label: "Up to date" }] }}
+          filter={{ key: "arrearsWord", label: "Standing", options: [{ value: "Overdue", label: "Overdue" }, { value: "Up to date", label: "Up to date" }] }}
           columns={[
             { key: "name", header: "Member", kind: "link", hrefKey: "href" },
             { key: "plan", header: "Dues plan" },
             { key: "balanceMinor", header: "Balance", kind: "money" },
-            { key: "overdueMinor", header: "Past due", kind: "money" },
+            { key: "overdueMinor", header: "Overdue", kind: "money" },
             { key: "oldestDueDate", header: "Oldest due", kind: "date" },
             { key: "inArrears", header: "Standing", kind: "flag" },
           ]}

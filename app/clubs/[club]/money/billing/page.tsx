@@ -120,7 +120,7 @@ export default async function BillingPage({ params }: { params: Promise<{ club: 
               grid
               fields={[
                 { name: "paymentTermsDays", label: "Charges fall due after (days)", inputMode: "numeric", defaultValue: String(settings.paymentTermsDays) },
-                { name: "lateFeeFlat", label: `Late fee (${club.currency})`, inputMode: "decimal", defaultValue: major(settings.lateFeeFlatMinor), hint: `Charged once a billing run to members more than ${club.settings.lateFeeAfterDays} days past due.` },
+                { name: "lateFeeFlat", label: `Late fee (${club.currency})`, inputMode: "decimal", defaultValue: major(settings.lateFeeFlatMinor), hint: `Charged once a billing run to members with a charge overdue more than ${club.settings.lateFeeAfterDays} days.` },
                 { name: "lateFeePercent", label: "Plus % of the balance", inputMode: "decimal", defaultValue: String(settings.lateFeeBasisPoints / 100) },
                 { name: "fuelCreditCap", label: `Most credited per ${club.unitSystem === "metric" ? "litre" : "gallon"} of fuel (${club.currency})`, inputMode: "decimal", defaultValue: major(settings.fuelCreditCapPerUnitMinor) },
               ]}

@@ -33,7 +33,7 @@ export default async function PreflightPage({ params }: { params: Promise<{ club
     <div className="max-w-3xl">
       <PageHeader
         title={`Preflight · ${booking.registration}`}
-        lead={<span className="inline-flex flex-wrap items-center gap-2">{booking.aircraftName} {status ? <StatusBadge status={status.status} /> : <strong>◇ Check status</strong>}</span>}
+        lead={<span className="inline-flex flex-wrap items-center gap-2">{booking.aircraftName} <StatusBadge status={status?.status} /></span>}
         actions={<Link className={buttonClass("quiet")} href={`/clubs/${club.slug}/bookings/${booking.id}`}>← The booking</Link>}
       />
       <div className="mb-4"><SafetyCaution compact /></div>

@@ -90,6 +90,7 @@ export default async function BulletinPage({ params, searchParams }: { params: P
       {stats ? (
         <div className="mb-6">
           <AckPanel
+            timeZone={club.timeZone}
             slug={club.slug}
             bulletinId={bulletin.id}
             current={current}
