@@ -40,7 +40,7 @@ export const recordPreflight = clubAction({
     return withStoredFiles(all, () => {
       const { club, user } = ctx;
       const booking = loadBookingForParty(tx, ctx, input.bookingId);
-      if (booking.status !== "reserved" && booking.status !== "dispatched") throw new ActionError(`This booking is ${booking.status.replace("_", " ")}; a preflight can no longer be recorded on it.`, {}, "conflict");
+      if (booking.status !== "reserved" && booking.status !== "dispatched") throw new ActionError(`This booking is ${booking.status === "checked_in" ? "flown and its flight sheet closed" : "cancelled"}; a preflight can no longer be recorded on it.`, {}, "conflict");
       const template = getPreflightTemplate(tx, club.id, booking.aircraftId);
       if (!template) throw new ActionError("This aircraft has no preflight checklist yet; ask maintenance to set one up.", {}, "not_found");
 
@@ -98,7 +98,7 @@ export const recordPreflight = clubAction({
       }
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "preflight.record", subjectType: "Booking", subjectId: booking.id, after: { recordId: record!.id, outcome: outcome.outcome, findings: outcome.findings, squawkIds } });
       const message = outcome.outcome === "ok"
-        ? "Preflight recorded: everything OK. You can dispatch the booking."
+        ? "Preflight recorded: everything OK. You can begin the flight."
         : `Preflight recorded with ${outcome.findings.length} finding${outcome.findings.length === 1 ? "" : "s"}${squawkIds.length ? `; ${squawkIds.length} reported as squawk${squawkIds.length === 1 ? "" : "s"} for maintenance` : ""}.`;
       return { message, data: { recordId: record!.id, squawkIds, findings: outcome.findings }, refresh: true };
     });

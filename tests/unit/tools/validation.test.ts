@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { z } from "zod";
-import { checkInSchema, createBookingSchema } from "@/lib/validation/bookings";
+import { createBookingSchema, flightSheetSchema } from "@/lib/validation/bookings";
 import { preflightRecordSchema, preflightTemplateSchema, weightBalanceProfileSchema } from "@/lib/validation/tools";
 
 // Same shape as the action wrapper's field errors: "path.joined" → messages.
@@ -23,11 +23,11 @@ describe("booking schemas", () => {
     expect(e["acceptedGuards.0"]?.[0]).toBe("Unknown warning.");
     expect(errorsOf(createBookingSchema.safeParse({ aircraftId: "a", startsAt: "2026-05-04T11:00", endsAt: "2026-05-04T09:00" })).endsAt?.[0]).toBe("The end must be after the start.");
   });
-  it("check-in: meters forward, at least one landing", () => {
-    const e = errorsOf(checkInSchema.safeParse({ bookingId: "b", hobbsOut: "100.0", hobbsIn: "99.0", tachOut: "abc", tachIn: "1", dayLandings: "0" }));
+  it("flight sheet: meters forward, at least one landing", () => {
+    const e = errorsOf(flightSheetSchema.safeParse({ bookingId: "b", hobbsOut: "100.0", hobbsIn: "99.0", tachOut: "abc", tachIn: "1", dayLandings: "0" }));
     expect(e.hobbsIn?.[0]).toBe("Hobbs in cannot be less than Hobbs out.");
     expect(e.tachOut?.[0]).toMatch(/as hours/);
-    const landings = errorsOf(checkInSchema.safeParse({ bookingId: "b", hobbsOut: "100.0", hobbsIn: "101.0", tachOut: "80", tachIn: "81", dayLandings: "0" }));
+    const landings = errorsOf(flightSheetSchema.safeParse({ bookingId: "b", hobbsOut: "100.0", hobbsIn: "101.0", tachOut: "80", tachIn: "81", dayLandings: "0" }));
     expect(landings.dayLandings?.[0]).toBe("Enter the landings: at least one, day or night.");
   });
 });
