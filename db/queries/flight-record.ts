@@ -1,9 +1,9 @@
 import "server-only";
 import { and, eq, isNull, ne, sql } from "drizzle-orm";
 import type { Tx } from "@/db/client";
-import { aircraft, bookings, flights, journalEntries, squawks, users, type Aircraft, type FlightRow } from "@/db/schema";
+import { aircraft, bookings, flights, journalEntries, users, type Aircraft, type FlightRow } from "@/db/schema";
 import { findNeighbourFlights } from "@/db/queries/fleet-flights";
-import { recordSquawkEvent } from "@/db/queries/fleet-squawks";
+import { createSquawk } from "@/db/queries/fleet-squawks";
 import { roundHours } from "@/lib/airworthiness";
 import { advanceMeters, checkBetween, checkMeterContinuity } from "@/lib/fleet/continuity";
 import type { DbLike } from "@/lib/ledger/accounts";
@@ -149,13 +149,10 @@ export function recordFlight(tx: Tx, ctx: FlightContext, req: RecordFlightReques
 
   let squawkId: string | null = null;
   if (readings.squawk) {
-    const [sq] = tx
-      .insert(squawks)
-      .values({ clubId, aircraftId: plane.id, flightId, reportedById: req.recordedById, description: readings.squawk, foundDuring: "flight" })
-      .returning({ id: squawks.id })
-      .all();
-    squawkId = sq!.id;
-    recordSquawkEvent(tx, { clubId, squawkId, kind: "reported", actorId: req.recordedById, toTriage: "untriaged", note: req.via === "flight sheet" ? "Reported on the flight sheet." : "Reported with the flight log." });
+    squawkId = createSquawk(tx, {
+      clubId, aircraftId: plane.id, flightId, reportedById: req.recordedById, description: readings.squawk, foundDuring: "flight",
+      note: req.via === "flight sheet" ? "Reported on the flight sheet." : "Reported with the flight log.",
+    });
   }
 
   // The charge, by the aircraft's billing meter and rate. A flight flown in a locked period is

@@ -48,7 +48,7 @@ describe("weight and balance, preflight, beginning the flight and its flight she
     signInAs("member@hangarline.test");
     const club = clubBySlug(SLUG);
     const template = getPreflightTemplate(db(), club.id, aircraftId)!;
-    const fields: Record<string, string | string[] | Blob> = { club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Wing tanks"], fuelQuantity: ["40"] };
+    const fields: Record<string, string | string[] | Blob> = { club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Left wing tank", "Right wing tank"], fuelQuantity: ["20", "18"] };
     template.sumpPoints.forEach((_, i) => (fields[`sump.${i}`] = "clear"));
     for (const item of template.items) fields[`result.${item.id}`] = "ok";
     const tire = template.items.find((i) => i.label.includes("tire"))!;
@@ -58,7 +58,7 @@ describe("weight and balance, preflight, beginning the flight and its flight she
     fd.append(`photos.${tire.id}`, new File([PNG], "tire.png", { type: "image/png" }));
 
     // Missing answers are named per item and nothing is written.
-    const partial = form({ club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Wing tanks"], fuelQuantity: ["40"] });
+    const partial = form({ club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Left wing tank", "Right wing tank"], fuelQuantity: ["20", "18"] });
     template.sumpPoints.forEach((_, i) => partial.append(`sump.${i}`, "clear"));
     const refused = await recordPreflight(EMPTY, partial);
     expect(refused.ok).toBe(false);
@@ -96,7 +96,11 @@ describe("weight and balance, preflight, beginning the flight and its flight she
     const before = db().select().from(aircraft).where(eq(aircraft.id, aircraftId)).get()!;
     const hobbsOut = before.currentHobbs!;
     const tachOut = before.currentTach!;
-    const fields = { club: SLUG, bookingId, hobbsOut: hobbsOut.toFixed(1), hobbsIn: (hobbsOut + 1.3).toFixed(1), tachOut: tachOut.toFixed(1), tachIn: (tachOut + 1.1).toFixed(1), dayLandings: "3", fuelAdded: "10", oilAdded: "0" };
+    const fields = { club: SLUG, bookingId, hobbsOut: hobbsOut.toFixed(1), hobbsIn: (hobbsOut + 1.3).toFixed(1), tachOut: tachOut.toFixed(1), tachIn: (tachOut + 1.1).toFixed(1), fuelOut: "38", fuelIn: "27.5", timeOut: "09:05", timeIn: "10:30", dayLandings: "3", fuelAdded: "10", oilAdded: "0" };
+    // A clock time that is not HH:MM is refused by name, and nothing is written.
+    const badTime = await closeFlightSheet(EMPTY, form({ ...fields, timeIn: "half past ten" }));
+    expect(badTime.ok).toBe(false);
+    expect(badTime.fieldErrors.timeIn?.[0]).toMatch(/HH:MM/);
     const first = await closeFlightSheet(EMPTY, form(fields));
     expect(first, first.message).toMatchObject({ ok: true });
     const { flightId, chargeMinor } = first.data as { flightId: string; chargeMinor: number };
@@ -108,7 +112,7 @@ describe("weight and balance, preflight, beginning the flight and its flight she
 
     const logged = db().select().from(flights).where(eq(flights.id, flightId)).all();
     expect(logged).toHaveLength(1);
-    expect(logged[0]).toMatchObject({ aircraftId, hobbsOut, hobbsIn: Number((hobbsOut + 1.3).toFixed(1)), dayLandings: 3, fuelAdded: 10, continuity: "ok" });
+    expect(logged[0]).toMatchObject({ aircraftId, hobbsOut, hobbsIn: Number((hobbsOut + 1.3).toFixed(1)), dayLandings: 3, fuelAdded: 10, continuity: "ok", fuelOut: 38, fuelIn: 27.5, timeOut: "09:05", timeIn: "10:30" });
     const after = db().select().from(aircraft).where(eq(aircraft.id, aircraftId)).get()!;
     expect(after.currentHobbs).toBe(Number((hobbsOut + 1.3).toFixed(1)));
     expect(after.currentTach).toBe(Number((tachOut + 1.1).toFixed(1)));

@@ -86,13 +86,13 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
             <Link className={buttonClass("secondary")} href={`${base}/weight-balance`}>{loading ? "Review weight and balance" : "Work out weight and balance"}</Link>
           </Step>
           <Step n={2} title="Preflight" done={records.length > 0}>
-            <p className="mb-2 text-sm">{records[0] ? (records[0].outcome === "ok" ? "Recorded: everything OK." : `Recorded with ${records[0].findingCount} finding${records[0].findingCount === 1 ? "" : "s"}.`) : "Not recorded yet."}</p>
+            <p className="mb-2 text-sm">{records[0] ? (records[0].outcome === "ok" ? "Recorded: everything as expected." : `Recorded with ${records[0].findingCount} finding${records[0].findingCount === 1 ? "" : "s"}.`) : "Not recorded yet."}</p>
             {open ? <Link className={buttonClass("secondary")} href={`${base}/preflight`}>{records.length ? "Record it again" : "Record the preflight"}</Link> : null}
           </Step>
           <Step n={3} title="Begin flight" done={booking.status !== "reserved"}>
             {booking.status === "reserved" ? (
               records.length ? (
-                <BeginFlightForm slug={club.slug} bookingId={booking.id} limitations={status ? limitationTexts(status.reasons) : []} records={records.map((r) => ({ id: r.id, label: `${formatLocalTime(r.createdAt, tz)} — ${r.outcome === "ok" ? "all OK" : `${r.findingCount} finding(s)`}` }))} />
+                <BeginFlightForm slug={club.slug} bookingId={booking.id} limitations={status ? limitationTexts(status.reasons) : []} records={records.map((r) => ({ id: r.id, label: `${formatLocalTime(r.createdAt, tz)} — ${r.outcome === "ok" ? "all as expected" : `${r.findingCount} finding(s)`}` }))} />
               ) : (
                 <p className="text-sm">Record the preflight first; beginning the flight confirms it.</p>
               )
