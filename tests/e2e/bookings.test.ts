@@ -130,7 +130,7 @@ async function flow(page: Page) {
   await sheet.getByLabel("Tach in").fill((tachOut + 1.0).toFixed(1));
   await sheet.getByLabel("Fuel in").fill("29");
   await sheet.getByLabel("Time in").fill("07:40");
-  await sheet.getByLabel("Day landings").fill("4");
+  await sheet.getByLabel("Day landings", { exact: true }).fill("4");
   await expectNoHorizontalOverflow(page);
   await screenshot(page, "flight-sheet-phone");
   await page.setViewportSize({ width: 1280, height: 800 });
