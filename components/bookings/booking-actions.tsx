@@ -6,7 +6,7 @@ import { CheckboxField, Field, SelectField } from "@/components/ui/field";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
 import { changeBooking } from "@/lib/actions/bookings/change-booking";
-import { dispatchBooking } from "@/lib/actions/bookings/dispatch-booking";
+import { beginFlight } from "@/lib/actions/bookings/begin-flight";
 import { GuardNotes } from "./guard-notes";
 
 type Choice = { id: string; label: string };
@@ -50,12 +50,12 @@ export function CancelBookingForm({ slug, bookingId, lateNote }: { slug: string;
   );
 }
 
-export function DispatchForm({ slug, bookingId, records, limitations = [] }: { slug: string; bookingId: string; records: { id: string; label: string }[]; limitations?: string[] }) {
-  const form = useFormAction(dispatchBooking);
+export function BeginFlightForm({ slug, bookingId, records, limitations = [] }: { slug: string; bookingId: string; records: { id: string; label: string }[]; limitations?: string[] }) {
+  const form = useFormAction(beginFlight);
   const { state } = form;
   const e = state.fieldErrors;
   return (
-    <FormShell form={form} label="Dispatch">
+    <FormShell form={form} label="Begin flight">
       <input type="hidden" name="club" value={slug} />
       <input type="hidden" name="bookingId" value={bookingId} />
       <SelectField label="Preflight record" name="preflightRecordId" defaultValue={records[0]?.id ?? ""} errors={e.preflightRecordId}>
@@ -76,7 +76,7 @@ export function DispatchForm({ slug, bookingId, records, limitations = [] }: { s
         </div>
       ) : null}
       <CheckboxField label="I have dealt with every finding listed for this aircraft." name="acceptFindings" hint="Needed only when the record or the aircraft's status shows something." />
-      <SubmitButton pendingText="Dispatching…">Dispatch</SubmitButton>
+      <SubmitButton pendingText="Beginning…">Begin flight</SubmitButton>
     </FormShell>
   );
 }

@@ -4,7 +4,7 @@ import type { BookingStatus } from "@/db/schema";
 export const BOOKING_STATUS_WORDS: Record<BookingStatus, string> = {
   reserved: "Reserved",
   dispatched: "Out flying",
-  checked_in: "Back, checked in",
+  checked_in: "Flown, sheet closed",
   cancelled: "Cancelled",
 };
 

@@ -52,6 +52,33 @@ export function recordSquawkEvent(tx: Tx, event: { clubId: string; squawkId: str
     .run();
 }
 
+export type NewSquawk = {
+  clubId: string;
+  aircraftId: string;
+  reportedById: string;
+  description: string;
+  foundDuring: "preflight" | "flight" | "postflight" | "maintenance";
+  suspectedGrounding?: boolean;
+  /** The flight it was reported with, when it came from the flight log or a flight sheet. */
+  flightId?: string | null;
+  /** The "reported" event's note: where it was reported. */
+  note?: string | null;
+};
+
+/**
+ * The one write path of a squawk: the row and its "reported" event, in the caller's
+ * transaction. The squawk report, the preflight (a finding) and a flight's entry all call it.
+ */
+export function createSquawk(tx: Tx, s: NewSquawk): string {
+  const [row] = tx
+    .insert(squawks)
+    .values({ clubId: s.clubId, aircraftId: s.aircraftId, flightId: s.flightId ?? null, reportedById: s.reportedById, description: s.description, foundDuring: s.foundDuring, suspectedGrounding: s.suspectedGrounding ?? false })
+    .returning({ id: squawks.id })
+    .all();
+  recordSquawkEvent(tx, { clubId: s.clubId, squawkId: row!.id, kind: "reported", actorId: s.reportedById, toTriage: "untriaged", note: s.note ?? null });
+  return row!.id;
+}
+
 export type SquawkAlertRecipient = { userId: string; email: string; name: string | null; why: "maintenance" | "booking" };
 
 /**

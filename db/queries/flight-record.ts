@@ -1,9 +1,9 @@
 import "server-only";
 import { and, eq, isNull, ne, sql } from "drizzle-orm";
 import type { Tx } from "@/db/client";
-import { aircraft, bookings, flights, journalEntries, squawks, users, type Aircraft, type FlightRow } from "@/db/schema";
+import { aircraft, bookings, flights, journalEntries, users, type Aircraft, type FlightRow } from "@/db/schema";
 import { findNeighbourFlights } from "@/db/queries/fleet-flights";
-import { recordSquawkEvent } from "@/db/queries/fleet-squawks";
+import { createSquawk } from "@/db/queries/fleet-squawks";
 import { roundHours } from "@/lib/airworthiness";
 import { advanceMeters, checkBetween, checkMeterContinuity } from "@/lib/fleet/continuity";
 import type { DbLike } from "@/db/queries/money-accounts";
@@ -11,7 +11,7 @@ import { postFlightCharge, type FlightChargePosting, type PostingContext } from 
 import { lockedThrough } from "@/db/queries/money-post-entry";
 import { firstOpenDay } from "@/lib/money/open-period";
 
-// The one write path of a flight. The flight log ("Log a flight") and booking check-in both
+// The one write path of a flight. The flight log ("Log a flight") and a booking's flight sheet both
 // call recordFlight, in the caller's transaction: the flight row with its continuity flag, the
 // aircraft's meters and engine time, the squawk, and the flight's charge to the pilot's member
 // account — all or nothing. No flight is written without its charge being posted (or, on an
@@ -38,6 +38,11 @@ export type FlightReadings = {
   squawk: string | null;
   /** Why the meters do not continue from the previous flight; required when they do not. */
   meterExplanation?: string | null;
+  /** The flight sheet's Out | In extras (optional): fuel on board at each end, clock times "HH:MM". */
+  fuelOut?: number | null;
+  fuelIn?: number | null;
+  timeOut?: string | null;
+  timeIn?: string | null;
 };
 
 export type RecordFlightRequest = {
@@ -47,10 +52,10 @@ export type RecordFlightRequest = {
   /** The calendar day flown, in the club's time zone. */
   flownOn: string;
   readings: FlightReadings;
-  /** The booking flown on, when the flight comes from check-in. */
+  /** The booking flown on, when the flight comes from its flight sheet. */
   bookingId?: string | null;
   /** Where the flight was entered, for the squawk's history. */
-  via: "check-in" | "flight log";
+  via: "flight sheet" | "flight log";
 };
 
 export type RecordedFlight = {
@@ -121,6 +126,7 @@ export function recordFlight(tx: Tx, ctx: FlightContext, req: RecordFlightReques
       hobbsOut: readings.hobbsOut, hobbsIn: readings.hobbsIn, tachOut: readings.tachOut, tachIn: readings.tachIn,
       dayLandings: readings.dayLandings, dayFullStopLandings: readings.dayFullStopLandings ?? null, nightFullStopLandings: readings.nightFullStopLandings,
       fuelAdded: readings.fuelAdded, oilAdded: readings.oilAdded, fuelUnit: metric ? "l" : "gal", oilUnit: metric ? "l" : "qt",
+      fuelOut: readings.fuelOut ?? null, fuelIn: readings.fuelIn ?? null, timeOut: readings.timeOut ?? null, timeIn: readings.timeIn ?? null,
       notes: readings.notes, continuity: continuity.status, continuityText,
       meterExplanation: continuity.status === "ok" ? null : explanation,
       bookingId: req.bookingId ?? null,
@@ -143,13 +149,10 @@ export function recordFlight(tx: Tx, ctx: FlightContext, req: RecordFlightReques
 
   let squawkId: string | null = null;
   if (readings.squawk) {
-    const [sq] = tx
-      .insert(squawks)
-      .values({ clubId, aircraftId: plane.id, flightId, reportedById: req.recordedById, description: readings.squawk, foundDuring: "flight" })
-      .returning({ id: squawks.id })
-      .all();
-    squawkId = sq!.id;
-    recordSquawkEvent(tx, { clubId, squawkId, kind: "reported", actorId: req.recordedById, toTriage: "untriaged", note: req.via === "check-in" ? "Reported at check-in." : "Reported with the flight log." });
+    squawkId = createSquawk(tx, {
+      clubId, aircraftId: plane.id, flightId, reportedById: req.recordedById, description: readings.squawk, foundDuring: "flight",
+      note: req.via === "flight sheet" ? "Reported on the flight sheet." : "Reported with the flight log.",
+    });
   }
 
   // The charge, by the aircraft's billing meter and rate. A flight flown in a locked period is
@@ -163,8 +166,8 @@ export function recordFlight(tx: Tx, ctx: FlightContext, req: RecordFlightReques
   return { flightId, continuity: continuity.status, continuityText, squawkId, charge, chargedOn: open.postOn };
 }
 
-/** The pilot's booking on this aircraft that is out (dispatched) and not yet checked in. */
-export function openDispatchedBooking(tx: DbLike, clubId: string, aircraftId: string, pilotId: string): { id: string } | undefined {
+/** The pilot's booking on this aircraft whose flight has begun and whose flight sheet is not closed. */
+export function openFlightBooking(tx: DbLike, clubId: string, aircraftId: string, pilotId: string): { id: string } | undefined {
   return tx
     .select({ id: bookings.id })
     .from(bookings)

@@ -1,5 +1,5 @@
 import "server-only";
-// Posting a flight's charge to the pilot's member account. Flight check-in calls
+// Posting a flight's charge to the pilot's member account. The flight sheet calls
 // postFlightCharge inside its own transaction, right after it writes the flight row.
 import { and, desc, eq } from "drizzle-orm";
 import { journalEntries } from "@/db/schema";

@@ -1,7 +1,8 @@
 import "server-only";
 import { and, asc, desc, eq, isNull, sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
-import { preflightRecordItems, preflightRecords, preflightTemplateItems, preflightTemplates, type PreflightRecord, type PreflightRecordItem, type PreflightTemplate, type PreflightTemplateItem } from "@/db/schema";
+import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
+import { preflightRecordItems, preflightRecords, preflightTemplateItems, preflightTemplates, type PreflightRecord, type PreflightTank, type PreflightRecordItem, type PreflightTemplate, type PreflightTemplateItem } from "@/db/schema";
 
 // The club's preflight checklists (one per aircraft) and the records members make with them.
 
@@ -25,6 +26,7 @@ export type TemplateValues = {
   oilMinimum: number;
   oilMaximum: number | null;
   sumpPoints: string[];
+  fuelTanks: PreflightTank[];
   items: { section: string; label: string; kind: "check" | "document" }[];
   updatedById: string;
 };
@@ -35,7 +37,7 @@ export type TemplateValues = {
  */
 export function savePreflightTemplate(tx: Tx, clubId: string, aircraftId: string, values: TemplateValues): string {
   const current = getPreflightTemplate(tx, clubId, aircraftId);
-  const header = { oilMinimum: values.oilMinimum, oilMaximum: values.oilMaximum, sumpPoints: values.sumpPoints, updatedById: values.updatedById };
+  const header = { oilMinimum: values.oilMinimum, oilMaximum: values.oilMaximum, sumpPoints: values.sumpPoints, fuelTanks: values.fuelTanks, updatedById: values.updatedById };
   let templateId: string;
   if (current) {
     templateId = current.id;
@@ -70,4 +72,14 @@ export function getPreflightRecord(db: Handle, clubId: string, recordId: string)
   if (!record) return undefined;
   const items = db.select().from(preflightRecordItems).where(and(eq(preflightRecordItems.clubId, clubId), eq(preflightRecordItems.recordId, record.id))).orderBy(sql`rowid`).all();
   return { ...record, items };
+}
+
+/**
+ * The tanks a preflight reads: the template's own (name + usable capacity), else the weight
+ * and balance profile's, else one "Fuel on board" reading with no capacity to check against.
+ */
+export function preflightTanks(db: Handle, clubId: string, template: Pick<PreflightTemplate, "aircraftId" | "fuelTanks"> | undefined, aircraftId: string): { name: string; capacity: number | null }[] {
+  if (template?.fuelTanks.length) return template.fuelTanks.map((t) => ({ name: t.name, capacity: t.capacity }));
+  const profile = getWeightBalanceProfile(db, clubId, aircraftId);
+  return profile?.tanks.map((t) => ({ name: t.name, capacity: t.usableCapacity })) ?? [{ name: "Fuel on board", capacity: null }];
 }

@@ -140,6 +140,8 @@ export const preflightTemplates = sqliteTable(
     oilMaximum: real("oil_maximum"),
     /** Drain points sampled before flight, e.g. "Left wing sump", "Gascolator". */
     sumpPoints: text("sump_points", { mode: "json" }).$type<string[]>().notNull(),
+    /** The tanks checked before flight: name and usable capacity in the club's fuel unit. Empty: the weight-and-balance tanks. */
+    fuelTanks: text("fuel_tanks", { mode: "json" }).$type<PreflightTank[]>().notNull().default(sql`'[]'`),
     updatedById: text("updated_by_id").references(() => users.id),
     ...timestamps(),
   },
@@ -164,6 +166,7 @@ export const preflightTemplateItems = sqliteTable(
   (t) => [index("preflight_template_items_club_id").on(t.clubId, t.templateId)],
 );
 
+export type PreflightTank = { name: string; capacity: number };
 export type FuelReading = { tank: string; quantity: number };
 export type SumpReading = { point: string; result: "clear" | "contaminated" };
 

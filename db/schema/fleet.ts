@@ -210,6 +210,11 @@ export const flights = sqliteTable(
     oilAdded: real("oil_added").notNull().default(0),
     fuelUnit: text("fuel_unit", { enum: ["gal", "l"] }).notNull(),
     oilUnit: text("oil_unit", { enum: ["qt", "l"] }).notNull(),
+    /** Flight sheet, Out | In: fuel on board at each end (fuelUnit) and the club's clock time "HH:MM"; optional. */
+    fuelOut: real("fuel_out"),
+    fuelIn: real("fuel_in"),
+    timeOut: text("time_out"),
+    timeIn: text("time_in"),
     notes: text("notes"),
     /** Meter continuity with the neighbouring flights, checked when the flight was logged. */
     continuity: text("continuity", { enum: ["ok", "gap", "overlap"] }).notNull().default("ok"),

@@ -22,6 +22,8 @@ type Figures = {
   burnGalPerHour: number;
   oil: [minQt: number, maxQt: number];
   sumps: string[];
+  /** The tanks read at the preflight, with their usable capacity in US gallons. */
+  preflightTanks: [name: string, usableGal: number][];
 };
 
 // Keyed by type group, in lb, in and US gallons.
@@ -32,6 +34,7 @@ const FIGURES: Record<string, Figures> = {
     tanks: [["Main tanks", 42, 24.5]],
     normal: [[31.0, 1000], [31.0, 1350], [32.6, 1670], [36.5, 1670], [36.5, 1000]], utility: null,
     burnGalPerHour: 6.0, oil: [4, 6], sumps: ["Left tank sump", "Right tank sump", "Gascolator"],
+    preflightTanks: [["Left tank", 12], ["Right tank", 12]],
   },
   "Kestrel K160": {
     empty: [1486, 38.9], maxTakeoff: 2400, maxLanding: null,
@@ -40,6 +43,7 @@ const FIGURES: Record<string, Figures> = {
     normal: [[35.0, 1500], [35.0, 1950], [39.5, 2400], [47.3, 2400], [47.3, 1500]],
     utility: [[35.0, 1500], [35.0, 1950], [35.5, 2000], [40.5, 2000], [40.5, 1500]],
     burnGalPerHour: 8.5, oil: [5, 8], sumps: ["Left wing sump", "Right wing sump", "Gascolator"],
+    preflightTanks: [["Left wing tank", 20], ["Right wing tank", 20]],
   },
   "Brightwing BW-4": {
     empty: [1724, 39.6], maxTakeoff: 2650, maxLanding: 2550,
@@ -47,6 +51,7 @@ const FIGURES: Record<string, Figures> = {
     tanks: [["Left wing tank", 48, 25], ["Right wing tank", 48, 25]],
     normal: [[35.5, 1600], [35.5, 2050], [40.0, 2650], [47.3, 2650], [47.3, 1600]], utility: null,
     burnGalPerHour: 10.5, oil: [6, 8], sumps: ["Left wing sump", "Right wing sump", "Fuel strainer"],
+    preflightTanks: [["Left wing tank", 25], ["Right wing tank", 25]],
   },
 };
 
@@ -54,6 +59,7 @@ const DOCUMENTS = ["Airworthiness certificate", "Registration certificate", "Fli
 const CHECKS = [
   "Cabin: master off, magnetos off, control lock removed",
   "Cabin: fuel quantity checked visually in each tank",
+  "Cabin: navigation, strobe and landing lights work",
   "Left wing: aileron and hinges free and secure",
   "Left wing: fuel cap secure, vent clear",
   "Left wing: tire, brake and strut",
@@ -65,7 +71,6 @@ const CHECKS = [
   "Right wing: tire, brake and strut",
   "Tail: elevator and rudder free, hinges secure",
   "Tail: antennas secure",
-  "Lights: navigation, strobe and landing lights work",
 ];
 
 const r1 = (n: number) => Math.round(n * 10) / 10;
@@ -108,11 +113,12 @@ export function seedBookings(db: Db, foundation: SeededFoundation): void {
         tx.insert(weightBalanceProfiles).values({ clubId: club.id, aircraftId: plane.id, ...profileValues(f, metric) }).run();
         const [template] = tx
           .insert(preflightTemplates)
-          .values({ clubId: club.id, aircraftId: plane.id, oilMinimum: metric ? r1(f.oil[0] * QT_L) : f.oil[0], oilMaximum: metric ? r1(f.oil[1] * QT_L) : f.oil[1], sumpPoints: f.sumps })
+          .values({ clubId: club.id, aircraftId: plane.id, oilMinimum: metric ? r1(f.oil[0] * QT_L) : f.oil[0], oilMaximum: metric ? r1(f.oil[1] * QT_L) : f.oil[1], sumpPoints: f.sumps, fuelTanks: f.preflightTanks.map(([name, gal]) => ({ name, capacity: metric ? Math.round(gal * GAL_L) : gal })) })
           .returning({ id: preflightTemplates.id })
           .all();
         const items = [
-          ...DOCUMENTS.map((label) => ({ section: "Documents aboard", label, kind: "document" as const })),
+          // Documents are checked in the cabin: one group fewer to tap on the ramp.
+          ...DOCUMENTS.map((label) => ({ section: "Cabin", label, kind: "document" as const })),
           ...CHECKS.map((line) => ({ section: line.split(":")[0]!, label: line.slice(line.indexOf(":") + 1).trim(), kind: "check" as const })),
         ];
         tx.insert(preflightTemplateItems).values(items.map((item, position) => ({ ...item, position, clubId: club.id, templateId: template!.id }))).run();

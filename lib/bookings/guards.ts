@@ -19,7 +19,7 @@ export type GuardKey = keyof ClubSettings["bookingGuards"];
  * "statusUnknown" is never a refusal: missing records are said out loud, never read as flyable.
  * "limitations" is never a refusal either: a deferred item with a limitation (14 CFR
  * 91.213(d)) leaves the aircraft flyable within it, which only the pilot can judge for the
- * flight; the pilot reads each limitation when booking and ticks it again at dispatch.
+ * flight; the pilot reads each limitation when booking and ticks it again when the flight begins.
  */
 export type GuardFinding = { guard: GuardKey | "statusUnknown" | "limitations"; reason: string };
 export type GuardOutcome = { refusals: GuardFinding[]; warnings: GuardFinding[] };
@@ -117,7 +117,7 @@ function aircraftFindings(input: GuardInput): GuardFinding[] {
 /**
  * The limitations an aircraft flies under ("flyable with limits"), as the flight line words
  * them: deferred items with their limitation (14 CFR 91.213(d)) and lapsed IFR-only checks.
- * Booking quotes them; dispatch shows them again and needs the pilot's tick.
+ * Booking quotes them; beginning the flight shows them again and needs the pilot's tick.
  */
 export function limitationTexts(reasons: readonly StatusReason[]): string[] {
   const texts: string[] = [];
@@ -131,7 +131,7 @@ function limitationFindings(input: GuardInput): GuardFinding[] {
   if (aircraft.statusNow.status === "grounded") return [];
   const texts = limitationTexts([...aircraft.statusNow.reasons, ...(aircraft.statusAtEnd?.reasons ?? [])]);
   if (!texts.length) return [];
-  return [{ guard: "limitations", reason: `${aircraft.registration} is flyable with limits. ${texts.map((t) => `“${t}”`).join(" ")} Plan this flight within each limitation; you will be asked again at dispatch.` }];
+  return [{ guard: "limitations", reason: `${aircraft.registration} is flyable with limits. ${texts.map((t) => `“${t}”`).join(" ")} Plan this flight within each limitation; you will be asked again when the flight begins.` }];
 }
 
 /** Lapsed when there is no last day, or it falls before the booking's last day. */

@@ -1,5 +1,5 @@
 // Booking windows are half-open intervals [start, end): a booking may begin at the very minute
-// the previous one ends. Only active bookings (reserved or dispatched) hold the aircraft.
+// the previous one ends. Only active bookings (reserved, or flight begun) hold the aircraft.
 
 export const ACTIVE_BOOKING_STATUSES = ["reserved", "dispatched"] as const;
 

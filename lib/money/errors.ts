@@ -1,5 +1,5 @@
 // Refusals of the ledger. Actions turn them into field messages (lib/actions/money/ledger-errors.ts);
-// anything else calling the ledger (flight check-in) can test `instanceof LedgerError`.
+// anything else calling the ledger (the flight sheet) can test `instanceof LedgerError`.
 
 export type LedgerErrorCode = "locked" | "not-member" | "not-found" | "currency" | "invalid" | "already-reversed";
 

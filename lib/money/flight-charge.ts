@@ -50,3 +50,26 @@ export function flightCharge(input: FlightChargeInput): number {
   assertNonNegativeMinor(credit, "fuelCreditMinor");
   return meterTimeCharge(input.meterOut, input.meterIn, input.ratePerHourMinor) - credit;
 }
+
+export type FlightChargePreview =
+  | { ok: true; hours: number; chargeMinor: number }
+  | { ok: false; reason: string };
+
+/**
+ * The flight sheet's live figure, worked out while the pilot types: the same rule as the
+ * charge the server posts (meterTimeCharge), but never throwing — half-typed or backwards
+ * readings say what is missing instead. The server stays the authority on the charge.
+ */
+export function previewFlightCharge(meterOut: string, meterIn: string, ratePerHourMinor: number, meterName: string): FlightChargePreview {
+  const pattern = /^\d+(\.\d{1,2})?$/;
+  const out = meterOut.trim();
+  const inn = meterIn.trim();
+  if (!pattern.test(out)) return { ok: false, reason: `Enter ${meterName} out to see the charge.` };
+  if (!pattern.test(inn)) return { ok: false, reason: `Enter ${meterName} in to see the charge.` };
+  const a = Number(out);
+  const b = Number(inn);
+  if (b < a) return { ok: false, reason: `${meterName} in is below ${meterName} out.` };
+  if (!Number.isFinite(ratePerHourMinor) || ratePerHourMinor < 0) return { ok: false, reason: "This aircraft has no hourly rate." };
+  const chargeMinor = meterTimeCharge(a, b, ratePerHourMinor);
+  return { ok: true, hours: Math.round((b - a) * 100) / 100, chargeMinor };
+}

@@ -1,7 +1,7 @@
 // Money rules: integer minor units in the club's currency, rounding half away from zero, no
 // I/O. The ledger, billing run, statements and reconciliation all call these.
 export { prorate, countDaysInclusive } from "./proration";
-export { flightCharge, meterTimeCharge, type FlightChargeInput } from "./flight-charge";
+export { flightCharge, meterTimeCharge, previewFlightCharge, type FlightChargeInput, type FlightChargePreview } from "./flight-charge";
 export { roundHalfAwayFromZero, roundQuotient, subtractExact } from "./decimal";
 export {
   assertBalanced,

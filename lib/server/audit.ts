@@ -13,7 +13,7 @@ export type AuditAction =
   | "bulletin.create" | "bulletin.draft.update" | "bulletin.publish" | "bulletin.remind"
   | "safety_report.triage" | "safety_report.grounding" | "member_document.record" | "member_document.remind" | "medical.record" | "currency.verify"
   | "checkout.record" | "checkout.revoke"
-  | "booking.create" | "booking.change" | "booking.cancel" | "booking.dispatch" | "booking.checkin"
+  | "booking.create" | "booking.change" | "booking.cancel" | "booking.flight.begin" | "booking.flight.close"
   | "calendar.link.create" | "calendar.link.revoke" | "weight-balance.profile.update" | "preflight.template.update" | "preflight.record";
 
 export function writeAudit(

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { calendarDate, isRecordId, localDateTimeField, recordId } from "./primitives";
 import { checkbox, hoursField, optionalCountField } from "./fleet";
 
-// Bookings, dispatch and check-in. Times are typed in the club's time zone as "YYYY-MM-DDTHH:MM"
+// Bookings, beginning a flight and its flight sheet. Times are typed in the club's time zone as "YYYY-MM-DDTHH:MM"
 // (a datetime-local field) and turned into UTC instants by the action.
 
 const GUARD_KEYS = ["grounded", "inspectionDue", "notCheckedOut", "notCurrent", "flightReview", "medicalExpired", "inArrears", "statusUnknown", "limitations"] as const;
@@ -60,7 +60,7 @@ export const cancelBookingSchema = z.object({
   reason: optionalText("the reason", 300),
 });
 
-export const dispatchBookingSchema = z
+export const beginFlightSchema = z
   .object({
     bookingId: id("a booking"),
     preflightRecordId: id("the preflight record"),
@@ -95,7 +95,26 @@ const quantity = (label: string) =>
       .refine((v) => v <= 2000, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 2000.` }),
   );
 
-export const checkInSchema = z
+const optionalFuel = (label: string) =>
+  z.preprocess(
+    blankToUndefined,
+    z
+      .string()
+      .trim()
+      .refine((v) => /^\d+(\.\d{1,2})?$/.test(v), { error: `Enter ${label} as a number, like 18.5, or leave it empty.` })
+      .transform(Number)
+      .refine((v) => v <= 2000, { error: `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 2000.` })
+      .optional(),
+  ).transform((v) => v ?? null);
+
+const optionalClock = (label: string) =>
+  z.preprocess(
+    blankToUndefined,
+    z.string().trim().regex(/^([01]\d|2[0-3]):[0-5]\d$/, { error: `Enter ${label} as HH:MM on a 24-hour clock, like 14:05, or leave it empty.` }).optional(),
+  ).transform((v) => v ?? null);
+
+/** The flight sheet: two columns, Out | In (Hobbs, tach, fuel on board, time), then landings and the rest. */
+export const flightSheetSchema = z
   .object({
     bookingId: id("a booking"),
     hobbsOut: hoursField("Hobbs out"),
@@ -111,6 +130,10 @@ export const checkInSchema = z
     squawk: optionalText("the squawk", 2000),
     notes: optionalText("the notes", 1000),
     meterExplanation: optionalText("the explanation of the meter readings", 1000),
+    fuelOut: optionalFuel("the fuel on board out"),
+    fuelIn: optionalFuel("the fuel on board in"),
+    timeOut: optionalClock("the time out"),
+    timeIn: optionalClock("the time in"),
   })
   .superRefine((v, ctx) => {
     if (v.hobbsIn < v.hobbsOut) ctx.addIssue({ code: "custom", path: ["hobbsIn"], message: "Hobbs in cannot be less than Hobbs out." });
@@ -132,4 +155,4 @@ export const bookingRangeSchema = z.object({
 
 export type CreateBookingInput = z.output<typeof createBookingSchema>;
 export type ChangeBookingInput = z.output<typeof changeBookingSchema>;
-export type CheckInInput = z.output<typeof checkInSchema>;
+export type FlightSheetInput = z.output<typeof flightSheetSchema>;

@@ -183,10 +183,30 @@ const listField = (what: string, max: number, required?: string) =>
     }),
   );
 
+/** Tanks checked before flight: "Name | usable capacity", one per line (empty: the weight-and-balance tanks). */
+const fuelTanksField = z.preprocess(
+  (v) => (v === undefined ? "" : v),
+  listText("the tank list").transform((v, ctx) => {
+    const out: { name: string; capacity: number }[] = [];
+    lines(v).forEach((line, i) => {
+      const [name, capacity, ...rest] = line.split("|").map((p) => p.trim());
+      const n = Number(capacity);
+      if (!name || name.length > 60 || !capacity || rest.length || !/^\d+(\.\d{1,2})?$/.test(capacity) || n <= 0 || n > 5_000) {
+        ctx.addIssue({ code: "custom", message: `Line ${i + 1}: write "Tank name | usable capacity", like "Left wing tank | 20".` });
+      } else if (out.some((t) => t.name.toLowerCase() === name.toLowerCase())) {
+        ctx.addIssue({ code: "custom", message: `Line ${i + 1}: "${name}" is listed twice; give each tank its own name.` });
+      } else out.push({ name, capacity: n });
+    });
+    if (out.length > 12) ctx.addIssue({ code: "custom", message: "At most 12 tanks." });
+    return out;
+  }),
+);
+
 export const preflightTemplateSchema = z
   .object({
     aircraftId: id("an aircraft"),
     documents: listField("document", 120),
+    fuelTanks: fuelTanksField,
     checklist: checklistField,
     sumpPoints: listField("drain point", 80, "Enter at least one fuel drain point."),
     oilMinimum: decimal("the oil minimum", { max: 50, allowZero: false }),
@@ -204,7 +224,8 @@ const itemSchema = z
     photos: filesField("photos", 6),
   })
   .superRefine((v, ctx) => {
-    if (v.result === "finding" && (!v.note || v.note.length < 5)) ctx.addIssue({ code: "custom", path: ["note"], message: "Describe what you found (at least 5 characters): it becomes a squawk." });
+    // One tap makes a finding; words are welcome but not needed (the squawk names the item).
+    if (v.result === "finding" && v.note && v.note.length < 5) ctx.addIssue({ code: "custom", path: ["note"], message: "Say a little more about what you found (at least 5 characters), or leave it empty." });
   });
 
 /** Gathers the per-item fields ("result.<id>", "note.<id>", …) of the record form into `items`. */

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harness";
 
 // A member on a phone: book an aircraft, work out weight and balance (the envelope chart with
-// both points), record a preflight with a finding that becomes a squawk, dispatch, check in.
+// both points), record a preflight with a finding that becomes a squawk, begin the flight, close the flight sheet.
 // Uses the seeded N0527L in the Lakeshore club, far enough ahead not to meet the seeded bookings.
 
 const PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
@@ -23,7 +23,7 @@ async function tickWarningsAndRetry(page: Page, button: string) {
 }
 
 describe("bookings on a phone", () => {
-  it("book → weight and balance with the envelope → preflight with a finding → dispatch → check in", async () => {
+  it("book → weight and balance with the envelope → preflight with a finding → begin flight → flight sheet", async () => {
     const page = await newPage("phone");
     try {
       await flow(page);
@@ -90,48 +90,55 @@ async function flow(page: Page) {
   await expectNoHorizontalOverflow(page);
   await screenshot(page, "bookings-weight-balance-phone");
 
-  // Preflight: every item OK but one tire, which becomes a squawk with a photo.
+  // Preflight: one tap makes the tire a finding (it becomes a squawk, here with words and a photo),
+  // then one tap per area for the rest, one for the tanks and samples, one for the oil.
   await page.goto(`${bookingUrl}/preflight`, { waitUntil: "networkidle" });
   const pf = page.getByRole("form", { name: "Preflight record" });
-  let found = false;
-  for (const group of await pf.getByRole("radiogroup").all()) {
-    const name = (await group.getAttribute("aria-label")) ?? "";
-    if (name.startsWith("Sample from")) await group.getByLabel("Clear").check();
-    else if (name === "tire, brake and strut" && !found) {
-      await group.getByLabel("Finding").check();
-      found = true;
-    } else await group.getByRole("radio").first().check();
-  }
-  await pf.getByLabel("What you found: tire, brake and strut").fill("Left main tire worn through the tread");
+  await pf.getByRole("group", { name: "tire, brake and strut" }).first().getByRole("button", { name: "Finding" }).click();
+  await pf.getByLabel("What you found (optional): tire, brake and strut").fill("Left main tire worn through the tread");
   await pf.locator('input[type=file][name^="photos."]').setInputFiles({ name: "tire.png", mimeType: "image/png", buffer: PNG });
-  await pf.getByLabel("Wing tanks (US gal)").fill("36");
-  await pf.getByLabel("Oil quantity (qt)").fill("6");
+  for (const area of await pf.getByRole("button", { name: /^All as expected: / }).all()) await area.click();
+  await pf.getByRole("button", { name: "✓ Every tank full, every sample clear" }).click();
+  await pf.getByRole("button", { name: "Oil 6 qt" }).click();
   await pf.getByRole("button", { name: "Record the preflight" }).click();
   await page.getByText(/Preflight recorded with 1 finding; 1 reported as squawk for maintenance/).waitFor();
   await expectNoHorizontalOverflow(page);
   const squawks = (await (await page.request.get(`/api/clubs/lakeshore-aero/squawks?aircraftId=${plane}&status=open`)).json()) as { squawks: { description: string; foundDuring: string }[] };
   expect(squawks.squawks.some((s) => s.foundDuring === "preflight" && s.description.includes("Left main tire worn through the tread"))).toBe(true);
 
-  // Dispatch confirms the record (its finding needs the extra tick), then check in.
+  // Beginning the flight confirms the record (its finding needs the extra tick), then the flight sheet.
   await page.goto(bookingUrl, { waitUntil: "networkidle" });
-  const dispatch = page.getByRole("form", { name: "Dispatch" });
-  await dispatch.getByLabel(/I did this preflight myself/).check();
-  await dispatch.getByLabel("I have dealt with every finding listed for this aircraft.").check();
+  const begin = page.getByRole("form", { name: "Begin flight" });
+  await begin.getByLabel(/I did this preflight myself/).check();
+  await begin.getByLabel("I have dealt with every finding listed for this aircraft.").check();
   // N0527L flies with a deferred landing light: its limitation is ticked again here.
-  await dispatch.getByLabel("I have read each limitation and will fly this flight within them.").check();
-  await dispatch.getByRole("button", { name: "Dispatch" }).click();
-  await page.getByRole("link", { name: "Check in" }).waitFor();
-  await page.getByRole("link", { name: "Check in" }).click();
-  await page.waitForURL(/\/check-in$/);
-  const checkIn = page.getByRole("form", { name: "Check in" });
-  const hobbsOut = Number(await checkIn.getByLabel("Hobbs out").inputValue());
-  const tachOut = Number(await checkIn.getByLabel("Tach out").inputValue());
-  await checkIn.getByLabel("Hobbs in").fill((hobbsOut + 1.2).toFixed(1));
-  await checkIn.getByLabel("Tach in").fill((tachOut + 1.0).toFixed(1));
-  await checkIn.getByLabel("Day landings").fill("4");
-  await checkIn.getByRole("button", { name: "Check in" }).click();
-  await page.getByText(/Checked in: flight logged and \$182\.40 charged to the account/).waitFor();
+  await begin.getByLabel("I have read each limitation and will fly this flight within them.").check();
+  await begin.getByRole("button", { name: "Begin flight" }).click();
+  await page.getByRole("link", { name: "Close the flight sheet" }).waitFor();
+  await page.getByRole("link", { name: "Close the flight sheet" }).click();
+  await page.waitForURL(/\/flight-sheet$/);
+  const sheet = page.getByRole("form", { name: "Flight sheet" });
+  const hobbsOut = Number(await sheet.getByLabel("Hobbs out").inputValue());
+  const tachOut = Number(await sheet.getByLabel("Tach out").inputValue());
+  // Fuel out comes from the preflight record: both tanks full, 20 + 20 US gal.
+  expect(await sheet.getByLabel("Fuel out").inputValue()).toBe("40");
+  const preview = sheet.getByTestId("charge-preview");
+  expect(await preview.textContent()).toBe("Enter Hobbs in to see the charge.");
+  await sheet.getByLabel("Hobbs in").fill((hobbsOut + 1.2).toFixed(1));
+  // Worked out as the pilot types: 1.2 Hobbs h × $152.00 = $182.40 (the seeded rate).
+  await sheet.getByText("$182.40 for 1.2 Hobbs h").waitFor();
+  await sheet.getByLabel("Tach in").fill((tachOut + 1.0).toFixed(1));
+  await sheet.getByLabel("Fuel in").fill("29");
+  await sheet.getByLabel("Time in").fill("07:40");
+  await sheet.getByLabel("Day landings", { exact: true }).fill("4");
+  await expectNoHorizontalOverflow(page);
+  await screenshot(page, "flight-sheet-phone");
+  await page.setViewportSize({ width: 1280, height: 800 });
+  await screenshot(page, "flight-sheet-desktop");
+  await page.setViewportSize({ width: 390, height: 844 });
+  await sheet.getByRole("button", { name: "Close the flight sheet" }).click();
+  await page.getByText(/Flight sheet closed: flight logged and \$182\.40 charged to the account/).waitFor();
   await expectNoHorizontalOverflow(page);
   await page.goto(bookingUrl, { waitUntil: "networkidle" });
-  await page.getByText("Back, checked in").first().waitFor();
+  await page.getByText("Flown, sheet closed").first().waitFor();
 }

@@ -5,16 +5,16 @@ import { describe, expect, inject, it } from "vitest";
 import { newPage, screenshot, signIn } from "./harness";
 
 // What a booking puts before the pilot: a lapsed flight review refuses it (14 CFR 61.56(c));
-// a deferred item's limitation (14 CFR 91.213(d)) is quoted at booking and ticked again at
-// dispatch. Uses the seeded N0527L (left landing light deferred: "No night flight…") and the
+// a deferred item's limitation (14 CFR 91.213(d)) is quoted at booking and ticked again when
+// the flight begins. Uses the seeded N0527L (left landing light deferred: "No night flight…") and the
 // seeded pilot2, whose flight review ran out at the end of last month.
 
 const LIMITATION = "No night flight until the left landing light is repaired";
 const dbFile = path.join(inject("dataDir"), "e2e.db");
 
 /**
- * The preflight record this test dispatches on, written straight into the test database: the
- * preflight form itself is driven by tests/e2e/bookings.test.ts, and here only dispatch matters.
+ * The preflight record this test begins the flight on, written straight into the test database: the
+ * preflight form itself is driven by tests/e2e/bookings.test.ts, and here only beginning the flight matters.
  */
 function insertPreflightRecord(bookingId: string): string {
   const db = new Database(dbFile, { fileMustExist: true });
@@ -79,14 +79,14 @@ describe("rules before the pilot, in the browser", () => {
     });
   });
 
-  it("the limitation is quoted when booking and must be ticked again at dispatch", async () => {
+  it("the limitation is quoted when booking and must be ticked again when the flight begins", async () => {
     await run(await newPage("desktop"), "limitation", async (page) => {
       await signIn(page, "member@hangarline.test");
       const form = await openBookingForm(page, 60 + Math.floor(Math.random() * 60), "12:00", "13:30");
       await form.getByRole("button", { name: "Book", exact: true }).click();
       await form.getByRole("alert").filter({ hasText: /^Read the warnings below/ }).waitFor();
       const warnings = page.getByRole("group", { name: "Warnings to read" });
-      // Its own line (a "Check status" line may quote the same squawk among the aircraft's records).
+      // Its own line (a "Status unknown" line may quote the same squawk among the aircraft's records).
       const limitation = warnings.getByRole("listitem").filter({ hasText: /^Flies with limits:/ });
       expect(await limitation.textContent()).toMatch(/^Flies with limits: N0527L is flyable with limits\. “Deferred, placarded inoperative \(14 CFR 91\.213\(d\)\): Left landing light inoperative\. Limitation: No night flight until the left landing light is repaired”/);
       // Read and tick every warning shown (the member's own currency may add some), then book.
@@ -101,23 +101,23 @@ describe("rules before the pilot, in the browser", () => {
       // A preflight record with everything OK (see insertPreflightRecord).
       insertPreflightRecord(bookingUrl.split("/").at(-1)!);
 
-      // Dispatch shows the limitation again; without the tick it is refused with its own words.
+      // Beginning the flight shows the limitation again; without the tick it is refused with its own words.
       await page.goto(bookingUrl, { waitUntil: "networkidle" });
-      const dispatch = page.getByRole("form", { name: "Dispatch" });
-      const limits = dispatch.getByRole("group", { name: "Limitations of this aircraft" });
+      const begin = page.getByRole("form", { name: "Begin flight" });
+      const limits = begin.getByRole("group", { name: "Limitations of this aircraft" });
       expect(await limits.getByRole("listitem").allTextContents()).toEqual([`Deferred, placarded inoperative (14 CFR 91.213(d)): Left landing light inoperative. Limitation: ${LIMITATION}`]);
-      await dispatch.getByLabel(/I did this preflight myself/).check();
-      await dispatch.getByRole("button", { name: "Dispatch" }).click();
-      const refused = dispatch.getByRole("alert").filter({ hasText: /^Not dispatched:/ });
+      await begin.getByLabel(/I did this preflight myself/).check();
+      await begin.getByRole("button", { name: "Begin flight" }).click();
+      const refused = begin.getByRole("alert").filter({ hasText: /^Flight not begun:/ });
       await refused.waitFor();
-      expect(await refused.textContent()).toBe("Not dispatched: N0527L flies with limits. Read each limitation and tick that you will fly within it.");
-      await dispatch.getByLabel("I have read each limitation and will fly this flight within them.").check();
+      expect(await refused.textContent()).toBe("Flight not begun: N0527L flies with limits. Read each limitation and tick that you will fly within it.");
+      await begin.getByLabel("I have read each limitation and will fly this flight within them.").check();
       // Other browser tests share this server and may have left a squawk awaiting triage on this aircraft:
       // the pilot then also confirms having dealt with what the records show (harmless when nothing is listed).
-      await dispatch.getByLabel("I have dealt with every finding listed for this aircraft.").check();
-      await dispatch.getByRole("button", { name: "Dispatch" }).click();
-      await page.getByRole("link", { name: "Check in" }).waitFor();
-      await page.getByText(/^Dispatched \d/).waitFor();
+      await begin.getByLabel("I have dealt with every finding listed for this aircraft.").check();
+      await begin.getByRole("button", { name: "Begin flight" }).click();
+      await page.getByRole("link", { name: "Close the flight sheet" }).waitFor();
+      await page.getByText(/^Flight begun \d/).waitFor();
     });
   });
 });

@@ -1,5 +1,5 @@
 // Every flight is charged once, through one write path (db/queries/flight-record.ts): the flight
-// log and check-in both post exactly one journal entry per flight, a replayed submission posts
+// log and the flight sheet both post exactly one journal entry per flight, a replayed submission posts
 // nothing more, a flight already out on a booking cannot be logged a second time beside it, and
 // meters that do not continue are flagged on the flight being entered, explained before it is
 // recorded, and listed for the treasurer until settled.
@@ -7,7 +7,7 @@ import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { aircraft, bookings, flights, journalEntries, journalLines, ledgerAccounts, users } from "@/db/schema";
 import { listMeterGaps, listUnchargedFlights } from "@/db/queries/flight-record";
-import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
+import { closeFlightSheet } from "@/lib/actions/bookings/close-flight-sheet";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { logFlight } from "@/lib/actions/fleet/log-flight";
 import { settleMeterGapAction } from "@/lib/actions/money/settle-meter-gap";
@@ -44,13 +44,13 @@ function continuing(hours: number, extra: Record<string, string> = {}) {
   };
 }
 
-async function dispatchedBooking(daysAhead: number): Promise<string> {
+async function bookingInFlight(daysAhead: number): Promise<string> {
   const club = clubBySlug(SLUG);
   signInAs(MEMBER);
   const made = await createBooking(EMPTY, form({ club: SLUG, aircraftId: planeId(SLUG, REG), startsAt: localAt(club, daysAhead, "08:00"), endsAt: localAt(club, daysAhead, "09:00"), acceptedGuards: ALL_GUARDS }));
   expect(made, made.message).toMatchObject({ ok: true });
   const bookingId = (made.data as { bookingId: string }).bookingId;
-  // Dispatch has its own tests (bookings-check-in); here the aircraft is simply out.
+  // Beginning a flight has its own tests (bookings-flight); here the aircraft is simply out.
   db().update(bookings).set({ status: "dispatched", dispatchedAt: new Date() }).where(eq(bookings.id, bookingId)).run();
   return bookingId;
 }
@@ -112,39 +112,39 @@ describe("every flight is charged once, through one write path", () => {
     expect({ flights: db().select().from(flights).all().length, entries: db().select().from(journalEntries).all().length }).toEqual(before);
   });
 
-  it("check-in charges once; a replay with the same key and a second press with a new key change nothing", async () => {
-    const bookingId = await dispatchedBooking(3);
+  it("closing the flight sheet charges once; a replay with the same key and a second press with a new key change nothing", async () => {
+    const bookingId = await bookingInFlight(3);
     const fields = { club: SLUG, bookingId, ...continuing(1.2) };
     const k = key();
-    const first = await checkInBooking(EMPTY, form({ ...fields, idempotencyKey: k }));
+    const first = await closeFlightSheet(EMPTY, form({ ...fields, idempotencyKey: k }));
     expect(first, first.message).toMatchObject({ ok: true });
     const { flightId } = first.data as { flightId: string };
     expect(chargesOf(flightId)).toHaveLength(1);
     const counts = { flights: db().select().from(flights).all().length, entries: db().select().from(journalEntries).all().length };
-    const replay = await checkInBooking(EMPTY, form({ ...fields, idempotencyKey: k }));
+    const replay = await closeFlightSheet(EMPTY, form({ ...fields, idempotencyKey: k }));
     expect(replay).toEqual(first);
-    const second = await checkInBooking(EMPTY, form({ ...fields, idempotencyKey: key() }));
-    expect(second.message).toMatch(/already checked in/);
+    const second = await closeFlightSheet(EMPTY, form({ ...fields, idempotencyKey: key() }));
+    expect(second.message).toMatch(/already closed/);
     expect({ flights: db().select().from(flights).all().length, entries: db().select().from(journalEntries).all().length }).toEqual(counts);
     expect(db().select().from(flights).where(eq(flights.id, flightId)).get()!.bookingId).toBe(bookingId);
   });
 
   it("a flight out on a booking cannot also be entered in the flight log", async () => {
-    const bookingId = await dispatchedBooking(4);
+    const bookingId = await bookingInFlight(4);
     const club = clubBySlug(SLUG);
     const before = db().select().from(journalEntries).all().length;
     const state = await logFlight(EMPTY, form({ club: SLUG, aircraftId: plane().id, flownOn: isoDateInTimeZone(new Date(), club.timeZone), ...continuing(1.0), idempotencyKey: key() }));
     expect(state.ok).toBe(false);
-    expect(state.message).toMatch(/check the booking in instead/);
+    expect(state.message).toMatch(/close the booking.s flight sheet instead/);
     expect(db().select().from(journalEntries).all().length).toBe(before);
-    // Checked in on the booking instead: one flight, one charge.
-    const done = await checkInBooking(EMPTY, form({ club: SLUG, bookingId, ...continuing(1.0), idempotencyKey: key() }));
+    // Closed on the booking's flight sheet instead: one flight, one charge.
+    const done = await closeFlightSheet(EMPTY, form({ club: SLUG, bookingId, ...continuing(1.0), idempotencyKey: key() }));
     expect(done, done.message).toMatchObject({ ok: true });
     expect(chargesOf((done.data as { flightId: string }).flightId)).toHaveLength(1);
   });
 
-  it("check-in flags a mismatch with the aircraft's last in reading on THIS flight and needs an explanation before it closes", async () => {
-    const bookingId = await dispatchedBooking(5);
+  it("the flight sheet flags a mismatch with the aircraft's last in reading on THIS flight and needs an explanation before it closes", async () => {
+    const bookingId = await bookingInFlight(5);
     const p = plane();
     // The previous pilot came in at currentHobbs; this one says the meter read 0.7 h more.
     const fields = {
@@ -152,7 +152,7 @@ describe("every flight is charged once, through one write path", () => {
       tachOut: p.currentTach!.toFixed(1), tachIn: (p.currentTach! + 1.0).toFixed(1), dayLandings: "2", nightFullStopLandings: "0", fuelAdded: "0", oilAdded: "0",
     };
     const before = { flights: db().select().from(flights).all().length, entries: db().select().from(journalEntries).all().length };
-    const refused = await checkInBooking(EMPTY, form({ ...fields, idempotencyKey: key() }));
+    const refused = await closeFlightSheet(EMPTY, form({ ...fields, idempotencyKey: key() }));
     expect(refused.ok).toBe(false);
     // 0.7 h between the previous Hobbs in and this Hobbs out (arithmetic).
     expect(refused.fieldErrors.hobbsOut?.[0]).toMatch(/0\.7 h not logged/);
@@ -160,7 +160,7 @@ describe("every flight is charged once, through one write path", () => {
     expect({ flights: db().select().from(flights).all().length, entries: db().select().from(journalEntries).all().length }).toEqual(before);
     expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!.status).toBe("dispatched");
 
-    const explained = await checkInBooking(EMPTY, form({ ...fields, meterExplanation: "The Hobbs read this when I untied the aircraft", idempotencyKey: key() }));
+    const explained = await closeFlightSheet(EMPTY, form({ ...fields, meterExplanation: "The Hobbs read this when I untied the aircraft", idempotencyKey: key() }));
     expect(explained, explained.message).toMatchObject({ ok: true, data: { continuity: "gap" } });
     const { flightId } = explained.data as { flightId: string };
     const row = db().select().from(flights).where(eq(flights.id, flightId)).get()!;

@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { auditLog, bookings, memberDocuments, outsideFlightEntries, preflightRecords, uploads, users } from "@/db/schema";
 import { getMemberCurrency } from "@/db/queries/currency";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
-import { dispatchBooking } from "@/lib/actions/bookings/dispatch-booking";
+import { beginFlight } from "@/lib/actions/bookings/begin-flight";
 import { updateHomePosition } from "@/lib/actions/clubs/update-home-position";
 import { recordDocument } from "@/lib/actions/documents/record-document";
 import { recordOutsideFlight } from "@/lib/actions/documents/record-outside-flight";
@@ -14,7 +14,7 @@ import { localAt, makePilot, planeId, seedScenario } from "./bookings-helpers";
 import { pngFile } from "./fleet-helpers";
 
 // Night passenger currency (14 CFR 61.57(b)), the flight review refusal (61.56(c)), the
-// limitation of a deferred item (91.213(d)) at booking and dispatch, and claims vs proof.
+// limitation of a deferred item (91.213(d)) at booking and when the flight begins, and claims vs proof.
 
 const SLUG = "lakeshore-aero";
 const today = () => isoDateInTimeZone(new Date(), clubBySlug(SLUG).timeZone);
@@ -86,7 +86,7 @@ describe("rules before the pilot: night, flight review, limitations, claims", ()
     expect(dual, dual.message).toMatchObject({ ok: true });
   });
 
-  it("a limitation is quoted at booking, kept with it, and must be ticked again at dispatch", async () => {
+  it("a limitation is quoted at booking, kept with it, and must be ticked again when the flight begins", async () => {
     const warned = await book("daytime@example.test", "N0527L", NOON);
     expect(warned.fieldErrors.warningGuards).toEqual(["limitations"]);
     expect(warned.fieldErrors.warnings?.[0]).toContain("“Deferred, placarded inoperative (14 CFR 91.213(d)): Left landing light inoperative. Limitation: No night flight until the left landing light is repaired”");
@@ -97,15 +97,15 @@ describe("rules before the pilot: night, flight review, limitations, claims", ()
     const bookingId = (made.data as { bookingId: string }).bookingId;
     expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!.acceptedWarnings.map((w) => w.guard)).toEqual(["limitations"]);
     const [record] = db().insert(preflightRecords).values({ clubId: club.id, bookingId, aircraftId: planeId(SLUG, "N0527L"), userId: userId("daytime@example.test"), fuel: [], fuelUnit: "gal", sumps: [], oilQuantity: 6, oilMinimum: 4, oilUnit: "qt", outcome: "ok" }).returning().all();
-    const without = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: record!.id, confirmPreflight: "on", acceptFindings: "on" }));
+    const without = await beginFlight(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: record!.id, confirmPreflight: "on", acceptFindings: "on" }));
     expect(without.ok).toBe(false);
-    expect(without.message).toBe("Not dispatched: N0527L flies with limits. Read each limitation and tick that you will fly within it.");
+    expect(without.message).toBe("Flight not begun: N0527L flies with limits. Read each limitation and tick that you will fly within it.");
     expect(without.fieldErrors.acceptLimitations).toEqual(["Deferred, placarded inoperative (14 CFR 91.213(d)): Left landing light inoperative. Limitation: No night flight until the left landing light is repaired"]);
     expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!.status).toBe("reserved");
-    const ticked = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: record!.id, confirmPreflight: "on", acceptLimitations: "on" }));
+    const ticked = await beginFlight(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: record!.id, confirmPreflight: "on", acceptLimitations: "on" }));
     expect(ticked, ticked.message).toMatchObject({ ok: true });
     expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!.status).toBe("dispatched");
-    const audit = db().select().from(auditLog).where(and(eq(auditLog.subjectId, bookingId), eq(auditLog.action, "booking.dispatch"))).get()!;
+    const audit = db().select().from(auditLog).where(and(eq(auditLog.subjectId, bookingId), eq(auditLog.action, "booking.flight.begin"))).get()!;
     expect((audit.after as { limitationsAccepted: string[] }).limitationsAccepted).toHaveLength(1);
   });
 

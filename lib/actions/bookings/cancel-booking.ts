@@ -16,7 +16,7 @@ export const cancelBooking = clubAction({
     if (!booking) throw new ActionError("That booking was not found in this club.", {}, "not_found");
     if (!canOn(ability, "update", "Booking", { userId: booking.userId })) throw new ActionError("Only the member who booked, or an instructor, can cancel this booking.", {}, "forbidden");
     if (booking.status === "cancelled") return { message: "This booking was already cancelled." };
-    if (booking.status !== "reserved") throw new ActionError("The aircraft is already out on this booking; check in instead of cancelling.", {}, "conflict");
+    if (booking.status !== "reserved") throw new ActionError("The aircraft is already out on this booking; close its flight sheet instead of cancelling.", {}, "conflict");
     const now = new Date();
     const late = lateCancellation(booking.startsAt, now, club.settings.lateCancellationHours);
     updateBookingRow(tx, club.id, booking.id, { status: "cancelled", cancelledAt: now, cancelledById: user.id, cancelReason: input.reason, lateCancel: booking.lateCancel || late.late });

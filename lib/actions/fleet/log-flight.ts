@@ -2,7 +2,7 @@
 import { and, eq } from "drizzle-orm";
 import { memberships } from "@/db/schema";
 import { getAircraft } from "@/db/queries/fleet";
-import { openDispatchedBooking, recordFlight, type RecordedFlight } from "@/db/queries/flight-record";
+import { openFlightBooking, recordFlight, type RecordedFlight } from "@/db/queries/flight-record";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { asFlightActionError } from "@/lib/actions/bookings/flight-entry";
@@ -12,10 +12,10 @@ import { writeAudit } from "@/lib/server/audit";
 import { logFlightSchema } from "@/lib/validation/fleet";
 import { can } from "@/permissions";
 
-// A flight entered without a booking goes through the same write path as check-in
+// A flight entered without a booking goes through the same write path as a booking's flight sheet
 // (recordFlight in db/queries/flight-record.ts): one transaction writes the flight, its
 // continuity flag, the aircraft's meters, the squawk and the pilot's charge at the aircraft's
-// rate. A flight that belongs to a booking still out is refused here: it is checked in on the
+// rate. A flight that belongs to a booking still out is refused here: its flight sheet is closed on the
 // booking, so it is logged and charged once.
 export const logFlight = clubAction({
   schema: logFlightSchema,
@@ -34,8 +34,8 @@ export const logFlight = clubAction({
     if (input.flownOn > isoDateInTimeZone(new Date(), club.timeZone)) {
       throw new ActionError("Some fields need attention; nothing was saved.", { flownOn: ["The date cannot be in the future."] });
     }
-    if (openDispatchedBooking(tx, club.id, plane.id, pilotId)) {
-      throw new ActionError("This aircraft is out on a booking of this pilot: check the booking in instead, so the flight is logged and charged once. Nothing was saved.", {}, "conflict");
+    if (openFlightBooking(tx, club.id, plane.id, pilotId)) {
+      throw new ActionError("This aircraft is out on a booking of this pilot: close the booking's flight sheet instead, so the flight is logged and charged once. Nothing was saved.", {}, "conflict");
     }
 
     let entry: RecordedFlight;

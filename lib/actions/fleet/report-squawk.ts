@@ -1,7 +1,6 @@
 "use server";
-import { squawks } from "@/db/schema";
 import { getAircraft } from "@/db/queries/fleet";
-import { listSquawkAlertRecipients, recordSquawkEvent } from "@/db/queries/fleet-squawks";
+import { createSquawk, listSquawkAlertRecipients } from "@/db/queries/fleet-squawks";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { enqueueEmails } from "@/lib/email/outbox";
@@ -32,12 +31,12 @@ export const reportSquawk = clubAction({
     return withStoredFiles(stored, () => {
       const plane = getAircraft(tx, club.id, input.aircraftId);
       if (!plane || plane.retiredAt) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
-      const [row] = tx
-        .insert(squawks)
-        .values({ clubId: club.id, aircraftId: plane.id, reportedById: user.id, description: input.description, foundDuring: input.foundDuring, suspectedGrounding: input.suspectedGrounding })
-        .returning({ id: squawks.id })
-        .all();
-      recordSquawkEvent(tx, { clubId: club.id, squawkId: row!.id, kind: "reported", actorId: user.id, toTriage: "untriaged", note: input.suspectedGrounding ? "Reported as possibly affecting airworthiness." : null });
+      const row = {
+        id: createSquawk(tx, {
+          clubId: club.id, aircraftId: plane.id, reportedById: user.id, description: input.description, foundDuring: input.foundDuring, suspectedGrounding: input.suspectedGrounding,
+          note: input.suspectedGrounding ? "Reported as possibly affecting airworthiness." : null,
+        }),
+      };
       insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: row!.id, uploadedById: user.id }, stored);
       let maintenance = 0;
       let booking = 0;

@@ -1,13 +1,12 @@
 "use server";
-import { preflightRecordItems, preflightRecords, squawks } from "@/db/schema";
-import { recordSquawkEvent } from "@/db/queries/fleet-squawks";
-import { getPreflightTemplate } from "@/db/queries/tools-preflight";
-import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
+import { preflightRecordItems, preflightRecords } from "@/db/schema";
+import { createSquawk } from "@/db/queries/fleet-squawks";
+import { getPreflightTemplate, preflightTanks } from "@/db/queries/tools-preflight";
 import { loadBookingForParty } from "@/lib/actions/bookings/booking-access";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles, type StoredFile } from "@/lib/actions/fleet/files";
-import { evaluatePreflight } from "@/lib/bookings/preflight-outcome";
+import { evaluatePreflight, findingDescription, fuelAboveCapacity } from "@/lib/bookings/preflight-outcome";
 import { writeAudit } from "@/lib/server/audit";
 import { IMAGE_TYPES } from "@/lib/storage";
 import { preflightRecordSchema } from "@/lib/validation/tools";
@@ -40,7 +39,7 @@ export const recordPreflight = clubAction({
     return withStoredFiles(all, () => {
       const { club, user } = ctx;
       const booking = loadBookingForParty(tx, ctx, input.bookingId);
-      if (booking.status !== "reserved" && booking.status !== "dispatched") throw new ActionError(`This booking is ${booking.status.replace("_", " ")}; a preflight can no longer be recorded on it.`, {}, "conflict");
+      if (booking.status !== "reserved" && booking.status !== "dispatched") throw new ActionError(`This booking is ${booking.status === "checked_in" ? "flown and its flight sheet closed" : "cancelled"}; a preflight can no longer be recorded on it.`, {}, "conflict");
       const template = getPreflightTemplate(tx, club.id, booking.aircraftId);
       if (!template) throw new ActionError("This aircraft has no preflight checklist yet; ask maintenance to set one up.", {}, "not_found");
 
@@ -48,13 +47,17 @@ export const recordPreflight = clubAction({
       for (const item of template.items) if (!input.items[item.id]) errors[`items.${item.id}.result`] = ["Mark this item OK or a finding."];
       for (const itemId of Object.keys(input.items)) if (!template.items.some((i) => i.id === itemId)) errors._form = ["The checklist changed while you were filling it in; reload the page."];
       if (input.sumps.length !== template.sumpPoints.length || input.sumps.some((s, i) => s.point !== template.sumpPoints[i])) errors.sumps = ["Record a result for every fuel drain point."];
-      const profile = getWeightBalanceProfile(tx, club.id, booking.aircraftId);
-      const tanks = profile?.tanks.map((t) => ({ name: t.name, capacity: t.usableCapacity })) ?? [{ name: "Fuel on board", capacity: null }];
+      const tanks = preflightTanks(tx, club.id, template, booking.aircraftId);
       if (input.fuelTank.length !== tanks.length || input.fuelQuantity.length !== tanks.length || input.fuelTank.some((t, i) => t !== tanks[i]!.name)) errors.fuelQuantity = ["Enter the fuel in every tank."];
       if (Object.keys(errors).length) throw new ActionError(INVALID, errors);
 
       const metric = club.unitSystem === "metric";
       const fuel = tanks.map((t, i) => ({ tank: t.name, quantity: input.fuelQuantity[i] ?? 0, capacity: t.capacity }));
+      // More than a tank holds is a misread, not a finding: refused, naming the tank.
+      const overfull = fuelAboveCapacity(fuel, metric ? "L" : "US gal");
+      if (overfull.length) {
+        throw new ActionError(`${overfull.map((o) => o.message).join(" ")} Nothing was saved.`, Object.fromEntries(overfull.map((o) => [`fuelQuantity.${o.index}`, [o.message]])));
+      }
       const itemResults = template.items.map((t) => ({ template: t, ...input.items[t.id]! }));
       const outcome = evaluatePreflight({
         items: itemResults.map((r) => ({ section: r.template.section, label: r.template.label, kind: r.template.kind, result: r.result, note: r.note })),
@@ -81,15 +84,11 @@ export const recordPreflight = clubAction({
       for (const r of itemResults) {
         let squawkId: string | null = null;
         if (r.result === "finding") {
-          const prefix = r.template.kind === "document" ? `Not aboard: ${r.template.label}` : `${r.template.section} — ${r.template.label}`;
-          const [sq] = tx
-            .insert(squawks)
-            .values({ clubId: club.id, aircraftId: booking.aircraftId, reportedById: user.id, description: `${prefix}: ${r.note}`, foundDuring: "preflight", suspectedGrounding: r.grounding })
-            .returning({ id: squawks.id })
-            .all();
-          squawkId = sq!.id;
+          squawkId = createSquawk(tx, {
+            clubId: club.id, aircraftId: booking.aircraftId, reportedById: user.id, description: findingDescription(r.template, r.note), foundDuring: "preflight", suspectedGrounding: r.grounding,
+            note: "Found during the preflight of a booking.",
+          });
           squawkIds.push(squawkId);
-          recordSquawkEvent(tx, { clubId: club.id, squawkId, kind: "reported", actorId: user.id, toTriage: "untriaged", note: "Found during the preflight of a booking." });
           insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: squawkId, uploadedById: user.id }, stored.get(r.template.id) ?? []);
         }
         tx.insert(preflightRecordItems)
@@ -98,7 +97,7 @@ export const recordPreflight = clubAction({
       }
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "preflight.record", subjectType: "Booking", subjectId: booking.id, after: { recordId: record!.id, outcome: outcome.outcome, findings: outcome.findings, squawkIds } });
       const message = outcome.outcome === "ok"
-        ? "Preflight recorded: everything OK. You can dispatch the booking."
+        ? "Preflight recorded: everything as expected. You can begin the flight."
         : `Preflight recorded with ${outcome.findings.length} finding${outcome.findings.length === 1 ? "" : "s"}${squawkIds.length ? `; ${squawkIds.length} reported as squawk${squawkIds.length === 1 ? "" : "s"} for maintenance` : ""}.`;
       return { message, data: { recordId: record!.id, squawkIds, findings: outcome.findings }, refresh: true };
     });

@@ -15,12 +15,14 @@ export const savePreflightTemplateAction = clubAction({
   run(tx, { club, user }, input) {
     const plane = getAircraft(tx, club.id, input.aircraftId);
     if (!plane || plane.retiredAt) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
+    // Documents are checked in the cabin when the checklist has one: one group fewer to tap.
+    const cabin = input.checklist.find((i) => i.section.toLowerCase() === "cabin")?.section;
     const items = [
-      ...input.documents.map((label) => ({ section: "Documents aboard", label, kind: "document" as const })),
+      ...input.documents.map((label) => ({ section: cabin ?? "Documents aboard", label, kind: "document" as const })),
       ...input.checklist.map((i) => ({ ...i, kind: "check" as const })),
     ];
-    const templateId = savePreflightTemplate(tx, club.id, plane.id, { oilMinimum: input.oilMinimum, oilMaximum: input.oilMaximum, sumpPoints: input.sumpPoints, items, updatedById: user.id });
-    writeAudit(tx, { clubId: club.id, actorId: user.id, action: "preflight.template.update", subjectType: "Aircraft", subjectId: plane.id, after: { templateId, items: items.length, oilMinimum: input.oilMinimum, sumpPoints: input.sumpPoints } });
+    const templateId = savePreflightTemplate(tx, club.id, plane.id, { oilMinimum: input.oilMinimum, oilMaximum: input.oilMaximum, sumpPoints: input.sumpPoints, fuelTanks: input.fuelTanks, items, updatedById: user.id });
+    writeAudit(tx, { clubId: club.id, actorId: user.id, action: "preflight.template.update", subjectType: "Aircraft", subjectId: plane.id, after: { templateId, items: items.length, oilMinimum: input.oilMinimum, sumpPoints: input.sumpPoints, fuelTanks: input.fuelTanks } });
     return { data: { templateId }, refresh: true };
   },
 });

@@ -15,7 +15,7 @@ export const saveLoading = clubAction({
   run(tx, ctx, input) {
     const { club, user } = ctx;
     const booking = loadBookingForParty(tx, ctx, input.bookingId);
-    if (booking.status === "cancelled" || booking.status === "checked_in") throw new ActionError(`This booking is ${booking.status === "cancelled" ? "cancelled" : "checked in"}; its weight and balance is kept as it was.`, {}, "conflict");
+    if (booking.status === "cancelled" || booking.status === "checked_in") throw new ActionError(`This booking is ${booking.status === "cancelled" ? "cancelled" : "flown and its flight sheet closed"}; its weight and balance is kept as it was.`, {}, "conflict");
     const profile = getWeightBalanceProfile(tx, club.id, booking.aircraftId);
     if (!profile) throw new ActionError("This aircraft has no weight and balance figures yet; ask maintenance to enter them.", {}, "not_found");
     const stationWeights: Record<string, number> = {};

@@ -5,14 +5,14 @@ import { aircraft, changeItem, currentItems, IFR_TRAINER, TODAY, VFR_PRIVATE } f
 // Source for every check: 14 CFR 91.409(b) counts the 100-hour in hours of time in service; which
 // meter stands for it is the club's choice (common practice). A due point read on one meter says
 // nothing about the other (they run at different rates, common practice), so a completion read on
-// the other meter cannot be placed: "Check status", never flyable.
+// the other meter cannot be placed: "Status unknown", never flyable.
 
 const hundredOnly = (completions: Completion[]): InspectionItem[] =>
   changeItem(currentItems(IFR_TRAINER), "100-hour", { completions }).filter((i) => i.key === "100-hour" || i.key === "annual")
     .map((i) => (i.key === "annual" ? { ...i, completions: [{ date: "2025-06-06", hours: 985, meter: "hobbs" as const }] } : i));
 
 describe("meter provenance: a completion read on another meter", () => {
-  it("turns an overdue 100-hour into 'Check status', never 'flyable', after a switch to tach", () => {
+  it("turns an overdue 100-hour into 'Status unknown', never 'flyable', after a switch to tach", () => {
     // 14 CFR 91.409(b): on the Hobbs it is overdue (due 1120.0, Hobbs now 1125.0)
     const items = hundredOnly([{ date: "2026-03-02", hours: 1020, meter: "hobbs" }]);
     expect(aircraftStatus(aircraft(IFR_TRAINER, { items, meter: "hobbs" }), TODAY, 1125).status).toBe("grounded");

@@ -1,7 +1,7 @@
 // Sources: billing meter time (Hobbs or tach) × hourly rate is common practice for flying clubs
 // (from memory); rounding half away from zero per REFERENCES.md. Values are own arithmetic.
 import { describe, expect, it } from "vitest";
-import { flightCharge, meterTimeCharge } from "@/lib/money";
+import { flightCharge, meterTimeCharge, previewFlightCharge } from "@/lib/money";
 
 // Flight charge = (meterIn − meterOut) h × rate, half away from zero, minus the fuel credit.
 // Expected values are our own arithmetic on that rule.
@@ -40,5 +40,20 @@ describe("flightCharge", () => {
     expect(() => flightCharge({ meterOut: 100, meterIn: 101, ratePerHourMinor: 14500, fuelCreditMinor: -1 })).toThrow(
       RangeError,
     );
+  });
+});
+
+describe("previewFlightCharge (the flight sheet's live figure)", () => {
+  it("is the same figure the server posts, once both readings are typed", () => {
+    // 1.2 h × $145.00 = $174.00 (common practice: meter hours × the hourly rate).
+    expect(previewFlightCharge("1233.5", "1234.7", 14_500, "Hobbs")).toEqual({ ok: true, hours: 1.2, chargeMinor: 17_400 });
+    expect(previewFlightCharge("1233.5", "1234.7", 14_500, "Hobbs")).toEqual({ ok: true, hours: 1.2, chargeMinor: meterTimeCharge(1233.5, 1234.7, 14_500) });
+  });
+  it("says what is missing instead of throwing while the pilot types", () => {
+    expect(previewFlightCharge("1233.5", "", 14_500, "Hobbs")).toEqual({ ok: false, reason: "Enter Hobbs in to see the charge." });
+    expect(previewFlightCharge("", "1", 14_500, "Tach")).toEqual({ ok: false, reason: "Enter Tach out to see the charge." });
+    expect(previewFlightCharge("1233.5", "1233.", 14_500, "Hobbs")).toEqual({ ok: false, reason: "Enter Hobbs in to see the charge." });
+    // A meter never runs backwards (common practice).
+    expect(previewFlightCharge("1233.5", "1230.0", 14_500, "Hobbs")).toEqual({ ok: false, reason: "Hobbs in is below Hobbs out." });
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { z } from "zod";
-import { checkInSchema, createBookingSchema } from "@/lib/validation/bookings";
+import { createBookingSchema, flightSheetSchema } from "@/lib/validation/bookings";
 import { preflightRecordSchema, preflightTemplateSchema, weightBalanceProfileSchema } from "@/lib/validation/tools";
 
 // Same shape as the action wrapper's field errors: "path.joined" → messages.
@@ -23,11 +23,11 @@ describe("booking schemas", () => {
     expect(e["acceptedGuards.0"]?.[0]).toBe("Unknown warning.");
     expect(errorsOf(createBookingSchema.safeParse({ aircraftId: "a", startsAt: "2026-05-04T11:00", endsAt: "2026-05-04T09:00" })).endsAt?.[0]).toBe("The end must be after the start.");
   });
-  it("check-in: meters forward, at least one landing", () => {
-    const e = errorsOf(checkInSchema.safeParse({ bookingId: "b", hobbsOut: "100.0", hobbsIn: "99.0", tachOut: "abc", tachIn: "1", dayLandings: "0" }));
+  it("flight sheet: meters forward, at least one landing", () => {
+    const e = errorsOf(flightSheetSchema.safeParse({ bookingId: "b", hobbsOut: "100.0", hobbsIn: "99.0", tachOut: "abc", tachIn: "1", dayLandings: "0" }));
     expect(e.hobbsIn?.[0]).toBe("Hobbs in cannot be less than Hobbs out.");
     expect(e.tachOut?.[0]).toMatch(/as hours/);
-    const landings = errorsOf(checkInSchema.safeParse({ bookingId: "b", hobbsOut: "100.0", hobbsIn: "101.0", tachOut: "80", tachIn: "81", dayLandings: "0" }));
+    const landings = errorsOf(flightSheetSchema.safeParse({ bookingId: "b", hobbsOut: "100.0", hobbsIn: "101.0", tachOut: "80", tachIn: "81", dayLandings: "0" }));
     expect(landings.dayLandings?.[0]).toBe("Enter the landings: at least one, day or night.");
   });
 });
@@ -52,9 +52,18 @@ describe("tools schemas", () => {
     expect(e.checklist?.[0]).toMatch(/^Line 1: write "Section: item"/);
     expect(e.sumpPoints?.[0]).toBe("Enter at least one fuel drain point.");
   });
-  it("gathers the record form's per-item fields, and a finding needs words", () => {
+  it("fuel tanks are 'name | capacity' lines, each named once", () => {
+    const base = { aircraftId: "a", documents: "", checklist: "Nose: prop", sumpPoints: "Left", oilMinimum: "5" };
+    expect(errorsOf(preflightTemplateSchema.safeParse({ ...base, fuelTanks: "Left | 20\nleft | 20" })).fuelTanks?.[0]).toBe('Line 2: "left" is listed twice; give each tank its own name.');
+    expect(errorsOf(preflightTemplateSchema.safeParse({ ...base, fuelTanks: "Left | 0" })).fuelTanks?.[0]).toMatch(/^Line 1: write "Tank name \| usable capacity"/);
+    expect(preflightTemplateSchema.parse({ ...base, fuelTanks: "Left | 20\nRight | 19.5" }).fuelTanks).toEqual([{ name: "Left", capacity: 20 }, { name: "Right", capacity: 19.5 }]);
+    expect(preflightTemplateSchema.parse(base).fuelTanks).toEqual([]);
+  });
+  it("gathers the record form's per-item fields; a finding is one tap, its words optional but not a scrap", () => {
     const r = preflightRecordSchema.safeParse({ bookingId: "b", "result.i1": "ok", "result.i2": "finding", "note.i2": "bad", sumpPoint: ["Left"], "sump.0": "clear", fuelTank: ["Wings"], fuelQuantity: ["30"], oilQuantity: "6" });
-    expect(errorsOf(r)["items.i2.note"]?.[0]).toMatch(/it becomes a squawk/);
+    expect(errorsOf(r)["items.i2.note"]?.[0]).toMatch(/or leave it empty/);
+    const tapped = preflightRecordSchema.parse({ bookingId: "b", "result.i2": "finding", sumpPoint: ["Left"], "sump.0": "clear", fuelTank: ["Wings"], fuelQuantity: ["30"], oilQuantity: "6" });
+    expect(tapped.items.i2).toEqual({ result: "finding", note: null, grounding: false, photos: [] });
     const ok = preflightRecordSchema.parse({ bookingId: "b", "result.i1": "ok", sumpPoint: "Left", "sump.0": "contaminated", fuelTank: "Wings", fuelQuantity: "30", oilQuantity: "6" });
     expect(ok.items).toEqual({ i1: { result: "ok", note: null, grounding: false, photos: [] } });
     expect(ok.sumps).toEqual([{ point: "Left", result: "contaminated" }]);

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { notFound } from "next/navigation";
-import { CancelBookingForm, ChangeBookingForm, DispatchForm } from "@/components/bookings/booking-actions";
+import { BeginFlightForm, CancelBookingForm, ChangeBookingForm } from "@/components/bookings/booking-actions";
 import { limitationTexts } from "@/lib/bookings/guards";
 import { BOOKING_STATUS_MARK, BOOKING_STATUS_WORDS, dayHeading, localInputValue } from "@/components/bookings/booking-words";
 import { buttonClass } from "@/components/ui/button";
@@ -86,24 +86,24 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
             <Link className={buttonClass("secondary")} href={`${base}/weight-balance`}>{loading ? "Review weight and balance" : "Work out weight and balance"}</Link>
           </Step>
           <Step n={2} title="Preflight" done={records.length > 0}>
-            <p className="mb-2 text-sm">{records[0] ? (records[0].outcome === "ok" ? "Recorded: everything OK." : `Recorded with ${records[0].findingCount} finding${records[0].findingCount === 1 ? "" : "s"}.`) : "Not recorded yet."}</p>
+            <p className="mb-2 text-sm">{records[0] ? (records[0].outcome === "ok" ? "Recorded: everything as expected." : `Recorded with ${records[0].findingCount} finding${records[0].findingCount === 1 ? "" : "s"}.`) : "Not recorded yet."}</p>
             {open ? <Link className={buttonClass("secondary")} href={`${base}/preflight`}>{records.length ? "Record it again" : "Record the preflight"}</Link> : null}
           </Step>
-          <Step n={3} title="Dispatch" done={booking.status !== "reserved"}>
+          <Step n={3} title="Begin flight" done={booking.status !== "reserved"}>
             {booking.status === "reserved" ? (
               records.length ? (
-                <DispatchForm slug={club.slug} bookingId={booking.id} limitations={status ? limitationTexts(status.reasons) : []} records={records.map((r) => ({ id: r.id, label: `${formatLocalTime(r.createdAt, tz)} — ${r.outcome === "ok" ? "all OK" : `${r.findingCount} finding(s)`}` }))} />
+                <BeginFlightForm slug={club.slug} bookingId={booking.id} limitations={status ? limitationTexts(status.reasons) : []} records={records.map((r) => ({ id: r.id, label: `${formatLocalTime(r.createdAt, tz)} — ${r.outcome === "ok" ? "all as expected" : `${r.findingCount} finding(s)`}` }))} />
               ) : (
-                <p className="text-sm">Record the preflight first; dispatch confirms it.</p>
+                <p className="text-sm">Record the preflight first; beginning the flight confirms it.</p>
               )
             ) : (
-              <p className="text-sm">Dispatched {booking.dispatchedAt ? formatLocalTime(booking.dispatchedAt, tz) : ""}.</p>
+              <p className="text-sm">Flight begun {booking.dispatchedAt ? formatLocalTime(booking.dispatchedAt, tz) : ""}.</p>
             )}
           </Step>
-          <Step n={4} title="Check in" done={booking.status === "checked_in"}>
-            {booking.status === "dispatched" ? <Link className={buttonClass("primary")} href={`${base}/check-in`}>Check in</Link> : null}
-            {booking.status === "checked_in" ? <p className="text-sm">Checked in {booking.checkedInAt ? formatLocalTime(booking.checkedInAt, tz) : ""}; the flight is in the log.</p> : null}
-            {booking.status === "reserved" ? <p className="text-sm">After the flight: meters, landings, fuel, oil and squawks.</p> : null}
+          <Step n={4} title="Flight sheet" done={booking.status === "checked_in"}>
+            {booking.status === "dispatched" ? <Link className={buttonClass("primary")} href={`${base}/flight-sheet`}>Close the flight sheet</Link> : null}
+            {booking.status === "checked_in" ? <p className="text-sm">Flight sheet closed {booking.checkedInAt ? formatLocalTime(booking.checkedInAt, tz) : ""}; the flight is in the log.</p> : null}
+            {booking.status === "reserved" ? <p className="text-sm">After the flight: the flight sheet, Out and In — meters, fuel, time, landings and squawks.</p> : null}
           </Step>
         </ol>
       ) : null}

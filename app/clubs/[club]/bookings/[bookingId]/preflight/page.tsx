@@ -8,8 +8,7 @@ import { SafetyCaution } from "@/components/ui/safety-caution";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { getBooking } from "@/db/queries/bookings";
 import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
-import { getPreflightRecord, getPreflightTemplate, listPreflightRecords } from "@/db/queries/tools-preflight";
-import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
+import { getPreflightRecord, getPreflightTemplate, listPreflightRecords, preflightTanks } from "@/db/queries/tools-preflight";
 import { mayActOnBooking } from "@/lib/actions/bookings/booking-access";
 import { formatLocalTime } from "@/lib/fleet/time";
 import { authorizePage } from "@/lib/server/authorize";
@@ -24,7 +23,7 @@ export default async function PreflightPage({ params }: { params: Promise<{ club
   const booking = getBooking(db, club.id, bookingId);
   if (!booking || !mayActOnBooking(ctx, booking)) notFound();
   const template = getPreflightTemplate(db, club.id, booking.aircraftId);
-  const profile = getWeightBalanceProfile(db, club.id, booking.aircraftId);
+  const tanks = preflightTanks(db, club.id, template, booking.aircraftId);
   const status = getAircraftStatusEntry(db, club, booking.aircraftId);
   const records = listPreflightRecords(db, club.id, booking.id).slice(0, 3).map((r) => getPreflightRecord(db, club.id, r.id)!);
   const metric = club.unitSystem === "metric";
@@ -45,7 +44,7 @@ export default async function PreflightPage({ params }: { params: Promise<{ club
             slug={club.slug}
             bookingId={booking.id}
             items={template.items.map((i) => ({ id: i.id, section: i.section, label: i.label, kind: i.kind }))}
-            tanks={profile?.tanks.map((t) => ({ name: t.name, capacity: t.usableCapacity })) ?? [{ name: "Fuel on board", capacity: null }]}
+            tanks={tanks}
             sumpPoints={template.sumpPoints}
             oilMinimum={template.oilMinimum}
             oilMaximum={template.oilMaximum}
@@ -61,7 +60,7 @@ export default async function PreflightPage({ params }: { params: Promise<{ club
           <ul className="divide-y divide-sand-200">
             {records.map((r) => (
               <li key={r.id} className="py-2 text-sm">
-                <p className="font-bold">{formatLocalTime(r.createdAt, club.timeZone)} — {r.outcome === "ok" ? "● All OK" : `▲ ${r.findingCount} finding${r.findingCount === 1 ? "" : "s"}`}</p>
+                <p className="font-bold">{formatLocalTime(r.createdAt, club.timeZone)} — {r.outcome === "ok" ? "● All as expected" : `▲ ${r.findingCount} finding${r.findingCount === 1 ? "" : "s"}`}</p>
                 <p>Fuel: {r.fuel.map((f) => `${f.tank} ${f.quantity}`).join(", ")} {metric ? "L" : "US gal"} · Oil {r.oilQuantity} {metric ? "L" : "qt"} (minimum {r.oilMinimum}) · Samples: {r.sumps.map((s) => `${s.point} ${s.result === "clear" ? "clear" : "water or sediment"}`).join(", ")}</p>
                 {r.items.filter((i) => i.result === "finding").map((i) => (
                   <p key={i.id}>Finding: {i.label}{i.note ? ` — ${i.note}` : ""}{i.squawkId ? " (reported as a squawk)" : ""}</p>

@@ -52,7 +52,9 @@ export default async function AircraftToolsSetupPage({ params }: { params: Promi
             slug={club.slug}
             aircraftId={plane.id}
             oilUnit={club.unitSystem === "metric" ? "L" : "qt"}
+            fuelUnit={club.unitSystem === "metric" ? "L" : "US gal"}
             defaults={{
+              fuelTanks: (t?.fuelTanks ?? []).map((k) => `${k.name} | ${k.capacity}`).join("\n"),
               documents: (t?.items ?? []).filter((i) => i.kind === "document").map((i) => i.label).join("\n"),
               checklist: (t?.items ?? []).filter((i) => i.kind === "check").map((i) => `${i.section}: ${i.label}`).join("\n"),
               sumpPoints: (t?.sumpPoints ?? []).join("\n"), oilMinimum: num(t?.oilMinimum), oilMaximum: num(t?.oilMaximum),

@@ -2,9 +2,9 @@ import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { aircraft, bookings, flights, journalEntries, preflightRecordItems, squawks, uploads } from "@/db/schema";
 import { getPreflightTemplate } from "@/db/queries/tools-preflight";
-import { checkInBooking } from "@/lib/actions/bookings/check-in-booking";
+import { closeFlightSheet } from "@/lib/actions/bookings/close-flight-sheet";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
-import { dispatchBooking } from "@/lib/actions/bookings/dispatch-booking";
+import { beginFlight } from "@/lib/actions/bookings/begin-flight";
 import { recordPreflight } from "@/lib/actions/preflight/record-preflight";
 import { saveLoading } from "@/lib/actions/tools/save-loading";
 import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
@@ -14,7 +14,7 @@ import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./booking
 const SLUG = "lakeshore-aero";
 const PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
 
-describe("weight and balance, preflight, dispatch and check-in on one booking", () => {
+describe("weight and balance, preflight, beginning the flight and its flight sheet on one booking", () => {
   let bookingId = "";
   let aircraftId = "";
 
@@ -48,7 +48,7 @@ describe("weight and balance, preflight, dispatch and check-in on one booking", 
     signInAs("member@hangarline.test");
     const club = clubBySlug(SLUG);
     const template = getPreflightTemplate(db(), club.id, aircraftId)!;
-    const fields: Record<string, string | string[] | Blob> = { club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Wing tanks"], fuelQuantity: ["40"] };
+    const fields: Record<string, string | string[] | Blob> = { club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Left wing tank", "Right wing tank"], fuelQuantity: ["20", "18"] };
     template.sumpPoints.forEach((_, i) => (fields[`sump.${i}`] = "clear"));
     for (const item of template.items) fields[`result.${item.id}`] = "ok";
     const tire = template.items.find((i) => i.label.includes("tire"))!;
@@ -58,7 +58,7 @@ describe("weight and balance, preflight, dispatch and check-in on one booking", 
     fd.append(`photos.${tire.id}`, new File([PNG], "tire.png", { type: "image/png" }));
 
     // Missing answers are named per item and nothing is written.
-    const partial = form({ club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Wing tanks"], fuelQuantity: ["40"] });
+    const partial = form({ club: SLUG, bookingId, oilQuantity: "6", sumpPoint: template.sumpPoints, fuelTank: ["Left wing tank", "Right wing tank"], fuelQuantity: ["20", "18"] });
     template.sumpPoints.forEach((_, i) => partial.append(`sump.${i}`, "clear"));
     const refused = await recordPreflight(EMPTY, partial);
     expect(refused.ok).toBe(false);
@@ -76,39 +76,43 @@ describe("weight and balance, preflight, dispatch and check-in on one booking", 
     expect(item.squawkId).toBe(squawk.id);
   });
 
-  it("dispatch confirms the record; its findings need the member's tick", async () => {
+  it("beginning the flight confirms the record; its findings need the member's tick", async () => {
     signInAs("member@hangarline.test");
     const recordId = db().select().from(preflightRecordItems).all().at(-1)!.recordId;
-    const unconfirmed = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId }));
+    const unconfirmed = await beginFlight(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId }));
     expect(unconfirmed.fieldErrors.confirmPreflight?.[0]).toMatch(/Confirm/);
     // N0527L flies with a deferred landing light (14 CFR 91.213(d)): its limitation first.
-    const limits = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptFindings: "on" }));
+    const limits = await beginFlight(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptFindings: "on" }));
     expect(limits.fieldErrors.acceptLimitations?.join(" ")).toMatch(/No night flight/);
-    const findings = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptLimitations: "on" }));
+    const findings = await beginFlight(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptLimitations: "on" }));
     expect(findings.fieldErrors.acceptFindings?.join(" ")).toMatch(/tire/);
-    const ok = await dispatchBooking(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptFindings: "on", acceptLimitations: "on" }));
+    const ok = await beginFlight(EMPTY, form({ club: SLUG, bookingId, preflightRecordId: recordId, confirmPreflight: "on", acceptFindings: "on", acceptLimitations: "on" }));
     expect(ok, ok.message).toMatchObject({ ok: true });
     expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!).toMatchObject({ status: "dispatched", preflightRecordId: recordId });
   });
 
-  it("check-in logs the flight, moves the meters and posts the charge once, even when sent twice", async () => {
+  it("closing the flight sheet logs the flight, moves the meters and posts the charge once, even when sent twice", async () => {
     signInAs("member@hangarline.test");
     const before = db().select().from(aircraft).where(eq(aircraft.id, aircraftId)).get()!;
     const hobbsOut = before.currentHobbs!;
     const tachOut = before.currentTach!;
-    const fields = { club: SLUG, bookingId, hobbsOut: hobbsOut.toFixed(1), hobbsIn: (hobbsOut + 1.3).toFixed(1), tachOut: tachOut.toFixed(1), tachIn: (tachOut + 1.1).toFixed(1), dayLandings: "3", fuelAdded: "10", oilAdded: "0" };
-    const first = await checkInBooking(EMPTY, form(fields));
+    const fields = { club: SLUG, bookingId, hobbsOut: hobbsOut.toFixed(1), hobbsIn: (hobbsOut + 1.3).toFixed(1), tachOut: tachOut.toFixed(1), tachIn: (tachOut + 1.1).toFixed(1), fuelOut: "38", fuelIn: "27.5", timeOut: "09:05", timeIn: "10:30", dayLandings: "3", fuelAdded: "10", oilAdded: "0" };
+    // A clock time that is not HH:MM is refused by name, and nothing is written.
+    const badTime = await closeFlightSheet(EMPTY, form({ ...fields, timeIn: "half past ten" }));
+    expect(badTime.ok).toBe(false);
+    expect(badTime.fieldErrors.timeIn?.[0]).toMatch(/HH:MM/);
+    const first = await closeFlightSheet(EMPTY, form(fields));
     expect(first, first.message).toMatchObject({ ok: true });
     const { flightId, chargeMinor } = first.data as { flightId: string; chargeMinor: number };
     // 1.3 Hobbs hours × $152.00 per hour (the seeded rate) = $197.60.
     expect(chargeMinor).toBe(19_760);
-    const again = await checkInBooking(EMPTY, form(fields));
+    const again = await closeFlightSheet(EMPTY, form(fields));
     expect(again.ok).toBe(true);
-    expect(again.message).toMatch(/already checked in/);
+    expect(again.message).toMatch(/already closed/);
 
     const logged = db().select().from(flights).where(eq(flights.id, flightId)).all();
     expect(logged).toHaveLength(1);
-    expect(logged[0]).toMatchObject({ aircraftId, hobbsOut, hobbsIn: Number((hobbsOut + 1.3).toFixed(1)), dayLandings: 3, fuelAdded: 10, continuity: "ok" });
+    expect(logged[0]).toMatchObject({ aircraftId, hobbsOut, hobbsIn: Number((hobbsOut + 1.3).toFixed(1)), dayLandings: 3, fuelAdded: 10, continuity: "ok", fuelOut: 38, fuelIn: 27.5, timeOut: "09:05", timeIn: "10:30" });
     const after = db().select().from(aircraft).where(eq(aircraft.id, aircraftId)).get()!;
     expect(after.currentHobbs).toBe(Number((hobbsOut + 1.3).toFixed(1)));
     expect(after.currentTach).toBe(Number((tachOut + 1.1).toFixed(1)));
@@ -117,13 +121,13 @@ describe("weight and balance, preflight, dispatch and check-in on one booking", 
     expect(db().select().from(bookings).where(eq(bookings.id, bookingId)).get()!).toMatchObject({ status: "checked_in", flightId });
   });
 
-  it("cannot check in a booking that was never dispatched", async () => {
+  it("cannot close the flight sheet of a booking whose flight never began", async () => {
     const club = clubBySlug(SLUG);
     signInAs("member@hangarline.test");
     const made = await createBooking(EMPTY, form({ club: SLUG, aircraftId, startsAt: localAt(club, 12, "10:00"), endsAt: localAt(club, 12, "11:00"), acceptedGuards: ALL_GUARDS }));
-    const state = await checkInBooking(EMPTY, form({ club: SLUG, bookingId: (made.data as { bookingId: string }).bookingId, hobbsOut: "1.0", hobbsIn: "2.0", tachOut: "1.0", tachIn: "2.0", dayLandings: "1" }));
+    const state = await closeFlightSheet(EMPTY, form({ club: SLUG, bookingId: (made.data as { bookingId: string }).bookingId, hobbsOut: "1.0", hobbsIn: "2.0", tachOut: "1.0", tachIn: "2.0", dayLandings: "1" }));
     expect(state.ok).toBe(false);
-    expect(state.message).toMatch(/Dispatch the booking first/);
+    expect(state.message).toMatch(/Begin the flight first/);
   });
 
   it("another member cannot act on the booking", async () => {

@@ -6,29 +6,29 @@ import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { limitationTexts } from "@/lib/bookings/guards";
 import { writeAudit } from "@/lib/server/audit";
-import { dispatchBookingSchema } from "@/lib/validation/bookings";
+import { beginFlightSchema } from "@/lib/validation/bookings";
 import { loadBookingForParty } from "./booking-access";
 
-// Dispatch: the member confirms the preflight record of this booking. A grounded aircraft is
-// never dispatched, whatever the booking guards allowed when it was booked; findings and a
+// Begin flight: the member confirms the preflight record of this booking and takes the
+// aircraft. A grounded aircraft never begins a flight, whatever the booking guards allowed when it was booked; findings and a
 // status that cannot be computed ("Status unknown") need the member's explicit tick.
-export const dispatchBooking = clubAction({
-  schema: dispatchBookingSchema,
+export const beginFlight = clubAction({
+  schema: beginFlightSchema,
   permission: ["create", "Flight"],
-  success: "Dispatched.",
+  success: "Flight begun.",
   run(tx, ctx, input) {
     claimBookingWriteLock(tx);
     const { club, user, db } = ctx;
     const booking = loadBookingForParty(tx, ctx, input.bookingId);
-    if (booking.status === "dispatched") return { message: "This booking is already dispatched." };
-    if (booking.status !== "reserved") throw new ActionError(`This booking is ${booking.status.replace("_", " ")} and cannot be dispatched.`, {}, "conflict");
+    if (booking.status === "dispatched") return { message: "This flight has already begun." };
+    if (booking.status !== "reserved") throw new ActionError(`This booking is ${booking.status === "checked_in" ? "flown and its flight sheet closed" : "cancelled"}; its flight cannot begin.`, {}, "conflict");
     const record = getPreflightRecord(tx, club.id, input.preflightRecordId);
     if (!record || record.bookingId !== booking.id) throw new ActionError("Record the preflight on this booking first.", { preflightRecordId: ["Choose this booking's preflight record."] }, "not_found");
     // Read through the context's connection: the same transaction, the flight line's own rules.
     const status = getAircraftStatusEntry(db, club, booking.aircraftId);
     if (!status) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
     if (status.status === "grounded") {
-      throw new ActionError(`Not dispatched: the aircraft is grounded — ${status.reasons.filter((r) => r.grounding).map((r) => r.text).join("; ")}.`, {}, "conflict");
+      throw new ActionError(`Flight not begun: the aircraft is grounded — ${status.reasons.filter((r) => r.grounding).map((r) => r.text).join("; ")}.`, {}, "conflict");
     }
     // Flyable with limits: the pilot reads each limitation again here, whatever was accepted
     // when booking (a limitation may have been added since), and ticks that they will fly
@@ -36,7 +36,7 @@ export const dispatchBooking = clubAction({
     const limitations = limitationTexts(status.reasons);
     if (limitations.length && !input.acceptLimitations) {
       throw new ActionError(
-        `Not dispatched: ${status.aircraft.registration} flies with limits. Read each limitation and tick that you will fly within it.`,
+        `Flight not begun: ${status.aircraft.registration} flies with limits. Read each limitation and tick that you will fly within it.`,
         { acceptLimitations: limitations },
       );
     }
@@ -50,7 +50,7 @@ export const dispatchBooking = clubAction({
     }
     const now = new Date();
     updateBookingRow(tx, club.id, booking.id, { status: "dispatched", dispatchedAt: now, dispatchedById: user.id, preflightRecordId: record.id });
-    writeAudit(tx, { clubId: club.id, actorId: user.id, action: "booking.dispatch", subjectType: "Booking", subjectId: booking.id, before: { status: booking.status }, after: { status: "dispatched", preflightRecordId: record.id, accepted: concerns, limitationsAccepted: limitations } });
-    return { message: "Dispatched: the aircraft is out on your booking. Check in when you are back.", refresh: true };
+    writeAudit(tx, { clubId: club.id, actorId: user.id, action: "booking.flight.begin", subjectType: "Booking", subjectId: booking.id, before: { status: booking.status }, after: { status: "dispatched", preflightRecordId: record.id, accepted: concerns, limitationsAccepted: limitations } });
+    return { message: `Flight begun: ${status.aircraft.registration} is out on your booking. Close the flight sheet when you are back.`, refresh: true };
   },
 });
