@@ -82,6 +82,16 @@ export function keepsAvailability(db: Handle, clubId: string, userId: string): b
   );
 }
 
+/** The people of the club who keep any availability window in force. */
+export function listInstructorsKeepingAvailability(db: Handle, clubId: string): Set<string> {
+  const rows = db
+    .selectDistinct({ userId: instructorAvailability.userId })
+    .from(instructorAvailability)
+    .where(and(eq(instructorAvailability.clubId, clubId), isNull(instructorAvailability.removedAt)))
+    .all();
+  return new Set(rows.map((r) => r.userId));
+}
+
 export function getAvailability(db: Handle, clubId: string, id: string): InstructorAvailabilityRow | undefined {
   return db.select().from(instructorAvailability).where(and(eq(instructorAvailability.clubId, clubId), eq(instructorAvailability.id, id))).get();
 }

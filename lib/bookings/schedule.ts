@@ -106,15 +106,17 @@ export type PlanEntry<B, K> =
   | { kind: "free"; start: number; end: number; night: boolean };
 
 /**
- * One aircraft's day: its bookings and blocks that touch the flying window (clipped to it), and
- * the free windows inside it from `now` on, split at night, in time order.
+ * One aircraft's day: its bookings and blocks that touch the calendar day `day` (clipped to it;
+ * a booking before the club opens is still shown), and the free windows inside the flying
+ * window from `now` on, split at night, in time order.
  */
-export function planDay<B extends Span, K extends Span>(input: { window: Span; bookings: readonly B[]; blocks: readonly K[]; nights: readonly Span[]; now: number; minFreeMs?: number }): PlanEntry<B, K>[] {
+export function planDay<B extends Span, K extends Span>(input: { day?: Span; window: Span; bookings: readonly B[]; blocks: readonly K[]; nights: readonly Span[]; now: number; minFreeMs?: number }): PlanEntry<B, K>[] {
   const { window } = input;
-  const clip = (s: Span) => ({ start: Math.max(s.start, window.start), end: Math.min(s.end, window.end) });
+  const day = input.day ?? window;
+  const clip = (s: Span) => ({ start: Math.max(s.start, day.start), end: Math.min(s.end, day.end) });
   const entries: PlanEntry<B, K>[] = [
-    ...overlapping(window, input.bookings).map((booking) => ({ kind: "booking" as const, ...clip(booking), booking })),
-    ...overlapping(window, input.blocks).map((block) => ({ kind: "block" as const, ...clip(block), block })),
+    ...overlapping(day, input.bookings).map((booking) => ({ kind: "booking" as const, ...clip(booking), booking })),
+    ...overlapping(day, input.blocks).map((block) => ({ kind: "block" as const, ...clip(block), block })),
   ];
   const free = freeWindows(window, [...input.bookings, ...input.blocks], { notBefore: input.now, minMs: input.minFreeMs });
   for (const f of free) for (const piece of splitByNight(f, input.nights)) entries.push({ kind: "free", ...piece });
