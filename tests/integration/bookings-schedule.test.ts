@@ -19,9 +19,10 @@ const SLUG = "lakeshore-aero";
 const count = (aircraftId: string) => db().select().from(bookings).where(eq(bookings.aircraftId, aircraftId)).all().length;
 
 describe("the schedule beside the bookings", () => {
+  // The whole demo scenario is seeded once; on a loaded machine that takes longer than the default hook time.
   beforeAll(async () => {
     await seedScenario();
-  });
+  }, 120_000);
 
   it("maintenance blocks an aircraft; a booking over the block is refused with the block's reason, nothing written", async () => {
     const club = clubBySlug(SLUG);
