@@ -12,6 +12,7 @@ import { ReceiptEmail, type ReceiptEmailProps } from "./receipt";
 import { DuesReminderEmail, type DuesReminderEmailProps } from "./dues-reminder";
 import { SafetyDigestEmail, type SafetyDigestProps } from "./safety-digest";
 import { SquawkAlertEmail, type SquawkAlertProps } from "./squawk-alert";
+import { BookingReminderEmail, type BookingReminderProps } from "./booking-reminder";
 
 // Every template the outbox can send, by name. A row stores the name and the props; the worker
 // renders when it sends, so a template fix applies to messages still waiting.
@@ -28,6 +29,7 @@ export type EmailTemplates = {
   "dues-reminder": DuesReminderEmailProps;
   "safety-digest": SafetyDigestProps;
   "squawk-alert": SquawkAlertProps;
+  "booking-reminder": BookingReminderProps;
 };
 export type EmailTemplateName = keyof EmailTemplates;
 
@@ -44,6 +46,7 @@ const components: { [K in EmailTemplateName]: (props: EmailTemplates[K]) => Reac
   "dues-reminder": (p) => <DuesReminderEmail {...p} />,
   "safety-digest": (p) => <SafetyDigestEmail {...p} />,
   "squawk-alert": (p) => <SquawkAlertEmail {...p} />,
+  "booking-reminder": (p) => <BookingReminderEmail {...p} />,
 };
 
 export function isEmailTemplateName(name: string): name is EmailTemplateName {

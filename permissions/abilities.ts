@@ -32,6 +32,8 @@ const GRANTS: Record<Role, (b: Builder, userId: string) => void> = {
     can("verify", "Currency");
     can(["create", "update"], "Checkout");
     can(["create", "update"], ["Booking", "Flight"]);
+    // Their own available times (the action writes only the signed-in instructor's windows).
+    can(["create", "update"], "Availability");
   },
   safety: ({ can }) => {
     can(["create", "publish", "update", "readAcknowledgements", "export"], "Bulletin");
@@ -55,6 +57,8 @@ const GRANTS: Record<Role, (b: Builder, userId: string) => void> = {
     can(["triage", "close", "update"], "Squawk");
     can(["create", "lift"], "GroundingNotice");
     can("update", "Flight");
+    // Blocks an aircraft's time on the booking page (an inspection, a repair); the guard refuses bookings over it.
+    can(["create", "update"], "MaintenanceBlock");
   },
   admin: ({ can }) => {
     can(["read", "update"], ["Club", "ClubSettings"]);

@@ -14,6 +14,7 @@ export const SUBJECTS = [
   "Aircraft", "Inspection", "Squawk", "GroundingNotice", "Flight", "Upload",
   "Booking", "Bulletin", "SafetyReport", "CurrencyBoard", "Currency", "MemberDocument", "Medical", "Checkout",
   "Ledger", "Account", "Payment", "Reconciliation", "Rates", "Tools", "Bill",
+  "MaintenanceBlock", "Availability",
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 

@@ -8,3 +8,4 @@ export * from "./safety";
 export * from "./money";
 export * from "./bookings";
 export * from "./idempotency";
+export * from "./schedule";

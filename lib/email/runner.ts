@@ -1,6 +1,7 @@
 import { AsyncResource } from "node:async_hooks";
 import { getDb } from "@/db/client";
 import { createEmailProvider, type EmailProvider } from "./provider";
+import { composeBookingReminders } from "./booking-reminders";
 import { composeSafetyDigests, type DigestTickResult } from "./safety-digest";
 import { drainOutbox } from "./worker";
 import { logError } from "@/lib/server/log";
@@ -50,7 +51,13 @@ export function runScheduledTick(now = new Date()): DigestTickResult {
   } catch (error) {
     logError("outbox", "scheduled tick failed", error);
   }
-  if (result.messages > 0) kickOutbox();
+  let reminders = 0;
+  try {
+    reminders = composeBookingReminders(getDb(), now).messages;
+  } catch (error) {
+    logError("outbox", "booking reminders failed", error);
+  }
+  if (result.messages > 0 || reminders > 0) kickOutbox();
   return result;
 }
 

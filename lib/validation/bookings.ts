@@ -37,9 +37,21 @@ function endAfterStart(v: { startsAt: string; endsAt: string }, ctx: z.Refinemen
   if (v.endsAt <= v.startsAt) ctx.addIssue({ code: "custom", path: ["endsAt"], message: "The end must be after the start." });
 }
 
+/** How many weeks in a row (1 = this once), the same weekday and club times each week. */
+const repeatWeeks = z.preprocess(
+  (v) => (v === undefined || v === null || v === "" ? "1" : typeof v === "number" ? String(v) : v),
+  z
+    .string()
+    .trim()
+    .refine((v) => /^\d{1,2}$/.test(v), { error: "Choose how many weeks, from 1 to 26." })
+    .transform(Number)
+    .refine((v) => v >= 1 && v <= 26, { error: "Choose how many weeks, from 1 to 26." }),
+);
+
 export const createBookingSchema = z
   .object({
     aircraftId: id("an aircraft"),
+    repeatWeeks,
     /** An instructor booking for a student; empty = the person signed in. */
     memberId: optionalId,
     purpose: optionalText("the purpose", 200),
@@ -151,6 +163,39 @@ export const feedTokenSchema = z.object({ intent: z.enum(["create", "revoke"], {
 export const bookingRangeSchema = z.object({
   view: z.enum(["day", "week"]).default("week"),
   date: calendarDate("the date", "Give the date as YYYY-MM-DD.").optional(),
+});
+
+/** A maintenance block on an aircraft: a span in club time and the reason, shown to members. */
+export const createBlockSchema = z
+  .object({
+    aircraftId: id("an aircraft"),
+    startsAt: localDateTime("the start"),
+    endsAt: localDateTime("the end"),
+    reason: z
+      .string({ error: "Say why the aircraft is blocked." })
+      .trim()
+      .min(3, { error: "Say why the aircraft is blocked (at least 3 characters)." })
+      .max(200, { error: "Keep the reason to 200 characters." }),
+  })
+  .superRefine(endAfterStart);
+
+export const removeBlockSchema = z.object({ blockId: id("a maintenance block") });
+
+/** A window in which the instructor signed in is available to fly with members. */
+export const createAvailabilitySchema = z
+  .object({
+    startsAt: localDateTime("the start"),
+    endsAt: localDateTime("the end"),
+    repeatWeeks,
+  })
+  .superRefine(endAfterStart);
+
+export const removeAvailabilitySchema = z.object({ availabilityId: id("an available time") });
+
+/** The booking page's days: from a date (default today), a few days at a time. */
+export const bookingDaysSchema = z.object({
+  from: calendarDate("the first day", "Give the date as YYYY-MM-DD.").optional(),
+  days: z.enum(["3", "7", "14"]).default("3").transform(Number),
 });
 
 export type CreateBookingInput = z.output<typeof createBookingSchema>;

@@ -23,6 +23,9 @@ export const clubSettingsSchema = z.object({
    */
   homeLatitude: z.number().min(-90).max(90).nullable().default(null),
   homeLongitude: z.number().min(-180).max(180).nullable().default(null),
+  /** The club's flying day in club time ("HH:MM"): the booking page lists free time inside it. */
+  flyingDayOpens: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/).default("07:00"),
+  flyingDayCloses: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/).default("21:00"),
   bookingGuards: z
     .object({
       grounded: guard.default("refuse"),

@@ -40,7 +40,8 @@ export async function run({ measure }: BenchTools): Promise<BenchResult[]> {
   const { listAircraft } = await import("@/db/queries/fleet");
   const { getFlightLine } = await import("@/db/queries/fleet-status");
   const { viewRange } = await import("@/lib/actions/bookings/range");
-  const { FleetDays } = await import("@/components/bookings/fleet-days");
+  const { AircraftSchedule } = await import("@/components/bookings/aircraft-schedule");
+  const { flyingWindow } = await import("@/lib/bookings/schedule");
   const { eq } = await import("drizzle-orm");
 
   (globalThis as { React?: typeof React }).React = React;
@@ -105,14 +106,18 @@ export async function run({ measure }: BenchTools): Promise<BenchResult[]> {
 
     // The week route renders the sheet at once; the fleet's statuses stream in beside it in
     // their own Suspense boundary (the flight line's computation, measured separately below).
-    const weekResult = await measure("week view route for 30 aircraft (bookings query + server render of the sheet)", () => {
+    const weekResult = await measure("week of the booking page for 30 aircraft (bookings query + server render by aircraft)", () => {
       const range = viewRange(club!, "week", undefined);
       const rows = listSheetBookings(db, club!.id, range.from, range.to);
       renderToString(
-        createElement(FleetDays, {
-          days: range.days,
-          aircraft: listAircraft(db, club!.id).map((a) => ({ id: a.id, registration: a.registration })),
-          bookings: rows.map((b) => ({ id: b.id, aircraftId: b.aircraftId, startsAt: b.startsAt.getTime(), endsAt: b.endsAt.getTime(), status: b.status, registration: b.registration, who: b.memberName ?? b.memberEmail, mine: b.userId === booker })),
+        createElement(AircraftSchedule, {
+          days: range.days.map((d) => ({ date: d.date, day: { start: d.start, end: d.end }, window: flyingWindow(d.date, {}, club!.timeZone), note: "Flying day" })),
+          aircraft: listAircraft(db, club!.id).map((a) => ({ id: a.id, registration: a.registration, name: `${a.make} ${a.model}`, status: "flyable" as const })),
+          bookings: rows.map((b) => ({ id: b.id, aircraftId: b.aircraftId, start: b.startsAt.getTime(), end: b.endsAt.getTime(), status: b.status, who: b.memberName ?? b.memberEmail, mine: b.userId === booker })),
+          blocks: [],
+          nights: [],
+          now: Date.now(),
+          canBook: true,
           slug: "bench-club",
           timeZone: club!.timeZone,
         }),

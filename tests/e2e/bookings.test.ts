@@ -22,6 +22,24 @@ async function tickWarningsAndRetry(page: Page, button: string) {
   }
 }
 
+describe("the booking page on a desktop", () => {
+  it("lists each aircraft's days with free windows in words and a Book link", async () => {
+    const page = await newPage("desktop");
+    try {
+      await signIn(page, "member@hangarline.test");
+      await page.goto("/clubs/lakeshore-aero/bookings?days=7", { waitUntil: "networkidle" });
+      await page.locator('section[data-aircraft="N0527L"]').getByRole("heading", { name: "N0527L", exact: true }).waitFor();
+      await page.getByRole("link", { name: /^Book N0527L .* from \d\d:\d\d$/ }).first().waitFor();
+      await expectNoHorizontalOverflow(page);
+      await screenshot(page, "bookings-page-desktop");
+    } catch (error) {
+      await screenshot(page, "bookings-page-failure-desktop");
+      throw error;
+    }
+    await page.context().close();
+  });
+});
+
 describe("bookings on a phone", () => {
   it("book → weight and balance with the envelope → preflight with a finding → begin flight → flight sheet", async () => {
     const page = await newPage("phone");
@@ -38,21 +56,34 @@ describe("bookings on a phone", () => {
 async function flow(page: Page) {
   await signIn(page, "member@hangarline.test");
 
-  // The fleet sheet, then a new booking with an instructor aboard.
-  await page.goto("/clubs/lakeshore-aero/bookings?view=week", { waitUntil: "networkidle" });
-  await page.getByRole("heading", { name: "Bookings", exact: true }).waitFor();
-  await page.getByText("The pilot in command decides airworthiness.").first().waitFor();
-  await expectNoHorizontalOverflow(page);
-  await page.getByRole("link", { name: "New booking" }).click();
-  await page.waitForURL(/\/bookings\/new/);
-  const form = page.getByRole("form", { name: "Book an aircraft" });
-  const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
-  await form.getByLabel("Aircraft").selectOption(plane!);
+  // The booking page: each aircraft with its status and its days; book from a free window.
   // BOOKINGS_E2E_DAYS moves the day when rerunning against a database kept from an earlier run.
   // A retried run books another day, so it never meets its own earlier booking.
   const day = localDay(Number(process.env.BOOKINGS_E2E_DAYS ?? 11 + Math.floor(Math.random() * 40)), "America/Chicago");
-  await form.getByLabel("Start (club time)").fill(`${day}T06:00`);
-  await form.getByLabel("End (club time)").fill(`${day}T08:00`);
+  await page.goto(`/clubs/lakeshore-aero/bookings?from=${day}&days=3`, { waitUntil: "networkidle" });
+  await page.getByRole("heading", { name: "Bookings", exact: true }).waitFor();
+  await page.getByText("The pilot in command decides airworthiness.").first().waitFor();
+  const card = page.locator('section[data-aircraft="N0527L"]');
+  await card.getByRole("heading", { name: "N0527L", exact: true }).waitFor();
+  // Status beside the aircraft, in the status component's words and shape.
+  expect(await card.locator("[data-status]").first().getAttribute("data-status")).toMatch(/^(flyable|limited|grounded|unknown)$/);
+  await expectNoHorizontalOverflow(page);
+  await screenshot(page, "bookings-page-phone");
+  const dayItem = card.locator(`li[data-day="${day}"]`);
+  const freeLine = dayItem.locator("li[data-free]").first();
+  const freeText = (await freeLine.innerText()).split("\n")[0]!;
+  expect(freeText).toMatch(/Free \d\d:\d\d–\d\d:\d\d/);
+  const book = freeLine.getByRole("link", { name: /^Book N0527L .* from \d\d:\d\d$/ });
+  // A touch target of at least 44 px.
+  expect((await book.boundingBox())!.height).toBeGreaterThanOrEqual(44);
+  const from = /from (\d\d:\d\d)$/.exec((await book.getAttribute("aria-label"))!)![1]!;
+  await book.click();
+  await page.waitForURL(/\/bookings\/new\?/);
+  const form = page.getByRole("form", { name: "Book an aircraft" });
+  const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
+  // The form opens filled in from the free window.
+  expect(await form.getByLabel("Aircraft").inputValue()).toBe(plane);
+  expect(await form.getByLabel("Start (club time)").inputValue()).toBe(`${day}T${from}`);
   await form.getByLabel("Instructor").selectOption({ label: "Imani Ostrowski" });
   await form.getByLabel("Purpose (optional)").fill("Phone test: pattern work");
   await form.getByRole("button", { name: "Book", exact: true }).click();
@@ -64,6 +95,11 @@ async function flow(page: Page) {
   const bookingUrl = page.url();
   await page.getByRole("heading", { name: /^N0527L · / }).waitFor();
   await expectNoHorizontalOverflow(page);
+
+  // Back on the booking page, the booking is listed in words where the free time was.
+  await page.goto(`/clubs/lakeshore-aero/bookings?from=${day}&days=3`, { waitUntil: "networkidle" });
+  await card.locator(`li[data-day="${day}"]`).getByRole("link", { name: new RegExp(`^${from}–\\d\\d:\\d\\d · Rowan Pike with Imani Ostrowski \\(you\\)$`) }).waitFor();
+  await page.goto(bookingUrl, { waitUntil: "networkidle" });
 
   // Weight and balance, saved with the booking, drawn on the envelope.
   await page.getByRole("link", { name: "Work out weight and balance" }).click();

@@ -4,11 +4,13 @@ import type { Tx } from "@/db/client";
 import { memberships, users, type AcceptedWarning, type Aircraft } from "@/db/schema";
 import { BookingOverlapError, claimBookingWriteLock, getBookingRow, insertBooking, listHeldNear, updateBookingRow } from "@/db/queries/bookings";
 import { loadGuardInput } from "@/db/queries/bookings-guards";
+import { keepsAvailability, listAvailability, listBlocksOverlapping } from "@/db/queries/bookings-schedule";
 import { getAircraft } from "@/db/queries/fleet";
 import { ActionError } from "@/lib/actions/action-state";
 import { evaluateBookingGuards, warningsAccepted, type GuardFinding } from "@/lib/bookings/guards";
 import { lateChange } from "@/lib/bookings/late-cancellation";
 import { checkWindow, findConflicts, type Conflict } from "@/lib/bookings/overlap";
+import { scheduleRefusals } from "@/lib/bookings/schedule-guards";
 import { formatLocalTime, localTimeToInstant } from "@/lib/fleet/time";
 import type { ClubContext } from "@/lib/server/club-context";
 import type { ChangeBookingInput, CreateBookingInput } from "@/lib/validation/bookings";
@@ -71,6 +73,33 @@ function overlapRefusal(error: BookingOverlapError, registration: string): Actio
   return new ActionError(`Not booked: ${text}`, { [error.kind === "aircraft" ? "startsAt" : "instructorId"]: [text] }, "conflict");
 }
 
+/**
+ * Maintenance blocks on the aircraft and the instructor's availability (when they keep a list):
+ * either refuses the booking outright, with the block's reason or the instructor's own times.
+ */
+function assertSchedule(tx: Tx, ctx: Ctx, plane: Aircraft, instructor: { id: string; name: string | null; email: string } | null, window: { startsAt: Date; endsAt: Date }) {
+  const clubId = ctx.club.id;
+  const blocks = listBlocksOverlapping(tx, clubId, plane.id, window.startsAt, window.endsAt).map((b) => ({ start: b.startsAt.getTime(), end: b.endsAt.getTime(), reason: b.reason }));
+  const teaching = instructor
+    ? {
+        name: personName(instructor),
+        keepsAvailability: keepsAvailability(tx, clubId, instructor.id),
+        windows: listAvailability(tx, clubId, window.startsAt, window.endsAt, instructor.id).map((w) => ({ start: w.startsAt.getTime(), end: w.endsAt.getTime() })),
+      }
+    : null;
+  const refusals = scheduleRefusals({
+    wanted: { start: window.startsAt.getTime(), end: window.endsAt.getTime() },
+    registration: plane.registration,
+    blocks,
+    instructor: teaching,
+    format: (ms) => formatLocalTime(new Date(ms), ctx.club.timeZone),
+  });
+  if (!refusals.length) return;
+  const fields: Record<string, string[]> = {};
+  for (const r of refusals) (fields[r.field] ??= []).push(r.reason);
+  throw new ActionError(`Not booked: ${refusals.map((r) => r.reason).join(" ")}`, fields, "conflict");
+}
+
 /** Refusals stop the booking; warnings need the member's "I have read these" first. */
 function applyGuards(refusals: GuardFinding[], warnings: GuardFinding[], accepted: readonly string[]): AcceptedWarning[] {
   if (refusals.length) {
@@ -101,6 +130,7 @@ export function createBookingInTx(tx: Tx, ctx: Ctx, input: CreateBookingInput, n
   const instructor = resolveInstructor(tx, ctx.club.id, input.instructorId, memberId);
   const wanted = { aircraftId: plane.id, userId: memberId, instructorId: instructor?.id ?? null, ...window };
   assertFree(tx, ctx, wanted, plane);
+  assertSchedule(tx, ctx, plane, instructor, window);
 
   const guardInput = loadGuardInput(tx, ctx.club, { plane, memberId, memberName: personName(member), ...window, withInstructor: Boolean(instructor), carryingPassengers: input.carryingPassengers }, now);
   const { refusals, warnings } = evaluateBookingGuards(guardInput, ctx.club.settings);
@@ -128,6 +158,7 @@ export function changeBookingInTx(tx: Tx, ctx: Ctx, input: ChangeBookingInput, n
   const instructor = resolveInstructor(tx, ctx.club.id, input.instructorId, booking.userId);
   const wanted = { aircraftId: plane.id, userId: booking.userId, instructorId: instructor?.id ?? null, ...window };
   assertFree(tx, ctx, wanted, plane, booking.id);
+  assertSchedule(tx, ctx, plane, instructor, window);
 
   const guardInput = loadGuardInput(tx, ctx.club, { plane, memberId: booking.userId, memberName: personName(member), ...window, withInstructor: Boolean(instructor), carryingPassengers: booking.carryingPassengers, excludeBookingId: booking.id }, now);
   const { refusals, warnings } = evaluateBookingGuards(guardInput, ctx.club.settings);

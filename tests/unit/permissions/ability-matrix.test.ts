@@ -14,7 +14,7 @@ const MATRIX: Record<Role, string[]> = {
     "own:read:MemberDocument", "own:create:MemberDocument", "own:update:MemberDocument",
     "own:read:Medical", "own:readDetails:Medical", "own:update:Medical", "own:read:Account", "own:pay:Account",
   ],
-  instructor: ["read:CurrencyBoard", "read:Currency", "read:MemberDocument", "verify:Currency", "create:Checkout", "update:Checkout", "create:Booking", "update:Booking", "create:Flight", "update:Flight"],
+  instructor: ["read:CurrencyBoard", "read:Currency", "read:MemberDocument", "verify:Currency", "create:Checkout", "update:Checkout", "create:Booking", "update:Booking", "create:Flight", "update:Flight", "create:Availability", "update:Availability"],
   safety: [
     "create:Bulletin", "publish:Bulletin", "update:Bulletin", "readAcknowledgements:Bulletin", "export:Bulletin",
     "read:SafetyReport", "readDetails:SafetyReport", "triage:SafetyReport", "update:SafetyReport",
@@ -28,6 +28,7 @@ const MATRIX: Record<Role, string[]> = {
   maintenance: [
     "create:Aircraft", "update:Aircraft", "create:Inspection", "update:Inspection", "record:Inspection",
     "triage:Squawk", "close:Squawk", "update:Squawk", "create:GroundingNotice", "lift:GroundingNotice", "update:Flight",
+    "create:MaintenanceBlock", "update:MaintenanceBlock",
   ],
   admin: [
     "read:Club", "update:Club", "read:ClubSettings", "update:ClubSettings",

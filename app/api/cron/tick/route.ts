@@ -2,6 +2,7 @@ import { createHash, timingSafeEqual } from "node:crypto";
 import { NextResponse } from "next/server";
 import { getDb } from "@/db/client";
 import { kickOutbox } from "@/lib/email/runner";
+import { composeBookingReminders } from "@/lib/email/booking-reminders";
 import { composeSafetyDigests } from "@/lib/email/safety-digest";
 import { apiError } from "@/lib/server/api";
 
@@ -20,6 +21,7 @@ export async function POST(request: Request) {
   const given = (request.headers.get("authorization") ?? "").replace(/^Bearer\s+/i, "");
   if (!given || !timingSafeEqual(digest(given), digest(secret))) return apiError("unauthenticated", "A valid scheduler token is required.");
   const result = composeSafetyDigests(getDb());
-  if (result.messages > 0) kickOutbox();
-  return NextResponse.json({ ok: true, digests: result });
+  const reminders = composeBookingReminders(getDb());
+  if (result.messages > 0 || reminders.messages > 0) kickOutbox();
+  return NextResponse.json({ ok: true, digests: result, reminders });
 }

@@ -20,6 +20,11 @@ export default async function NewBookingPage({ params, searchParams }: { params:
   const today = isoDateInTimeZone(new Date(), club.timeZone);
   const date = query.date && isIsoDate(query.date) && query.date >= today ? query.date : addDays(today, 1);
   const aircraftId = line.entries.some((e) => e.aircraft.id === query.aircraft) ? query.aircraft! : "";
+  // A "Book" link from a free window carries its start and end (club time, "YYYY-MM-DDTHH:MM").
+  const localOk = (v: string | undefined): v is string => typeof v === "string" && /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/.test(v) && isIsoDate(v.slice(0, 10));
+  const startsAt = localOk(query.start) ? query.start : `${date}T09:00`;
+  const twoHoursOn = (local: string) => `${local.slice(0, 11)}${String(Math.min(23, Number(local.slice(11, 13)) + 2)).padStart(2, "0")}${local.slice(13)}`;
+  const endsAt = localOk(query.end) && query.end > startsAt ? query.end : twoHoursOn(startsAt);
   const people = listMembers(db, club.id).filter((m) => m.status === "active" && !(m.roles.length === 1 && m.roles[0] === "mechanic"));
   // Instructors include the person booking: an instructor books a student with themselves aboard.
   const instructors = people.filter((m) => m.roles.includes("instructor")).map((m) => ({ id: m.userId, label: m.userId === user.id ? `${m.name ?? m.email} (you)` : m.name ?? m.email }));
@@ -35,7 +40,7 @@ export default async function NewBookingPage({ params, searchParams }: { params:
             aircraft={line.entries.map((e) => ({ id: e.aircraft.id, label: `${e.aircraft.registration} — ${e.aircraft.make} ${e.aircraft.model} (${STATUS_WORDS[e.status]})` }))}
             instructors={instructors}
             members={forOthers ? people.filter((m) => m.userId !== user.id).map((m) => ({ id: m.userId, label: m.name ?? m.email })) : null}
-            defaults={{ aircraftId, startsAt: `${date}T09:00`, endsAt: `${date}T11:00` }}
+            defaults={{ aircraftId, startsAt, endsAt, instructorId: instructors.some((i) => i.id === query.instructor) ? query.instructor! : "" }}
           />
         </section>
       ) : (
