@@ -1,4 +1,5 @@
 "use client";
+import { scrollArea } from "@/components/ui/scroll-area";
 import { useQuery } from "@tanstack/react-query";
 
 type Row = { id: string; toAddress: string; subject: string; status: string; attempts: number; lastError: string | null; createdAt: string; sentAt: string | null };
@@ -17,7 +18,7 @@ export function OutboxTable({ slug, initial }: { slug: string; initial: Row[] })
     refetchInterval: 5000,
   });
   return (
-    <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+    <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Outbox")}>
       <table className="w-full min-w-[40rem] text-left text-sm">
         <thead className="bg-sand-200"><tr><th className="px-3 py-2">Queued (UTC)</th><th className="px-3 py-2">To</th><th className="px-3 py-2">Subject</th><th className="px-3 py-2">State</th><th className="px-3 py-2">Tries</th></tr></thead>
         <tbody>

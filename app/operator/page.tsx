@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import Link from "next/link";
 import { AssignAdminForm } from "@/components/operator/assign-admin-form";
 import { PageHeader } from "@/components/ui/page-header";
@@ -6,6 +7,8 @@ import { listOperatorClubSummaries } from "@/db/queries/operator";
 import { authorizeOperatorPage } from "@/lib/server/authorize";
 import { formatMoney } from "@/lib/money";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
+
+export const metadata: Metadata = { title: "Clubs · Operator console" };
 
 export default async function OperatorHome() {
   const user = await authorizeOperatorPage();

@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import { formatHours } from "@/lib/airworthiness";
 import type { DueSummary } from "@/lib/fleet/types";
 import { dueLabel, dueText, dueTone, lateText, meterWord } from "./due-text";
@@ -5,7 +6,7 @@ import { dueLabel, dueText, dueTone, lateText, meterWord } from "./due-text";
 /** Every applicable item with its last completion and when it comes due; scrolls inside its box on a phone. */
 export function DueTable({ due, caption }: { due: DueSummary[]; caption: string }) {
   return (
-    <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+    <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Due items")}>
       <table className="w-full min-w-[40rem] text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-sand-200">

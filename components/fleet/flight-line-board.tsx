@@ -1,5 +1,6 @@
 "use client";
-import { useQuery } from "@tanstack/react-query";
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { useEffect } from "react";
 import type { FlightLineEntry } from "@/lib/fleet/types";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
 import { StatusShape } from "@/components/ui/status-badge";
@@ -15,17 +16,29 @@ function clock(iso: string, timeZone: string): string {
 
 /** The flight line, kept live from the JSON route; the server-rendered data shows first. */
 export function FlightLineBoard({ slug, initial }: { slug: string; initial: FlightLineData }) {
-  const { data, isError, isFetching } = useQuery({
-    queryKey: ["flight-line", slug],
+  const queryClient = useQueryClient();
+  const queryKey = ["flight-line", slug];
+  const { data: cached, isError, isFetching } = useQuery({
+    queryKey,
     queryFn: async (): Promise<FlightLineData> => {
       const res = await fetch(`/api/clubs/${slug}/flight-line`, { cache: "no-store" });
       if (!res.ok) throw new Error(`Flight line ${res.status}`);
       return (await res.json()) as FlightLineData;
     },
     initialData: initial,
+    // The server's copy is as old as it says, so a newer one is never held back as "fresh".
+    initialDataUpdatedAt: Date.parse(initial.generatedAt),
     refetchInterval: REFRESH_MS,
     refetchOnWindowFocus: true,
   });
+  // initialData only seeds an empty cache: after a change (a grounding notice, a squawk) the page
+  // is rendered again with newer records, while the cache kept from an earlier visit still holds
+  // the old ones until its next refetch. The newer of the two is shown, and put in the cache.
+  const serverIsNewer = Date.parse(initial.generatedAt) > Date.parse(cached.generatedAt);
+  const data = serverIsNewer ? initial : cached;
+  useEffect(() => {
+    if (serverIsNewer) queryClient.setQueryData(["flight-line", slug], initial, { updatedAt: Date.parse(initial.generatedAt) });
+  }, [serverIsNewer, initial, queryClient, slug]);
   const counts = data.entries.reduce<Record<string, number>>((acc, e) => ({ ...acc, [e.status]: (acc[e.status] ?? 0) + 1 }), {});
   return (
     <div>

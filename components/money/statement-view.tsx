@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { StatementFigures } from "@/lib/ledger/statement-lines";
 import { Money } from "./money-text";
 
@@ -6,7 +7,7 @@ export function StatementView({ figures, currency, title }: { figures: Statement
   const f = figures;
   return (
     <section className="card" aria-label={title}>
-      <div className="overflow-x-auto">
+      <div className="overflow-x-auto" {...scrollArea("Statement")}>
         <table className="w-full min-w-[36rem] text-left text-sm">
           <caption className="mb-2 text-left text-ink-700">{title}: {f.periodStart} to {f.periodEnd}</caption>
           <thead className="bg-sand-200">

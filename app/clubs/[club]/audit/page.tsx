@@ -1,6 +1,9 @@
+import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/page-header";
 import { listAuditEntries } from "@/db/queries/audit";
 import { authorizePage } from "@/lib/server/authorize";
+
+export const metadata: Metadata = { title: "Audit log" };
 
 export default async function AuditPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;
