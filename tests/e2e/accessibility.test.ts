@@ -2,7 +2,7 @@ import fs from "node:fs";
 import { createRequire } from "node:module";
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, describe, expect, it } from "vitest";
-import { baseUrl, getBrowser, signIn } from "./harness";
+import { baseUrl, getBrowser, screenshot, signIn } from "./harness";
 
 const VIEWPORTS = { desktop: { width: 1280, height: 800 }, phone: { width: 390, height: 844 } } as const;
 
@@ -75,10 +75,11 @@ describe("accessibility: no serious or critical axe violation on any page in the
           expect(response?.status(), `${target} answers`).toBeLessThan(400);
           await page.locator("main h1").first().waitFor();
           const found = await seriousViolations(page);
+          if (target.endsWith("/audit")) await screenshot(page, `audit-log-${viewport}`);
           if (found.length) problems.push(describeViolations(`${viewport} ${target}`, found));
         }
       }
       expect(problems, problems.join("\n")).toEqual([]);
-    });
+    }, 600_000);
   }
 });
