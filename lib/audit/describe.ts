@@ -96,7 +96,7 @@ const VERBS: Record<string, string> = {
 
 const whenFormats = new Map<string, Intl.DateTimeFormat>();
 
-/** "Wed 2 Dec 2026, 09:14 CST" in the club's time zone. */
+/** "Wed, 2 Dec 2026, 09:14 GMT-6" in the club's time zone (its offset named). */
 export function formatAuditTime(instant: Date, timeZone: string): string {
   let format = whenFormats.get(timeZone);
   if (!format) {
