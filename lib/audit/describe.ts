@@ -149,7 +149,10 @@ function valueWords(key: string, value: unknown, words: AuditWords, depth = 0): 
 }
 
 /** Ids mean nothing to a reader: an id field shows only when its record has a name. */
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
 function isReadableKey(key: string, value: unknown, words: AuditWords): boolean {
+  if (typeof value === "string" && UUID.test(value) && !words.names?.get(value)) return false;
   if (key === "id" || /Ids?$/.test(key) || key === "idempotencyKey" || key === "club") {
     if (typeof value === "string") return Boolean(words.names?.get(value));
     if (Array.isArray(value)) return value.length > 0 && value.every((v) => typeof v === "string" && words.names?.has(v));
