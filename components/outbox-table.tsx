@@ -1,4 +1,5 @@
 "use client";
+import { scrollArea } from "@/components/ui/scroll-area";
 import { useQuery } from "@tanstack/react-query";
 import { formatInstantWords } from "@/lib/dates/words";
 
@@ -18,7 +19,7 @@ export function OutboxTable({ slug, initial, timeZone }: { slug: string; initial
     refetchInterval: 5000,
   });
   return (
-    <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+    <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Outbox")}>
       <table className="w-full min-w-[40rem] text-left text-sm">
         <thead className="bg-sand-200"><tr><th className="px-3 py-2">Queued</th><th className="px-3 py-2">To</th><th className="px-3 py-2">Subject</th><th className="px-3 py-2">State</th><th className="px-3 py-2">Tries</th></tr></thead>
         <tbody>

@@ -1,5 +1,8 @@
+import type { Metadata } from "next";
 import Link from "next/link";
 import { buttonClass } from "@/components/ui/button";
+
+export const metadata: Metadata = { title: { absolute: "Hangarline · Flying club portal" } };
 
 export default function Landing() {
   return (

@@ -1,3 +1,4 @@
+import type { Metadata } from "next";
 import Link from "next/link";
 import { AssignAdminForm } from "@/components/operator/assign-admin-form";
 import { PageHeader } from "@/components/ui/page-header";
@@ -7,6 +8,8 @@ import { authorizeOperatorPage } from "@/lib/server/authorize";
 import { formatMoney } from "@/lib/money";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
 import { STATUS_TEXT_TONE, StatusShape } from "@/components/ui/status-badge";
+
+export const metadata: Metadata = { title: "Clubs · Operator console" };
 
 export default async function OperatorHome() {
   const user = await authorizeOperatorPage();

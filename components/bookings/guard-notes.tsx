@@ -13,22 +13,18 @@ const GUARD_LABELS: Record<string, string> = {
 };
 
 /**
- * What stands against the booking: refusals (it cannot be booked) and warnings, each with a box
- * the member ticks to say they have read it. The boxes carry the guard keys back to the server.
+ * The warnings that stand against the booking, each with a box the member ticks to say they have
+ * read it (the boxes carry the guard keys back to the server). A refusal is not repeated here: the
+ * form's own answer already says it ("Not booked: …") — one message, not two. While there is a
+ * refusal the boxes are disabled, since ticking cannot get past it.
  */
 export function GuardNotes({ state }: { state: ActionState }) {
   const refusals = state.fieldErrors.refusals ?? [];
   const warnings = state.fieldErrors.warnings ?? [];
   const guards = state.fieldErrors.warningGuards ?? [];
-  if (!refusals.length && !warnings.length) return null;
+  if (!warnings.length) return null;
   return (
     <div className="mb-4 space-y-3">
-      {refusals.length ? (
-        <section role="alert" aria-label="Why it cannot be booked" className="rounded border-l-4 border-stop-600 bg-stop-100 px-3 py-2">
-          <h3 className="font-bold text-stop-800">■ Cannot be booked</h3>
-          <ul className="mt-1 list-disc space-y-1 pl-5 text-sm">{refusals.map((r) => <li key={r}>{r}</li>)}</ul>
-        </section>
-      ) : null}
       {warnings.length ? (
         <fieldset className="rounded border-l-4 border-sock-500 bg-sock-100 px-3 py-2" aria-label="Warnings to read">
           <legend className="sr-only">Warnings to read</legend>

@@ -1,4 +1,5 @@
 "use client";
+import { scrollArea } from "@/components/ui/scroll-area";
 import {
   createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState,
 } from "@tanstack/react-table";
@@ -124,7 +125,7 @@ export function CurrencyBoard({ rows }: { rows: BoardRow[] }) {
         <span className="field-label">Search</span>
         <input className="field-input" type="search" defaultValue={q} placeholder="Name or e-mail" onChange={(e) => table.setGlobalFilter(e.target.value)} />
       </label>
-      <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+      <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Currency of members")}>
         <table className="w-full min-w-[60rem] text-left text-sm">
           <thead className="bg-sand-200">
             {table.getHeaderGroups().map((hg) => (

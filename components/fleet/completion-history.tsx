@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { CompletionHistoryRow, UploadLink } from "@/db/queries/fleet";
 import { formatHours } from "@/lib/airworthiness";
 import type { DueSummary } from "@/lib/fleet/types";
@@ -8,7 +9,7 @@ export function CompletionHistory({ slug, rows, files, due = [] }: { slug: strin
   const lateFor = (c: CompletionHistoryRow) => due.find((d) => d.late && d.lastDoneOn === c.doneOn && d.lastDoneHours === c.hours && d.name === c.itemName)?.late ?? null;
   if (rows.length === 0) return <p className="text-ink-700">No completions recorded yet.</p>;
   return (
-    <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+    <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Inspection history")}>
       <table className="w-full min-w-[40rem] text-left text-sm">
         <thead className="bg-sand-200">
           <tr><th className="px-3 py-2">Done</th><th className="px-3 py-2">Item</th><th className="px-3 py-2">Mechanic</th><th className="px-3 py-2">Notes and files</th></tr>

@@ -1,6 +1,6 @@
 "use client";
-import { useQuery } from "@tanstack/react-query";
-import { useRef } from "react";
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { useEffect, useRef } from "react";
 import type { FlightLineEntry } from "@/lib/fleet/types";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
 import { STATUS_TEXT_TONE, StatusShape } from "@/components/ui/status-badge";
@@ -19,8 +19,10 @@ export function FlightLineBoard({ slug, initial }: { slug: string; initial: Flig
   // The tag of the flight line on screen: while it is still current the server answers 304 with
   // no body, and the records shown are confirmed as of that answer.
   const held = useRef<{ etag: string; data: FlightLineData } | null>(null);
-  const { data, isError, isFetching } = useQuery({
-    queryKey: ["flight-line", slug],
+  const queryClient = useQueryClient();
+  const queryKey = ["flight-line", slug];
+  const { data: cached, isError, isFetching } = useQuery({
+    queryKey,
     queryFn: async (): Promise<FlightLineData> => {
       const kept = held.current;
       const res = await fetch(`/api/clubs/${slug}/flight-line`, { cache: "no-store", headers: kept ? { "If-None-Match": kept.etag } : {} });
@@ -32,9 +34,19 @@ export function FlightLineBoard({ slug, initial }: { slug: string; initial: Flig
       return fresh;
     },
     initialData: initial,
+    // The server's copy is as old as it says, so a newer one is never held back as "fresh".
+    initialDataUpdatedAt: Date.parse(initial.generatedAt),
     refetchInterval: REFRESH_MS,
     refetchOnWindowFocus: true,
   });
+  // initialData only seeds an empty cache: after a change (a grounding notice, a squawk) the page
+  // is rendered again with newer records, while the cache kept from an earlier visit still holds
+  // the old ones until its next refetch. The newer of the two is shown, and put in the cache.
+  const serverIsNewer = Date.parse(initial.generatedAt) > Date.parse(cached.generatedAt);
+  const data = serverIsNewer ? initial : cached;
+  useEffect(() => {
+    if (serverIsNewer) queryClient.setQueryData(["flight-line", slug], initial, { updatedAt: Date.parse(initial.generatedAt) });
+  }, [serverIsNewer, initial, queryClient, slug]);
   const counts = data.entries.reduce<Record<string, number>>((acc, e) => ({ ...acc, [e.status]: (acc[e.status] ?? 0) + 1 }), {});
   return (
     <div>

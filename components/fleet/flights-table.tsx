@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { FlightListRow } from "@/db/queries/fleet-flights";
 import { formatHours } from "@/lib/airworthiness";
 
@@ -7,7 +8,7 @@ const FLAG = { ok: "Continuous", gap: "Gap", overlap: "Overlap" } as const;
 export function FlightsTable({ rows, showAircraft = true }: { rows: FlightListRow[]; showAircraft?: boolean }) {
   if (rows.length === 0) return <p className="text-ink-700">No flights logged yet.</p>;
   return (
-    <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+    <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Flights")}>
       <table className="w-full min-w-[48rem] text-left text-sm">
         <thead className="bg-sand-200">
           <tr>

@@ -9,7 +9,8 @@ import type { Role } from "@/permissions/roles";
 import { RoleCheckboxes } from "./role-checkboxes";
 
 export function ChangeRolesForm({ slug, membershipId, roles }: { slug: string; membershipId: string; roles: Role[] }) {
-  const form = useFormAction(changeRoles);
+  // An edit form: after saving, the boxes keep what was saved (a reset would show the old roles).
+  const form = useFormAction(changeRoles, { keepValuesAfterOk: true });
   return (
     <FormShell form={form} label="Change roles">
       <input type="hidden" name="club" value={slug} />

@@ -1,4 +1,5 @@
 "use client";
+import { scrollArea } from "@/components/ui/scroll-area";
 import {
   createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, getSortedRowModel,
   useReactTable, type SortingState,
@@ -87,7 +88,7 @@ export function MembersTable({ rows, slug, canManage }: { rows: MemberTableRow[]
           </select>
         </label>
       </div>
-      <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+      <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Members")}>
         <table className="w-full min-w-[36rem] text-left text-sm">
           <thead className="bg-sand-200">
             {table.getHeaderGroups().map((hg) => (

@@ -1,4 +1,5 @@
 "use client";
+import { scrollArea } from "@/components/ui/scroll-area";
 import {
   flexRender, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, getSortedRowModel, useReactTable,
   type ColumnDef, type SortingState,
@@ -156,7 +157,7 @@ export function DataTable({ rows, columns, currency, locale, csvName, label, fil
           Export CSV
         </button>
       </div>
-      <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+      <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea(label)}>
         <table className="w-full min-w-[40rem] text-left text-sm" aria-label={label}>
           <thead className="bg-sand-200">
             {table.getHeaderGroups().map((hg) => (

@@ -1,4 +1,5 @@
 "use client";
+import { scrollArea } from "@/components/ui/scroll-area";
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { useMemo, useState } from "react";
@@ -116,7 +117,7 @@ export function RateCalculator({ slug, currency, locale, unit, profiles, canSave
               </div>
             </section>
             <section className="card" aria-label="Rate table">
-              <div className="overflow-x-auto">
+              <div className="overflow-x-auto" {...scrollArea("Rate breakdown")}>
                 <table className="w-full min-w-[28rem] text-right text-sm">
                   <thead><tr><th className="py-1 text-left">Hours per year</th><th className="py-1">Fixed per hour</th><th className="py-1">Wet rate</th><th className="py-1">Dry rate</th></tr></thead>
                   <tbody>

@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { StatementFigures } from "@/lib/money/statement-lines";
 import { DEFAULT_LOCALE } from "@/lib/money/format";
 import { formatDate } from "@/lib/dates";
@@ -9,7 +10,7 @@ export function StatementView({ figures, currency, locale, title }: { figures: S
   const day = (d: string) => formatDate(d, locale ?? DEFAULT_LOCALE);
   return (
     <section className="card" aria-label={title}>
-      <div className="overflow-x-auto">
+      <div className="overflow-x-auto" {...scrollArea("Statement")}>
         <table className="w-full min-w-[36rem] text-left text-sm">
           <caption className="mb-2 text-left text-ink-700">{title}: {day(f.periodStart)} to {day(f.periodEnd)}</caption>
           <thead className="bg-sand-200">

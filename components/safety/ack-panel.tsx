@@ -1,4 +1,5 @@
 "use client";
+import { scrollArea } from "@/components/ui/scroll-area";
 import { useQuery } from "@tanstack/react-query";
 import { formatInstantWords } from "@/lib/dates/words";
 import { ShapeIcon } from "./status-shapes";
@@ -39,7 +40,7 @@ export function AckPanel({ slug, bulletinId, initial, canExport, canRemind, curr
       </div>
       <div className="mb-3 h-2 overflow-hidden rounded bg-sand-200" aria-hidden="true"><div className="h-full bg-go-600" style={{ width: `${data.percent}%` }} /></div>
       {canRemind && current ? <div className="mb-3"><RemindForm slug={slug} bulletinId={bulletinId} outstanding={data.outstanding} /></div> : null}
-      <div className="overflow-x-auto rounded border border-sand-300">
+      <div className="overflow-x-auto rounded border border-sand-300" {...scrollArea("Acknowledgements")}>
         <table className="w-full min-w-[28rem] text-left text-sm">
           <thead className="bg-sand-200"><tr><th scope="col" className="px-3 py-2">Member</th><th scope="col" className="px-3 py-2">State</th><th scope="col" className="px-3 py-2">When (UTC)</th></tr></thead>
           <tbody>

@@ -8,7 +8,7 @@ const variants = {
 } as const;
 
 export function buttonClass(variant: keyof typeof variants = "primary", extra = "") {
-  return `inline-flex min-h-11 items-center justify-center gap-2 rounded px-4 py-2 font-bold transition-colors disabled:cursor-not-allowed ${variants[variant]} ${extra}`;
+  return `inline-flex min-h-11 items-center no-underline hover:no-underline justify-center gap-2 rounded px-4 py-2 font-bold transition-colors disabled:cursor-not-allowed ${variants[variant]} ${extra}`;
 }
 
 export function Button({ variant = "primary", className = "", ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: keyof typeof variants }) {

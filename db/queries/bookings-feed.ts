@@ -2,9 +2,12 @@ import "server-only";
 import { and, eq, isNull } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { calendarFeedTokens, clubs, users, type CalendarFeedToken } from "@/db/schema";
-import { hashToken } from "@/lib/server/tokens";
+import { hashToken, openSecret, sealSecret } from "@/lib/server/tokens";
 
-// Calendar links: the secret is in the URL only; the database keeps its SHA-256.
+// Calendar links: found by the SHA-256 of the secret in the URL; the secret is kept sealed so its
+// owner can see the same link again on another device (making a new one would stop the old one).
+
+const SEAL_PURPOSE = "calendar-feed";
 
 type Handle = Db | Tx;
 
@@ -21,7 +24,7 @@ export function revokeFeedTokens(tx: Tx, clubId: string, userId: string, at: Dat
 }
 
 export function insertFeedToken(tx: Tx, clubId: string, userId: string, secret: string): string {
-  const [row] = tx.insert(calendarFeedTokens).values({ clubId, userId, tokenHash: hashToken(secret) }).returning({ id: calendarFeedTokens.id }).all();
+  const [row] = tx.insert(calendarFeedTokens).values({ clubId, userId, tokenHash: hashToken(secret), secretSealed: sealSecret(secret, SEAL_PURPOSE) }).returning({ id: calendarFeedTokens.id }).all();
   return row!.id;
 }
 
@@ -39,4 +42,11 @@ export function findFeedBySecret(db: Handle, secret: string) {
 
 export function markFeedFetched(db: Handle, tokenId: string, at: Date): void {
   db.update(calendarFeedTokens).set({ lastFetchedAt: at }).where(eq(calendarFeedTokens.id, tokenId)).run();
+}
+
+/** The live link's secret for its owner to see again, or null when it cannot be shown (made before seals, or under another AUTH_SECRET). */
+export function readFeedSecret(token: Pick<CalendarFeedToken, "secretSealed" | "tokenHash">): string | null {
+  const secret = openSecret(token.secretSealed, SEAL_PURPOSE);
+  // A seal that opens to another secret than the one the link answers to is never shown.
+  return secret && hashToken(secret) === token.tokenHash ? secret : null;
 }

@@ -57,7 +57,10 @@ export const bookings = sqliteTable(
   ],
 );
 
-/** A member's calendar link. Only the SHA-256 of the secret is kept; revoking ends the link. */
+/**
+ * A member's calendar link. Found by the SHA-256 of the secret; the secret itself is kept sealed
+ * (lib/server/tokens.ts sealSecret) so the page can show it again. Revoking ends the link.
+ */
 export const calendarFeedTokens = sqliteTable(
   "calendar_feed_tokens",
   {
@@ -65,6 +68,8 @@ export const calendarFeedTokens = sqliteTable(
     clubId: text("club_id").notNull().references(() => clubs.id),
     userId: text("user_id").notNull().references(() => users.id),
     tokenHash: text("token_hash").notNull().unique(),
+    /** The secret sealed with a key derived from AUTH_SECRET; null for links made before 0023. */
+    secretSealed: text("secret_sealed"),
     revokedAt: integer("revoked_at", { mode: "timestamp_ms" }),
     lastFetchedAt: integer("last_fetched_at", { mode: "timestamp_ms" }),
     ...timestamps(),

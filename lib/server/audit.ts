@@ -14,7 +14,7 @@ export type AuditAction =
   | "safety_report.triage" | "safety_report.grounding" | "member_document.record" | "member_document.remind" | "medical.record" | "currency.verify"
   | "checkout.record" | "checkout.revoke"
   | "booking.create" | "booking.change" | "booking.cancel" | "booking.flight.begin" | "booking.flight.close"
-  | "calendar.link.create" | "calendar.link.revoke" | "weight-balance.profile.update" | "preflight.template.update" | "preflight.record";
+  | "calendar.link.create" | "calendar.link.rotate" | "calendar.link.revoke" | "weight-balance.profile.update" | "preflight.template.update" | "preflight.record";
 
 export function writeAudit(
   tx: Tx | Db,

@@ -157,7 +157,19 @@ export const flightSheetSchema = z
     if (v.squawk !== null && v.squawk.length < 5) ctx.addIssue({ code: "custom", path: ["squawk"], message: "Describe the squawk in a few words (at least 5 characters), or leave it empty." });
   });
 
-export const feedTokenSchema = z.object({ intent: z.enum(["create", "revoke"], { error: "Choose what to do with the calendar link." }) });
+/**
+ * The calendar link: make one (or see the one there is), replace it, or turn it off. Replacing and
+ * turning off stop every calendar using the current link, so both need the confirmation box ticked.
+ */
+export const feedTokenSchema = z
+  .object({
+    intent: z.enum(["create", "rotate", "revoke"], { error: "Choose what to do with the calendar link." }),
+    confirm: z.literal("yes", { error: "Tick the box to confirm." }).optional(),
+  })
+  .refine((v) => v.intent === "create" || v.confirm === "yes", {
+    path: ["confirm"],
+    message: "Tick the box to confirm that calendars using the current link will stop updating.",
+  });
 
 /** Query of the fleet views and the JSON list: a day or a week around a date. */
 export const bookingRangeSchema = z.object({

@@ -6,7 +6,9 @@ import { bookings, calendarFeedTokens, memberships } from "@/db/schema";
 import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
 import { manageCalendarLink } from "@/lib/actions/bookings/calendar-link";
-import { hashToken } from "@/lib/server/tokens";
+import { getLiveFeedToken, readFeedSecret } from "@/db/queries/bookings-feed";
+import { auditLog } from "@/db/schema";
+import { hashToken, sealSecret } from "@/lib/server/tokens";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
@@ -83,14 +85,17 @@ describe("the member's calendar feed (iCalendar, RFC 5545)", () => {
     expect((await fetchFeed("x")).status).toBe(404);
     const first = await makeLink("member@hangarline.test");
     expect((await fetchFeed(first)).status).toBe(200);
-    const second = await makeLink("member@hangarline.test");
+    signInAs("member@hangarline.test");
+    const replaced = await manageCalendarLink(EMPTY, form({ club: SLUG, intent: "rotate", confirm: "yes" }));
+    expect(replaced.ok, replaced.message).toBe(true);
+    const second = (replaced.data as { url: string }).url.split("/api/calendar/")[1]!;
+    expect(second).not.toBe(first);
     expect((await fetchFeed(first)).status).toBe(404);
     expect((await fetchFeed(second)).status).toBe(200);
-    signInAs("member@hangarline.test");
-    const off = await manageCalendarLink(EMPTY, form({ club: SLUG, intent: "revoke" }));
+    const off = await manageCalendarLink(EMPTY, form({ club: SLUG, intent: "revoke", confirm: "yes" }));
     expect(off.ok).toBe(true);
     expect((await fetchFeed(second)).status).toBe(404);
-    // Only the hash is stored, never the secret.
+    // The secret itself is never stored in the clear: its hash, and a seal only the app's key opens.
     const row = db().select().from(calendarFeedTokens).where(eq(calendarFeedTokens.tokenHash, hashToken(second))).get()!;
     expect(JSON.stringify(row)).not.toContain(second);
     expect(row.revokedAt).not.toBeNull();
@@ -103,5 +108,73 @@ describe("the member's calendar feed (iCalendar, RFC 5545)", () => {
     const club = clubBySlug(SLUG);
     db().update(memberships).set({ status: "inactive" }).where(and(eq(memberships.clubId, club.id), eq(memberships.userId, user.id))).run();
     expect((await fetchFeed(secret)).status).toBe(404);
+  });
+});
+
+describe("the calendar link is shown again; replacing it is a separate, confirmed choice", () => {
+  beforeAll(async () => {
+    await seedScenario();
+  });
+
+  it("asking for the link again answers the same link, which keeps working (no second subscription broken)", async () => {
+    const first = await makeLink("student@hangarline.test");
+    const again = await makeLink("student@hangarline.test");
+    expect(again).toBe(first);
+    expect((await fetchFeed(first)).status).toBe(200);
+    // The page reads the same secret back from the stored seal.
+    const user = signInAs("student@hangarline.test")!;
+    const live = getLiveFeedToken(db(), clubBySlug(SLUG).id, user.id)!;
+    expect(readFeedSecret(live)).toBe(first);
+    expect(live.secretSealed).not.toContain(first);
+    const tokens = db().select().from(calendarFeedTokens).where(eq(calendarFeedTokens.userId, user.id)).all();
+    expect(tokens).toHaveLength(1);
+  });
+
+  it("replacing or turning off without the confirmation is refused, and nothing changes", async () => {
+    const secret = await makeLink("student@hangarline.test");
+    const user = signInAs("student@hangarline.test")!;
+    const auditBefore = db().select().from(auditLog).where(eq(auditLog.actorId, user.id)).all().length;
+    for (const intent of ["rotate", "revoke"]) {
+      const refused = await manageCalendarLink(EMPTY, form({ club: SLUG, intent }));
+      expect(refused.ok).toBe(false);
+      expect(refused.fieldErrors.confirm?.[0]).toMatch(/Tick the box/);
+    }
+    expect((await fetchFeed(secret)).status).toBe(200);
+    expect(db().select().from(auditLog).where(eq(auditLog.actorId, user.id)).all().length).toBe(auditBefore);
+    expect(readFeedSecret(getLiveFeedToken(db(), clubBySlug(SLUG).id, user.id)!)).toBe(secret);
+  });
+
+  it("a replaced link is recorded as a replacement, and the new one is shown from then on", async () => {
+    const old = await makeLink("student@hangarline.test");
+    const user = signInAs("student@hangarline.test")!;
+    const answer = await manageCalendarLink(EMPTY, form({ club: SLUG, intent: "rotate", confirm: "yes" }));
+    expect(answer.ok).toBe(true);
+    expect(answer.message).toMatch(/old one no longer works/);
+    const fresh = (answer.data as { url: string }).url.split("/api/calendar/")[1]!;
+    expect((await fetchFeed(old)).status).toBe(404);
+    expect(readFeedSecret(getLiveFeedToken(db(), clubBySlug(SLUG).id, user.id)!)).toBe(fresh);
+    const last = db().select().from(auditLog).where(eq(auditLog.actorId, user.id)).all().at(-1)!;
+    expect(last.action).toBe("calendar.link.rotate");
+  });
+
+  it("a link made before links were kept sealed still works, and is not shown (nothing to show)", async () => {
+    const user = signInAs("pilot2@hangarline.test")!;
+    const club = clubBySlug(SLUG);
+    const secret = "legacy-secret-made-before-seals-000000000000";
+    db().update(calendarFeedTokens).set({ revokedAt: new Date() }).where(eq(calendarFeedTokens.userId, user.id)).run();
+    db().insert(calendarFeedTokens).values({ clubId: club.id, userId: user.id, tokenHash: hashToken(secret) }).run();
+    expect((await fetchFeed(secret)).status).toBe(200);
+    expect(readFeedSecret(getLiveFeedToken(db(), club.id, user.id)!)).toBeNull();
+    const asked = await manageCalendarLink(EMPTY, form({ club: SLUG, intent: "create" }));
+    expect(asked.ok).toBe(true);
+    expect((asked.data as { url: string | null }).url).toBeNull();
+    expect((await fetchFeed(secret)).status).toBe(200);
+  });
+
+  it("a seal of another secret (or from another key) is never shown", () => {
+    const user = signInAs("student@hangarline.test")!;
+    const live = getLiveFeedToken(db(), clubBySlug(SLUG).id, user.id)!;
+    expect(readFeedSecret({ tokenHash: live.tokenHash, secretSealed: sealSecret("some-other-secret-value-000000000", "calendar-feed") })).toBeNull();
+    expect(readFeedSecret({ tokenHash: live.tokenHash, secretSealed: `${live.secretSealed}x` })).toBeNull();
   });
 });

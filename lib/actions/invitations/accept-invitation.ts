@@ -1,20 +1,23 @@
 "use server";
 import { and, eq } from "drizzle-orm";
+import { signIn } from "@/auth";
 import { findInvitationByToken } from "@/db/queries/invitations";
 import { invitations, memberships, users } from "@/db/schema";
 import { userAction } from "@/lib/actions/create-action";
-import { ActionError } from "@/lib/actions/action-state";
+import { ActionError, type ActionState } from "@/lib/actions/action-state";
 import { hashPassword } from "@/lib/auth/password";
 import { isoDateInTimeZone } from "@/lib/dates";
 import { writeAudit } from "@/lib/server/audit";
 import { acceptInvitationSchema } from "@/lib/validation/auth";
 import { clubs } from "@/db/schema";
 
+type Joined = { clubSlug: string; newAccountEmail: string | null };
+
 /**
  * Accepting creates the account when the address has none (this is how people sign up), or
  * adds the membership to the signed-in account that owns the invited address.
  */
-export const acceptInvitation = userAction({
+const joinClub = userAction<typeof acceptInvitationSchema, string | null, Joined>({
   schema: acceptInvitationSchema,
   requireUser: false,
   success: "Welcome to the club.",
@@ -31,8 +34,8 @@ export const acceptInvitation = userAction({
       }
       userId = user.id;
     } else {
-      if (!input.name) throw new ActionError("Enter your name.", { name: ["Enter your name."] });
-      if (!passwordHash) throw new ActionError("Choose a password.", { password: ["Use at least 10 characters for your password."] });
+      if (!input.name) throw new ActionError("Some fields need attention; nothing was saved.", { name: ["Enter your name."] });
+      if (!passwordHash) throw new ActionError("Some fields need attention; nothing was saved.", { password: ["Use at least 10 characters for your password."] });
       const [created] = tx.insert(users).values({ email: invitation.email, name: input.name, passwordHash, emailVerified: new Date() }).returning({ id: users.id }).all();
       userId = created!.id;
     }
@@ -55,8 +58,28 @@ export const acceptInvitation = userAction({
     }
     tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, invitation.id)).run();
     writeAudit(tx, { clubId: invitation.clubId, actorId: userId, action: "member.join", subjectType: "Membership", subjectId: membershipId, after: { roles: invitation.roles, via: "invitation" } });
-    return user
-      ? { redirectTo: `/clubs/${invitation.clubSlug}` }
-      : { redirectTo: `/sign-in?joined=1&callbackUrl=${encodeURIComponent(`/clubs/${invitation.clubSlug}`)}` };
+    return {
+      redirectTo: `/clubs/${invitation.clubSlug}`,
+      data: { clubSlug: invitation.clubSlug, newAccountEmail: invitation.accountExists ? null : invitation.email },
+    };
   },
 });
+
+/**
+ * Joins, and signs a newly made account in at once with the password just chosen (no second
+ * sign-in). Should that sign-in not complete, the answer sends the person to the sign-in page,
+ * which says their account is ready.
+ */
+export async function acceptInvitation(prev: ActionState, formData: FormData): Promise<ActionState<Joined>> {
+  const answer = await joinClub(prev, formData);
+  const joined = answer.ok ? answer.data : undefined;
+  if (!joined?.newAccountEmail) return answer;
+  const password = formData.get("password");
+  const club = `/clubs/${joined.clubSlug}`;
+  try {
+    await signIn("credentials", { email: joined.newAccountEmail, password: typeof password === "string" ? password : "", redirect: false });
+    return { ...answer, message: "Welcome to the club. You are signed in.", redirectTo: club };
+  } catch {
+    return { ...answer, redirectTo: `/sign-in?joined=1&callbackUrl=${encodeURIComponent(club)}` };
+  }
+}

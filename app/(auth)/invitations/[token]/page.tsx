@@ -1,9 +1,12 @@
+import type { Metadata } from "next";
 import Link from "next/link";
 import { AcceptInvitationForm } from "@/components/auth/accept-invitation-form";
 import { getDb } from "@/db/client";
 import { findInvitationByToken } from "@/db/queries/invitations";
 import { getSessionUser } from "@/lib/server/session";
 import { ROLE_LABELS } from "@/permissions";
+
+export const metadata: Metadata = { title: "Club invitation" };
 
 export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;

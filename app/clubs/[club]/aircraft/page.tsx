@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { AircraftForm } from "@/components/fleet/aircraft-form";
@@ -19,7 +20,7 @@ export default async function AircraftListPage({ params }: { params: Promise<{ c
   return (
     <div className="max-w-6xl">
       <PageHeader title="Aircraft" lead={<>The club&apos;s aircraft records. For each aircraft&apos;s status, see the <Link href={`/clubs/${club.slug}/flight-line`}>flight line</Link>.</>} />
-      <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+      <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Aircraft")}>
         <table className="w-full min-w-[44rem] text-left text-sm">
           <thead className="bg-sand-200">
             <tr><th className="px-3 py-2">Registration</th><th className="px-3 py-2">Make and model</th><th className="px-3 py-2">Type group</th><th className="px-3 py-2">Hobbs / tach</th><th className="px-3 py-2">Rate</th><th className="px-3 py-2">Rules</th></tr>

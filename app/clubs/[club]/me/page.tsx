@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { Metadata } from "next";
 import { CurrencyList } from "@/components/currency/currency-list";
 import { DocumentForm } from "@/components/documents/document-form";
@@ -95,7 +96,7 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
           <h2 id="outside-h" className="mb-2 text-lg font-bold">Flights from elsewhere</h2>
           <p className="mb-3 text-sm text-ink-700">Landings you made outside this club (another club, a rental) count toward your passenger currency in the same category and class once an instructor or the safety officer has verified them against your logbook. Until then they show as claimed.</p>
           {outside.length ? (
-            <div className="mb-4 overflow-x-auto">
+            <div className="mb-4 overflow-x-auto" {...scrollArea("Currency")}>
               <table className="w-full min-w-[30rem] text-left text-sm">
                 <thead className="bg-sand-200"><tr><th scope="col" className="px-3 py-2">Date</th><th scope="col" className="px-3 py-2">Aircraft</th><th scope="col" className="px-3 py-2">Day</th><th scope="col" className="px-3 py-2">Night full stop</th><th scope="col" className="px-3 py-2">Class</th><th scope="col" className="px-3 py-2">Standing</th></tr></thead>
                 <tbody>

@@ -1,7 +1,10 @@
+import type { Metadata } from "next";
 import { OutboxTable } from "@/components/outbox-table";
 import { PageHeader } from "@/components/ui/page-header";
 import { listClubOutbox } from "@/db/queries/outbox";
 import { authorizePage } from "@/lib/server/authorize";
+
+export const metadata: Metadata = { title: "Outbox" };
 
 export default async function OutboxPage({ params }: { params: Promise<{ club: string }> }) {
   const { club: slug } = await params;

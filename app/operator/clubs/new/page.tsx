@@ -1,6 +1,9 @@
+import type { Metadata } from "next";
 import { CreateClubForm } from "@/components/operator/create-club-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { authorizeOperatorPage } from "@/lib/server/authorize";
+
+export const metadata: Metadata = { title: "New club · Operator console" };
 
 export default async function NewClubPage() {
   await authorizeOperatorPage();

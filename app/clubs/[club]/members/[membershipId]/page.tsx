@@ -1,9 +1,12 @@
+import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ChangeRolesForm, MembershipStatusForm } from "@/components/members/member-admin-forms";
 import { PageHeader } from "@/components/ui/page-header";
 import { getMember } from "@/db/queries/members";
 import { authorizePage } from "@/lib/server/authorize";
+
+export const metadata: Metadata = { title: "Member" };
 
 export default async function MemberPage({ params }: { params: Promise<{ club: string; membershipId: string }> }) {
   const { club: slug, membershipId } = await params;

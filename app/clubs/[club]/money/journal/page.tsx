@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { Metadata } from "next";
 import { Suspense } from "react";
 import { ActionForm } from "@/components/money/action-form";
@@ -67,7 +68,7 @@ export default async function JournalPage({ params }: { params: Promise<{ club: 
       <div className="mt-8 grid gap-6 lg:grid-cols-2">
         <section className="card" aria-labelledby="bal-h">
           <h2 id="bal-h" className="mb-3 text-lg font-bold">Account balances</h2>
-          <div className="overflow-x-auto">
+          <div className="overflow-x-auto" {...scrollArea("Journal entry")}>
             <table className="w-full text-sm">
               <thead><tr className="text-left"><th className="py-1">Account</th><th className="py-1">Type</th><th className="py-1 text-right">Balance</th></tr></thead>
               <tbody>

@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { BankImportForm } from "@/components/money/bank-import-form";
@@ -24,7 +25,7 @@ export default async function ReconciliationPage({ params }: { params: Promise<{
       <section aria-labelledby="st-h">
         <h2 id="st-h" className="mb-2 text-lg font-bold">Statements</h2>
         {statements.length === 0 ? <p className="text-ink-500">No bank statement imported yet.</p> : (
-          <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+          <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Bank statements")}>
             <table className="w-full min-w-[40rem] text-left text-sm" aria-label="Bank statements">
               <thead className="bg-sand-200"><tr><th className="px-3 py-2">Period</th><th className="px-3 py-2">File</th><th className="px-3 py-2 text-right">Closing balance</th><th className="px-3 py-2">Lines matched</th><th className="px-3 py-2">State</th></tr></thead>
               <tbody>

@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { Metadata } from "next";
 import { RecordCheckoutForm, RevokeCheckoutForm } from "@/components/safety/checkout-forms";
 import { SafetyLinks } from "@/components/safety/safety-links";
@@ -28,7 +29,7 @@ export default async function CheckoutsPage({ params, searchParams }: { params: 
       <PageHeader title="Checkouts" lead="Who is checked out in which type group, by which instructor and with what conditions. A member checked out in a group may fly any aircraft in it." />
       <SafetyLinks slug={club.slug} ability={ability} userId={user.id} />
       <p className="mb-3 text-sm">{showHistory ? <a href="?">Show standing checkouts only</a> : <a href="?history=1">Show revoked checkouts too</a>}</p>
-      <div className="mb-6 overflow-x-auto rounded border border-sand-300 bg-white">
+      <div className="mb-6 overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Checkouts")}>
         <table className="w-full min-w-[44rem] text-left text-sm">
           <thead className="bg-sand-200">
             <tr><th scope="col" className="px-3 py-2">Member</th><th scope="col" className="px-3 py-2">Type group</th><th scope="col" className="px-3 py-2">Since</th><th scope="col" className="px-3 py-2">Instructor</th><th scope="col" className="px-3 py-2">Conditions</th><th scope="col" className="px-3 py-2">State</th></tr>

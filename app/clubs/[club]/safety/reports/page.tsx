@@ -1,3 +1,4 @@
+import { scrollArea } from "@/components/ui/scroll-area";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { ReportStatusBadge } from "@/components/safety/status-shapes";
@@ -13,7 +14,7 @@ export const metadata: Metadata = { title: "Safety reports" };
 
 function ReportTable({ slug, rows, officer }: { slug: string; rows: ReportListRow[]; officer: boolean }) {
   return (
-    <div className="overflow-x-auto rounded border border-sand-300 bg-white">
+    <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Safety reports")}>
       <table className="w-full min-w-[40rem] text-left text-sm">
         <thead className="bg-sand-200">
           <tr><th scope="col" className="px-3 py-2">Happened</th><th scope="col" className="px-3 py-2">Where</th><th scope="col" className="px-3 py-2">Summary</th><th scope="col" className="px-3 py-2">State</th>{officer ? <th scope="col" className="px-3 py-2">Filed</th> : null}</tr>
