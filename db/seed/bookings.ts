@@ -36,7 +36,7 @@ const FIGURES: Record<string, Figures> = {
     burnGalPerHour: 6.0, oil: [4, 6], sumps: ["Left tank sump", "Right tank sump", "Gascolator"],
     preflightTanks: [["Left tank", 12], ["Right tank", 12]],
   },
-  "Kestrel K160": {
+  "Fernwhistle F160": {
     empty: [1486, 38.9], maxTakeoff: 2400, maxLanding: null,
     stations: [["Front seats", 37, null], ["Rear seats", 73, null], ["Baggage", 95, 120]],
     tanks: [["Wing tanks", 48, 40]],
@@ -127,10 +127,10 @@ export function seedBookings(db: Db, foundation: SeededFoundation): void {
 
     // A few bookings in the coming days, made as the demo members would make them.
     const plan: { club: string; registration: string; who: string; instructor?: string; inDays: number; from: string; to: string; purpose: string }[] = [
-      { club: "lakeshore", registration: "N0527L", who: "member@hangarline.test", inDays: 1, from: "09:00", to: "11:00", purpose: "Pattern work" },
-      { club: "lakeshore", registration: "N0556L", who: "student@hangarline.test", instructor: "instructor@hangarline.test", inDays: 2, from: "14:00", to: "16:00", purpose: "Dual: stalls and steep turns" },
-      { club: "lakeshore", registration: "N0549L", who: "pilot2@hangarline.test", inDays: 3, from: "08:30", to: "12:30", purpose: "Cross-country to the lake" },
-      { club: "lakeshore", registration: "N0534L", who: "twoclubs@hangarline.test", inDays: 4, from: "10:00", to: "13:00", purpose: "Sightseeing" },
+      { club: "reedwater", registration: "N0527L", who: "member@hangarline.test", inDays: 1, from: "09:00", to: "11:00", purpose: "Pattern work" },
+      { club: "reedwater", registration: "N0556L", who: "student@hangarline.test", instructor: "instructor@hangarline.test", inDays: 2, from: "14:00", to: "16:00", purpose: "Dual: stalls and steep turns" },
+      { club: "reedwater", registration: "N0549L", who: "pilot2@hangarline.test", inDays: 3, from: "08:30", to: "12:30", purpose: "Cross-country to the lake" },
+      { club: "reedwater", registration: "N0534L", who: "twoclubs@hangarline.test", inDays: 4, from: "10:00", to: "13:00", purpose: "Sightseeing" },
       { club: "cottonwood", registration: "N0488C", who: "cottonwood.pilot@hangarline.test", inDays: 2, from: "07:30", to: "09:30", purpose: "Morning local flight" },
       { club: "silberau", registration: "D-0SLB", who: "silberau.pilot@hangarline.test", inDays: 3, from: "10:00", to: "12:00", purpose: "Platzrunden" },
     ];

@@ -35,25 +35,25 @@ type Plane = {
 
 const FLEET: Record<string, Plane[]> = {
   cottonwood: [
-    { registration: "N0471C", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Cottonwood Mesa (X00)", rate: 128, hobbs: 4120.4, tach: 3488.1, instruction: true, annualMonthsAgo: 5, hundredLeft: 46.3, oilLeft: 31.2 },
-    { registration: "N0488C", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Cottonwood Mesa (X00)", rate: 128, hobbs: 3377.9, tach: 2871.6, instruction: true, annualMonthsAgo: 8, hundredLeft: 71.5, oilLeft: 7.4 },
+    { registration: "N0471C", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Cottonwood Mesa (MESAWIND)", rate: 128, hobbs: 4120.4, tach: 3488.1, instruction: true, annualMonthsAgo: 5, hundredLeft: 46.3, oilLeft: 31.2 },
+    { registration: "N0488C", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Cottonwood Mesa (MESAWIND)", rate: 128, hobbs: 3377.9, tach: 2871.6, instruction: true, annualMonthsAgo: 8, hundredLeft: 71.5, oilLeft: 7.4 },
   ],
-  lakeshore: [
-    { registration: "N0512L", make: "Kestrel Aero", model: "K160", typeGroup: "Kestrel K160", homeField: "Lakeshore Field (X01)", rate: 152, hobbs: 5230.7, tach: 4410.2, instruction: true, annualMonthsAgo: 4, hundredLeft: 38.9, oilLeft: 22.5 },
-    { registration: "N0527L", make: "Kestrel Aero", model: "K160", typeGroup: "Kestrel K160", homeField: "Lakeshore Field (X01)", rate: 152, hobbs: 4871.2, tach: 4102.8, instruction: true, annualMonthsAgo: 7, hundredLeft: 63.0, oilLeft: 40.1 },
-    { registration: "N0534L", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer", typeGroup: "Brightwing BW-4", homeField: "Lakeshore Field (X01)", rate: 189, hobbs: 2954.3, tach: 2511.0, annualMonthsAgo: 12, oilLeft: 28.0 },
-    { registration: "N0549L", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer IFR", typeGroup: "Brightwing BW-4", homeField: "Lakeshore Field (X01)", rate: 198, hobbs: 3318.6, tach: 2820.9, ifr: true, annualMonthsAgo: 2, oilLeft: 35.6 },
-    { registration: "N0556L", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Lakeshore Field (X01)", rate: 126, hobbs: 6012.5, tach: 5110.6, instruction: true, annualMonthsAgo: 9, hundredLeft: 82.4, oilLeft: 44.0 },
+  reedwater: [
+    { registration: "N0512L", make: "Fernwhistle", model: "F160", typeGroup: "Fernwhistle F160", homeField: "Reedwater Field (REEDWATER)", rate: 152, hobbs: 5230.7, tach: 4410.2, instruction: true, annualMonthsAgo: 4, hundredLeft: 38.9, oilLeft: 22.5 },
+    { registration: "N0527L", make: "Fernwhistle", model: "F160", typeGroup: "Fernwhistle F160", homeField: "Reedwater Field (REEDWATER)", rate: 152, hobbs: 4871.2, tach: 4102.8, instruction: true, annualMonthsAgo: 7, hundredLeft: 63.0, oilLeft: 40.1 },
+    { registration: "N0534L", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer", typeGroup: "Brightwing BW-4", homeField: "Reedwater Field (REEDWATER)", rate: 189, hobbs: 2954.3, tach: 2511.0, annualMonthsAgo: 12, oilLeft: 28.0 },
+    { registration: "N0549L", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer IFR", typeGroup: "Brightwing BW-4", homeField: "Reedwater Field (REEDWATER)", rate: 198, hobbs: 3318.6, tach: 2820.9, ifr: true, annualMonthsAgo: 2, oilLeft: 35.6 },
+    { registration: "N0556L", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Reedwater Field (REEDWATER)", rate: 126, hobbs: 6012.5, tach: 5110.6, instruction: true, annualMonthsAgo: 9, hundredLeft: 82.4, oilLeft: 44.0 },
   ],
   silberau: [
-    { registration: "D-0SLA", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Flugplatz Silberau (X02)", rate: 139, hobbs: 2210.8, tach: 1879.2, instruction: true, annualMonthsAgo: 6, hundredLeft: 55.0, oilLeft: 26.7 },
-    { registration: "D-0SLB", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer", typeGroup: "Brightwing BW-4", homeField: "Flugplatz Silberau (X02)", rate: 176, hobbs: 1785.3, tach: 1517.5, annualMonthsAgo: 3, oilLeft: 33.3 },
+    { registration: "D-0SLA", make: "Larkspur", model: "L-2 Trainer", typeGroup: "Larkspur L-2", homeField: "Flugplatz Silberau (SILBERAU)", rate: 139, hobbs: 2210.8, tach: 1879.2, instruction: true, annualMonthsAgo: 6, hundredLeft: 55.0, oilLeft: 26.7 },
+    { registration: "D-0SLB", tailwheel: true, make: "Brightwing", model: "BW-4 Tourer", typeGroup: "Brightwing BW-4", homeField: "Flugplatz Silberau (SILBERAU)", rate: 176, hobbs: 1785.3, tach: 1517.5, annualMonthsAgo: 3, oilLeft: 33.3 },
   ],
 };
 
 const MECHANICS: Record<string, { name: string; certificate: string }[]> = {
   cottonwood: [{ name: "Ardith Sorensby", certificate: "A&P 0004417 IA" }],
-  lakeshore: [{ name: "Hollis Fairbank", certificate: "A&P 0003902 IA" }, { name: "Petra Voskuijlen", certificate: "A&P 0005168" }],
+  reedwater: [{ name: "Hollis Fairbank", certificate: "A&P 0003902 IA" }, { name: "Petra Voskuijlen", certificate: "A&P 0005168" }],
   silberau: [{ name: "Jannik Oberwald", certificate: "Part-66 X0-66-0000-0417" }],
 };
 
@@ -187,10 +187,10 @@ export function seedFleet(db: Db, foundation: SeededFoundation): void {
       const club = rows.find((c) => c.id === clubIds[key]);
       if (!club) continue;
       const members = clubMembers(key, userIds);
-      const mechanicUser = key === "lakeshore" ? userIds["mechanic@hangarline.test"] : undefined;
+      const mechanicUser = key === "reedwater" ? userIds["mechanic@hangarline.test"] : undefined;
       planes.forEach((p, i) => (ids[p.registration] = seedPlane(tx, club, key, p, i, members, mechanicUser)));
     }
-    const lake = clubIds.lakeshore!;
+    const lake = clubIds.reedwater!;
     const member = userIds["member@hangarline.test"]!;
     const maint = userIds["maintenance@hangarline.test"]!;
     const today = isoDateInTimeZone(new Date(), rows.find((c) => c.id === lake)!.timeZone);

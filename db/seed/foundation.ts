@@ -13,7 +13,7 @@ export async function seedFoundation(db: Db, opts: { joinedOn?: string } = {}): 
   return db.transaction((tx) => {
     const clubIds: Record<string, string> = {};
     for (const c of DEMO_CLUBS) {
-      const settings = defaultClubSettings({ ...(c.key === "lakeshore" ? { recencyDaysInType: 60 } : {}), homeLatitude: c.home.latitude, homeLongitude: c.home.longitude });
+      const settings = defaultClubSettings({ ...(c.key === "reedwater" ? { recencyDaysInType: 60 } : {}), homeLatitude: c.home.latitude, homeLongitude: c.home.longitude });
       const [row] = tx.insert(clubs).values({ slug: c.slug, name: c.name, timeZone: c.timeZone, currency: c.currency, locale: defaultLocaleFor(c.currency, c.timeZone), unitSystem: c.unitSystem, settings }).returning({ id: clubs.id }).all();
       clubIds[c.key] = row!.id;
     }

@@ -1,6 +1,6 @@
 // The invented money history of the demo clubs, computed from the day the seed runs: four
 // months of dues (billing runs, so statements exist), every seeded flight charged, most members
-// paying by card or cheque, one member in arrears (pilot2@ in Lakeshore), and Cottonwood's
+// paying by card or cheque, one member in arrears (pilot2@ in Reedwater), and Cottonwood's
 // bank reconciled and locked through the month before last (its last month is left to do).
 import { and, eq } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
@@ -21,11 +21,11 @@ import { autoMatchStatement } from "@/db/queries/money-reconcile-match";
 import { bookBankLine, lockPeriod } from "@/db/queries/money-reconcile-edits";
 import type { SeededFoundation } from "./foundation";
 
-type ClubKey = "cottonwood" | "lakeshore" | "silberau";
+type ClubKey = "cottonwood" | "reedwater" | "silberau";
 
 const SETTINGS: Record<ClubKey, { lateFeeFlatMinor: number; fuelCreditCapPerUnitMinor: number; openingMinor: number }> = {
   cottonwood: { lateFeeFlatMinor: 1000, fuelCreditCapPerUnitMinor: 640, openingMinor: 920_000 },
-  lakeshore: { lateFeeFlatMinor: 1500, fuelCreditCapPerUnitMinor: 660, openingMinor: 1_850_000 },
+  reedwater: { lateFeeFlatMinor: 1500, fuelCreditCapPerUnitMinor: 660, openingMinor: 1_850_000 },
   silberau: { lateFeeFlatMinor: 1000, fuelCreditCapPerUnitMinor: 245, openingMinor: 1_400_000 },
 };
 
@@ -34,7 +34,7 @@ const PLANS: Record<ClubKey, { name: string; period: "monthly" | "quarterly" | "
     { name: "Full member, quarterly", period: "quarterly", category: "full", amountMinor: 24_000 },
     { name: "Student pilot, monthly", period: "monthly", category: "student", amountMinor: 4_000 },
   ],
-  lakeshore: [
+  reedwater: [
     { name: "Full member, monthly", period: "monthly", category: "full", amountMinor: 9_500 },
     { name: "Student pilot, monthly", period: "monthly", category: "student", amountMinor: 4_500 },
     { name: "Inactive member, annual", period: "annual", category: "inactive", amountMinor: 12_000 },
@@ -48,7 +48,7 @@ const PLANS: Record<ClubKey, { name: string; period: "monthly" | "quarterly" | "
 // Invented cost figures for the hourly-rate calculator (own round numbers, not any real aircraft's).
 const RATES: Record<ClubKey, { name: string; fixedAnnualCostsMinor: number; expectedHours: number; fuelBurnTenthsPerHour: number; fuelPriceMinor: number; oilPerHourMinor: number; maintenanceReservePerHourMinor: number; overhaulCostMinor: number; tboHours: number }> = {
   cottonwood: { name: "N0471C Larkspur L-2", fixedAnnualCostsMinor: 1_440_000, expectedHours: 320, fuelBurnTenthsPerHour: 62, fuelPriceMinor: 640, oilPerHourMinor: 120, maintenanceReservePerHourMinor: 1_800, overhaulCostMinor: 2_600_000, tboHours: 2_000 },
-  lakeshore: { name: "N0512L Kestrel K160", fixedAnnualCostsMinor: 1_800_000, expectedHours: 300, fuelBurnTenthsPerHour: 85, fuelPriceMinor: 660, oilPerHourMinor: 150, maintenanceReservePerHourMinor: 1_200, overhaulCostMinor: 3_000_000, tboHours: 2_000 },
+  reedwater: { name: "N0512L Fernwhistle F160", fixedAnnualCostsMinor: 1_800_000, expectedHours: 300, fuelBurnTenthsPerHour: 85, fuelPriceMinor: 660, oilPerHourMinor: 150, maintenanceReservePerHourMinor: 1_200, overhaulCostMinor: 3_000_000, tboHours: 2_000 },
   silberau: { name: "D-0SLA Larkspur L-2", fixedAnnualCostsMinor: 1_250_000, expectedHours: 260, fuelBurnTenthsPerHour: 240, fuelPriceMinor: 245, oilPerHourMinor: 110, maintenanceReservePerHourMinor: 1_500, overhaulCostMinor: 2_400_000, tboHours: 2_000 },
 };
 
@@ -155,10 +155,10 @@ function reconcileMonth(tx: Tx, ctx: Ctx, month: string, lock: boolean): void {
 
 export function seedMoney(db: Db, foundation: SeededFoundation, opts: { now?: Date } = {}): void {
   db.transaction((tx) => {
-    for (const key of ["cottonwood", "lakeshore", "silberau"] as const) {
+    for (const key of ["cottonwood", "reedwater", "silberau"] as const) {
       const club = tx.select().from(clubs).where(eq(clubs.id, foundation.clubIds[key]!)).get()!;
       const today = isoDateInTimeZone(opts.now ?? new Date(), club.timeZone);
-      const treasurer = Object.entries(foundation.userIds).find(([email]) => email === (key === "lakeshore" ? "treasurer@hangarline.test" : key === "cottonwood" ? "cottonwood.admin@hangarline.test" : "silberau.admin@hangarline.test"));
+      const treasurer = Object.entries(foundation.userIds).find(([email]) => email === (key === "reedwater" ? "treasurer@hangarline.test" : key === "cottonwood" ? "cottonwood.admin@hangarline.test" : "silberau.admin@hangarline.test"));
       const members = tx.select().from(memberships).where(eq(memberships.clubId, club.id)).all().filter((m) => m.roles.includes("member"));
       const emails = new Map(Object.entries(foundation.userIds).map(([email, id]) => [id, email]));
       const ctx: Ctx = { key, club, user: treasurer ? { id: treasurer[1] } : null, today, members: members.map((m) => ({ userId: m.userId, email: emails.get(m.userId) ?? "" })), seq: { n: 0 } };
@@ -194,8 +194,8 @@ export function seedMoney(db: Db, foundation: SeededFoundation, opts: { now?: Da
         reconcileMonth(tx, ctx, shiftMonthKey(m0, -3), true);
         reconcileMonth(tx, ctx, shiftMonthKey(m0, -2), true);
       }
-      // Lakeshore's treasurer has imported three months and not finished: bank fees to post.
-      if (key === "lakeshore") for (const k of [-3, -2, -1]) reconcileMonth(tx, ctx, shiftMonthKey(m0, k), false);
+      // Reedwater's treasurer has imported three months and not finished: bank fees to post.
+      if (key === "reedwater") for (const k of [-3, -2, -1]) reconcileMonth(tx, ctx, shiftMonthKey(m0, k), false);
     }
   });
 }

@@ -36,19 +36,19 @@ function acknowledge(tx: Tx, clubId: string, bulletinId: string, userIds: string
   tx.insert(bulletinAcknowledgements).values(userIds.map((userId, i) => ({ clubId, bulletinId, userId, acknowledgedAt: ago(daysAgo - i * 0.1) }))).run();
 }
 
-function seedLakeshoreBulletins(tx: Tx, clubId: string, u: Ids, today: string) {
+function seedReedwaterBulletins(tx: Tx, clubId: string, u: Ids, today: string) {
   const safety = u["safety@hangarline.test"]!;
   const v1 = newId();
   const v2 = newId();
   insertBulletin(tx, {
-    id: v1, clubId, version: 1, status: "published", title: "Brake check on the Kestrels", urgency: "priority", audience: "type_group", audienceTypeGroup: "Kestrel K160",
+    id: v1, clubId, version: 1, status: "published", title: "Brake check on the Fernwhistles", urgency: "priority", audience: "type_group", audienceTypeGroup: "Fernwhistle F160",
     bodyMarkdown: "Before taxi, press each brake pedal firmly and hold it for five seconds. A pedal that sinks means **no flight**: report a squawk.",
     createdById: safety, publishedById: safety, publishedAt: ago(12), supersededAt: ago(3), supersededById: v2, createdAt: ago(12), updatedAt: ago(3),
   });
   insertBulletin(tx, {
-    id: v2, seriesId: v1, supersedesId: v1, clubId, version: 2, status: "published", title: "Brake check on the Kestrels (revised)", urgency: "priority", audience: "type_group", audienceTypeGroup: "Kestrel K160",
+    id: v2, seriesId: v1, supersedesId: v1, clubId, version: 2, status: "published", title: "Brake check on the Fernwhistles (revised)", urgency: "priority", audience: "type_group", audienceTypeGroup: "Fernwhistle F160",
     bodyMarkdown: [
-      "A Kestrel was grounded this week with a brake that faded on the rollout. Until maintenance has looked at the whole type:",
+      "A Fernwhistle was grounded this week with a brake that faded on the rollout. Until maintenance has looked at the whole type:",
       "- Before taxi, press each brake pedal firmly and hold it for **five seconds**.",
       "- Look at each wheel fairing for fluid during the walk-around.",
       "- A pedal that sinks, or any fluid, means *no flight*: report a squawk and tell the safety officer.",
@@ -68,16 +68,16 @@ function seedLakeshoreBulletins(tx: Tx, clubId: string, u: Ids, today: string) {
   acknowledge(tx, clubId, winter, ["instructor@hangarline.test", "admin@hangarline.test", "treasurer@hangarline.test", "maintenance@hangarline.test", "pilot2@hangarline.test"].map((e) => u[e]!), 18);
 
   insertBulletin(tx, {
-    id: newId(), clubId, version: 1, status: "draft", title: "Runway works at Lakeshore Field (X01)", urgency: "urgent", audience: "everyone",
+    id: newId(), clubId, version: 1, status: "draft", title: "Runway works at Reedwater Field (REEDWATER)", urgency: "urgent", audience: "everyone",
     bodyMarkdown: "The west end of the runway closes for resurfacing. Dates and the displaced threshold to follow.", createdById: safety, createdAt: ago(1), updatedAt: ago(1),
   });
 }
 
-function seedLakeshoreReports(tx: Tx, clubId: string, u: Ids, today: string, plane: string | undefined, timeZone: string) {
+function seedReedwaterReports(tx: Tx, clubId: string, u: Ids, today: string, plane: string | undefined, timeZone: string) {
   const named = newId();
   tx.insert(safetyReports).values({
     id: named, clubId, reporterId: u["member@hangarline.test"]!, anonymous: false, occurredOn: addDays(today, -6), occurredTime: "16:40",
-    location: "Lakeshore Field (X01), taxiway B by the fuel pit", aircraftId: plane ?? null,
+    location: "Reedwater Field (REEDWATER), taxiway B by the fuel pit", aircraftId: plane ?? null,
     whatHappened: "Taxiing back after landing I met a fuel truck crossing taxiway B without stopping. I braked hard and we stopped about thirty feet apart. The truck driver had not heard the radio call.",
     contributingFactors: ["communication", "procedures"], factorsNote: "The fuel pit has no hold line painted on the truck's side.", status: "reviewing", createdAt: ago(6), updatedAt: ago(5),
   }).run();
@@ -85,7 +85,7 @@ function seedLakeshoreReports(tx: Tx, clubId: string, u: Ids, today: string, pla
   // Anonymous: no reporter column value at all, and the instant is the start of the club day it arrived on.
   const day = startOfClubDay(addDays(today, -2), timeZone);
   tx.insert(safetyReports).values({
-    clubId, anonymous: true, occurredOn: addDays(today, -2), location: "Lakeshore Field (X01), tie-down row C",
+    clubId, anonymous: true, occurredOn: addDays(today, -2), location: "Reedwater Field (REEDWATER), tie-down row C",
     whatHappened: "The fuel sample from the left sump showed water twice before it ran clear. The previous pilot had logged no fuel. I kept draining until it was clean and flew, but I think the cap seal may let rain in.",
     contributingFactors: ["aircraft_equipment", "weather"], status: "received", createdAt: day, updatedAt: day,
   }).run();
@@ -106,7 +106,7 @@ function doc(tx: Tx, clubId: string, userId: string, d: { kind: (typeof memberDo
   tx.insert(memberDocuments).values({ clubId, userId, kind: d.kind, issuedOn: d.issuedOn, expiresOn, reference: d.reference ?? null, details: d.details ?? null, recordedById: userId, verifiedById: d.verifiedBy, verifiedAt: ago(2) }).run();
 }
 
-function seedLakeshorePeople(tx: Tx, clubId: string, u: Ids, today: string) {
+function seedReedwaterPeople(tx: Tx, clubId: string, u: Ids, today: string) {
   const member = u["member@hangarline.test"]!;
   const instructor = u["instructor@hangarline.test"]!;
   const officer = u["safety@hangarline.test"]!;
@@ -131,29 +131,29 @@ function seedLakeshorePeople(tx: Tx, clubId: string, u: Ids, today: string) {
 
   tx.insert(outsideFlightEntries).values([
     {
-      clubId, userId: member, flownOn: addDays(today, -31), aircraftDescription: "Larkspur L-2 rented at Pinecrest Strip (X03)", typeGroup: "Larkspur L-2", dayLandings: 2, nightFullStopLandings: 3, note: "Night checkout refresher",
+      clubId, userId: member, flownOn: addDays(today, -31), aircraftDescription: "Larkspur L-2 rented at Pinecrest Strip (PINESTRIP)", typeGroup: "Larkspur L-2", dayLandings: 2, nightFullStopLandings: 3, note: "Night checkout refresher",
       category: "Airplane", classRating: "Single-engine land", tailwheel: false, dayFullStopLandings: 2, verifiedById: instructor, verifiedAt: ago(30),
     },
     // Still the member's own claim: shown on the board, never counted by a booking guard.
-    { clubId, userId: member, flownOn: addDays(today, -45), aircraftDescription: "Tailwheel trainer, Pinecrest Strip (X03)", dayLandings: 6, nightFullStopLandings: 0, category: "Airplane", classRating: "Single-engine land", tailwheel: true, dayFullStopLandings: 6 },
+    { clubId, userId: member, flownOn: addDays(today, -45), aircraftDescription: "Tailwheel trainer, Pinecrest Strip (PINESTRIP)", dayLandings: 6, nightFullStopLandings: 0, category: "Airplane", classRating: "Single-engine land", tailwheel: true, dayFullStopLandings: 6 },
   ]).run();
 }
 
-function seedLakeshoreCheckouts(tx: Tx, clubId: string, u: Ids, today: string) {
+function seedReedwaterCheckouts(tx: Tx, clubId: string, u: Ids, today: string) {
   const by = u["instructor@hangarline.test"]!;
   const cert = "CFI 0007719";
   const rows: { email: string; group: string; daysAgo: number; conditions?: string; revoked?: { daysAgo: number; reason: string } }[] = [
     { email: "member@hangarline.test", group: "Larkspur L-2", daysAgo: 600 },
-    { email: "member@hangarline.test", group: "Kestrel K160", daysAgo: 240, conditions: "Day VFR only until a night check flight in type" },
+    { email: "member@hangarline.test", group: "Fernwhistle F160", daysAgo: 240, conditions: "Day VFR only until a night check flight in type" },
     { email: "student@hangarline.test", group: "Larkspur L-2", daysAgo: 45, conditions: "Solo in the local practice area only; no passengers" },
-    { email: "pilot2@hangarline.test", group: "Kestrel K160", daysAgo: 700 },
+    { email: "pilot2@hangarline.test", group: "Fernwhistle F160", daysAgo: 700 },
     { email: "pilot2@hangarline.test", group: "Brightwing BW-4", daysAgo: 500 },
     { email: "pilot2@hangarline.test", group: "Larkspur L-2", daysAgo: 900, revoked: { daysAgo: 30, reason: "Not flown in type for over a year; a check flight is needed first" } },
-    { email: "safety@hangarline.test", group: "Kestrel K160", daysAgo: 400 },
+    { email: "safety@hangarline.test", group: "Fernwhistle F160", daysAgo: 400 },
     { email: "safety@hangarline.test", group: "Brightwing BW-4", daysAgo: 380 },
     { email: "admin@hangarline.test", group: "Larkspur L-2", daysAgo: 800 },
     { email: "treasurer@hangarline.test", group: "Larkspur L-2", daysAgo: 640 },
-    { email: "maintenance@hangarline.test", group: "Kestrel K160", daysAgo: 520 },
+    { email: "maintenance@hangarline.test", group: "Fernwhistle F160", daysAgo: 520 },
     { email: "twoclubs@hangarline.test", group: "Larkspur L-2", daysAgo: 300 },
   ];
   tx.insert(checkouts).values(rows.map((r) => ({
@@ -192,14 +192,14 @@ export function seedSafety(db: Db, foundation: SeededFoundation): void {
     if (c) byKey[key] = c;
   }
   db.transaction((tx) => {
-    const lake = byKey.lakeshore;
+    const lake = byKey.reedwater;
     if (lake) {
       const today = isoDateInTimeZone(new Date(), lake.timeZone);
-      const plane = tx.select({ id: aircraft.id }).from(aircraft).where(and(eq(aircraft.clubId, lake.id), eq(aircraft.typeGroup, "Kestrel K160"))).get()?.id;
-      seedLakeshoreBulletins(tx, lake.id, userIds, today);
-      seedLakeshoreReports(tx, lake.id, userIds, today, plane, lake.timeZone);
-      seedLakeshorePeople(tx, lake.id, userIds, today);
-      seedLakeshoreCheckouts(tx, lake.id, userIds, today);
+      const plane = tx.select({ id: aircraft.id }).from(aircraft).where(and(eq(aircraft.clubId, lake.id), eq(aircraft.typeGroup, "Fernwhistle F160"))).get()?.id;
+      seedReedwaterBulletins(tx, lake.id, userIds, today);
+      seedReedwaterReports(tx, lake.id, userIds, today, plane, lake.timeZone);
+      seedReedwaterPeople(tx, lake.id, userIds, today);
+      seedReedwaterCheckouts(tx, lake.id, userIds, today);
     }
     seedOtherClubs(tx, byKey, userIds);
   });

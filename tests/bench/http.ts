@@ -44,7 +44,7 @@ const seconds = Number(process.env.BENCH_SECONDS ?? 10);
 const only = process.env.BENCH_ONLY;
 const dumpDir = process.env.BENCH_DUMP ? path.resolve(process.env.BENCH_DUMP) : null;
 const cpuProfDir = process.env.BENCH_CPU_PROF ? path.resolve(process.env.BENCH_CPU_PROF) : null;
-const DEMO_CLUB = "lakeshore-aero";
+const DEMO_CLUB = "reedwater";
 const DEMO_MEMBER = "member@hangarline.test";
 const BENCH_CLUB = "bench-club";
 

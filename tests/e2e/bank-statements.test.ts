@@ -3,10 +3,10 @@ import { isoDateInTimeZone } from "@/lib/dates";
 import { ofxFile, twoAccounts } from "../fixtures/ofx-two-accounts";
 import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harness";
 
-// Lakeshore's treasurer imports an OFX file holding two accounts (invented), chooses the savings
+// Reedwater's treasurer imports an OFX file holding two accounts (invented), chooses the savings
 // account, corrects its closing balance and removes the statement. The period is this month in
 // the club's time zone, which no other test locks.
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 const BASE = `/clubs/${SLUG}/money/reconciliation`;
 
 function thisMonth(): { start: string; end: string } {

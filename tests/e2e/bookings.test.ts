@@ -4,7 +4,7 @@ import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harne
 
 // A member on a phone: book an aircraft, work out weight and balance (the envelope chart with
 // both points), record a preflight with a finding that becomes a squawk, begin the flight, close the flight sheet.
-// Uses the seeded N0527L in the Lakeshore club, far enough ahead not to meet the seeded bookings.
+// Uses the seeded N0527L in the Reedwater club, far enough ahead not to meet the seeded bookings.
 
 const PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
 
@@ -27,7 +27,7 @@ describe("the booking page on a desktop", () => {
     const page = await newPage("desktop");
     try {
       await signIn(page, "member@hangarline.test");
-      await page.goto("/clubs/lakeshore-aero/bookings?days=7", { waitUntil: "networkidle" });
+      await page.goto("/clubs/reedwater/bookings?days=7", { waitUntil: "networkidle" });
       await page.locator('section[data-aircraft="N0527L"]').getByRole("heading", { name: "N0527L", exact: true }).waitFor();
       await page.getByRole("link", { name: /^Book N0527L .* from \d\d:\d\d$/ }).first().waitFor();
       await expectNoHorizontalOverflow(page);
@@ -60,7 +60,7 @@ async function flow(page: Page) {
   // BOOKINGS_E2E_DAYS moves the day when rerunning against a database kept from an earlier run.
   // A retried run books another day, so it never meets its own earlier booking.
   const day = localDay(Number(process.env.BOOKINGS_E2E_DAYS ?? 11 + Math.floor(Math.random() * 40)), "America/Chicago");
-  await page.goto(`/clubs/lakeshore-aero/bookings?from=${day}&days=3`, { waitUntil: "networkidle" });
+  await page.goto(`/clubs/reedwater/bookings?from=${day}&days=3`, { waitUntil: "networkidle" });
   await page.getByRole("heading", { name: "Bookings", exact: true }).waitFor();
   await page.getByText("The pilot in command decides airworthiness.").first().waitFor();
   const card = page.locator('section[data-aircraft="N0527L"]');
@@ -97,7 +97,7 @@ async function flow(page: Page) {
   await expectNoHorizontalOverflow(page);
 
   // Back on the booking page, the booking is listed in words where the free time was.
-  await page.goto(`/clubs/lakeshore-aero/bookings?from=${day}&days=3`, { waitUntil: "networkidle" });
+  await page.goto(`/clubs/reedwater/bookings?from=${day}&days=3`, { waitUntil: "networkidle" });
   await card.locator(`li[data-day="${day}"]`).getByRole("link", { name: new RegExp(`^${from}–\\d\\d:\\d\\d · Rowan Pike with Imani Ostrowski \\(you\\)$`) }).waitFor();
   await page.goto(bookingUrl, { waitUntil: "networkidle" });
 
@@ -119,7 +119,7 @@ async function flow(page: Page) {
   await chart.locator(".recharts-scatter-symbol path.recharts-symbols").first().waitFor();
   expect(await chart.locator(".recharts-scatter-symbol path.recharts-symbols").count()).toBe(2);
   expect(await chart.locator(".recharts-scatter-line path, .recharts-scatter-line").count()).toBeGreaterThanOrEqual(1);
-  // Our arithmetic on the seeded K160 figures: 1486 + 360 + 25 + 216 (36 gal × 6 lb, FAA-H-8083-25)
+  // Our arithmetic on the seeded F160 figures: 1486 + 360 + 25 + 216 (36 gal × 6 lb, FAA-H-8083-25)
   // = 2087 lb, moment 83868.4 → CG 40.2 in; 72 lb burned at 48 in → 2015 lb, CG 39.9 in.
   await chart.getByRole("row", { name: /Takeoff 2,087 40\.2/ }).waitFor();
   await chart.getByRole("row", { name: /Landing 2,015 39\.9/ }).waitFor();
@@ -139,7 +139,7 @@ async function flow(page: Page) {
   await pf.getByRole("button", { name: "Record the preflight" }).click();
   await page.getByText(/Preflight recorded with 1 finding; 1 reported as squawk for maintenance/).waitFor();
   await expectNoHorizontalOverflow(page);
-  const squawks = (await (await page.request.get(`/api/clubs/lakeshore-aero/squawks?aircraftId=${plane}&status=open`)).json()) as { squawks: { description: string; foundDuring: string }[] };
+  const squawks = (await (await page.request.get(`/api/clubs/reedwater/squawks?aircraftId=${plane}&status=open`)).json()) as { squawks: { description: string; foundDuring: string }[] };
   expect(squawks.squawks.some((s) => s.foundDuring === "preflight" && s.description.includes("Left main tire worn through the tread"))).toBe(true);
 
   // Beginning the flight confirms the record (its finding needs the extra tick), then the flight sheet.

@@ -13,7 +13,7 @@ import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harne
 describe("the treasurer's books", () => {
   it("enters a bill, pays it, reconciles it and sees it in the month's profit and loss", async () => {
     const db = openDatabase(path.join(inject("dataDir"), "e2e.db"));
-    const club = db.select().from(clubs).where(eq(clubs.slug, "lakeshore-aero")).get()!;
+    const club = db.select().from(clubs).where(eq(clubs.slug, "reedwater")).get()!;
     db.$client.close();
     const today = isoDateInTimeZone(new Date(), club.timeZone);
     const cents = 100 + Math.floor(Math.random() * 400);
@@ -22,7 +22,7 @@ describe("the treasurer's books", () => {
 
     const page = await newPage("desktop");
     await signIn(page, "treasurer@hangarline.test");
-    await page.goto("/clubs/lakeshore-aero/money/bills");
+    await page.goto("/clubs/reedwater/money/bills");
     const enter = page.getByRole("form", { name: "Enter a bill" });
     await enter.getByLabel("Vendor").fill(vendor);
     await enter.getByLabel("Invoice number (optional)").fill(`TD-${cents}`);
@@ -38,7 +38,7 @@ describe("the treasurer's books", () => {
     await pay.getByRole("status").filter({ hasText: `Paid: $${amount} to ${vendor} from the bank on ${today}.` }).waitFor();
 
     // The bank's statement shows the payment going out; importing it matches the line to the payment.
-    await page.goto("/clubs/lakeshore-aero/money/reconciliation");
+    await page.goto("/clubs/reedwater/money/reconciliation");
     const form = page.getByRole("form", { name: "Import a bank statement" });
     const csv = `Date,Description,Amount,Reference\r\n${today},${vendor.toUpperCase()},-${amount},TD-${cents}\r\n`;
     await form.getByLabel("Statement file").setInputFiles({ name: `bank-bill-${cents}.csv`, mimeType: "text/csv", buffer: Buffer.from(csv) });
@@ -49,7 +49,7 @@ describe("the treasurer's books", () => {
     await expect(line.getByText(/Matched: /).first().textContent()).resolves.toMatch(/Matched: (same reference|same amount and date)/);
 
     // The month's profit and loss lists the expense under its category.
-    await page.goto(`/clubs/lakeshore-aero/money/reports/profit-and-loss?from=${today.slice(0, 7)}-01&to=${today}`);
+    await page.goto(`/clubs/reedwater/money/reports/profit-and-loss?from=${today.slice(0, 7)}-01&to=${today}`);
     const row = page.getByRole("row").filter({ hasText: "Hangar and tie-down" });
     const text = (await row.textContent()) ?? "";
     expect(text).toMatch(/hangar-tie-down.*Hangar and tie-down/);
@@ -64,7 +64,7 @@ describe("the treasurer's books", () => {
     const monthShort = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"][Number(mm) - 1]!;
     const budget = `${5000 + cents}.00`;
     const budgetShown = `$${(5000 + cents).toLocaleString("en-US")}.00`;
-    await page.goto(`/clubs/lakeshore-aero/money/reports/budget?year=${year}&month=${mm}`);
+    await page.goto(`/clubs/reedwater/money/reports/budget?year=${year}&month=${mm}`);
     const grid = page.getByRole("form", { name: `Budget for ${year}` });
     await grid.getByLabel(`Hangar and tie-down, ${monthShort} ${year}`).fill(budget);
     await grid.getByRole("button", { name: "Save budget" }).click();
@@ -80,7 +80,7 @@ describe("the treasurer's books", () => {
     await screenshot(page, "books-budget-desktop");
 
     // A recurring bill: saved, then its due bill entered once.
-    await page.goto("/clubs/lakeshore-aero/money/bills/recurring");
+    await page.goto("/clubs/reedwater/money/bills/recurring");
     const recurring = page.getByRole("form", { name: "Add a recurring bill" });
     const lease = `Cove Hangar Trust ${cents}`;
     await recurring.getByLabel("Vendor").fill(lease);
@@ -94,14 +94,14 @@ describe("the treasurer's books", () => {
     await expect(produce.getByRole("status").filter({ hasText: /bills? entered/ }).textContent()).resolves.toContain(`${lease} ${today.slice(0, 7)}`);
     await screenshot(page, "books-recurring-desktop");
 
-    await page.goto("/clubs/lakeshore-aero/money/reports/year-end");
+    await page.goto("/clubs/reedwater/money/reports/year-end");
     await page.getByRole("table", { name: /The closing entry, dated \d{4}-12-31/ }).waitFor();
     await screenshot(page, "books-year-end-desktop");
 
     const phone = await newPage("phone");
     await signIn(phone, "treasurer@hangarline.test");
     for (const [path_, name] of [[`/money/reports/budget?year=${year}&month=${mm}`, "budget"], ["/money/bills/recurring", "recurring"], ["/money/reports/year-end", "year-end"]] as const) {
-      await phone.goto(`/clubs/lakeshore-aero${path_}`);
+      await phone.goto(`/clubs/reedwater${path_}`);
       await phone.getByRole("heading", { level: 1 }).waitFor();
       await expectNoHorizontalOverflow(phone);
       await screenshot(phone, `books-${name}-phone`);

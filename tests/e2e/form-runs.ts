@@ -1,13 +1,13 @@
 // Forms submitted one after another in a real browser, shared by the 50-forms browser test
 // (tests/e2e/forms.test.ts) and the write-path probe (`npm run bench:forms`, tests/bench/forms.ts).
-// Seven kinds in turn, by four demo roles of the Lakeshore club on N0549L (no other browser test
+// Seven kinds in turn, by four demo roles of the Reedwater club on N0549L (no other browser test
 // uses that aircraft): report a squawk, triage it, issue a grounding notice, lift it, invite a
 // member, publish a bulletin, acknowledge it. Each submission is timed from the click to its own
 // answer being visible (the form's role="status" text, or the page the answer sends it to).
 // No vitest imports here: the probe runs outside vitest.
 import type { Browser, Locator, Page } from "playwright-core";
 
-export const FORMS_CLUB = "/clubs/lakeshore-aero";
+export const FORMS_CLUB = "/clubs/reedwater";
 export const FORMS_REG = "N0549L";
 const PASSWORD = "hangar-demo-2026";
 

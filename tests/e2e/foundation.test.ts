@@ -13,7 +13,7 @@ describe("signing in and the navigation each role sees", () => {
   it("a member sees the member sections and no officer ones", async () => {
     const page = await newPage("desktop");
     await signIn(page, "member@hangarline.test");
-    await page.waitForURL(/\/clubs\/lakeshore-aero$/);
+    await page.waitForURL(/\/clubs\/reedwater$/);
     const labels = await navLabels(page);
     expect(labels).toEqual(expect.arrayContaining(["Club home", "Flight line", "Members", "My account"]));
     expect(labels).not.toContain("Money");
@@ -45,7 +45,7 @@ describe("signing in and the navigation each role sees", () => {
     const page = await newPage("desktop");
     await signIn(page, "operator@hangarline.test");
     await page.goto("/operator");
-    for (const name of ["Cottonwood Flyers", "Lakeshore Aero Club", "Aeroclub Silberau"]) {
+    for (const name of ["Cottonwood Flyers", "Reedwater Flying Society", "Aeroclub Silberau"]) {
       await page.getByRole("heading", { name }).waitFor();
     }
     expect(await page.getByText("rowan", { exact: false }).count()).toBe(0);
@@ -56,8 +56,8 @@ describe("signing in and the navigation each role sees", () => {
     const page = await newPage("desktop");
     await signIn(page, "twoclubs@hangarline.test");
     await page.waitForURL(/\/clubs$/);
-    await page.getByRole("link", { name: "Lakeshore Aero Club" }).click();
-    await page.waitForURL(/\/clubs\/lakeshore-aero$/);
+    await page.getByRole("link", { name: "Reedwater Flying Society" }).click();
+    await page.waitForURL(/\/clubs\/reedwater$/);
     await page.locator("aside").getByLabel("Switch club").selectOption("cottonwood-flyers");
     await page.waitForURL(/\/clubs\/cottonwood-flyers$/);
     await page.getByRole("heading", { level: 1, name: "Cottonwood Flyers" }).waitFor();
@@ -67,7 +67,7 @@ describe("signing in and the navigation each role sees", () => {
   it("the home page fits a phone with no sideways scrolling", async () => {
     const page = await newPage("phone");
     await signIn(page, "member@hangarline.test");
-    await page.waitForURL(/\/clubs\/lakeshore-aero$/);
+    await page.waitForURL(/\/clubs\/reedwater$/);
     // The page streams in behind its loading outline; React reveals it a moment after the load event.
     await page.getByRole("heading", { level: 1 }).waitFor();
     await expectNoHorizontalOverflow(page);
@@ -95,7 +95,7 @@ describe("signing in and the navigation each role sees", () => {
     await page.getByText("Imani Ostrowski").first().waitFor({ state: "attached" });
     await page.locator("aside").getByRole("button", { name: "Sign out" }).click();
     await page.waitForURL(/signedOut=1/);
-    await page.goto("/clubs/lakeshore-aero");
+    await page.goto("/clubs/reedwater");
     await page.waitForURL(/\/sign-in/);
     await page.context().close();
   });
@@ -151,7 +151,7 @@ describe("tenant isolation", () => {
     expect(pages.length).toBeGreaterThan(3);
     expect(apis.length).toBeGreaterThan(1);
     const page = await newPage("desktop");
-    await signIn(page, "member@hangarline.test"); // Lakeshore only
+    await signIn(page, "member@hangarline.test"); // Reedwater only
     const failures: string[] = [];
     for (const route of pages) {
       const url = fill(route, "cottonwood-flyers");
@@ -168,7 +168,7 @@ describe("tenant isolation", () => {
       }
     }
     // The same routes exist for the member's own club (so the 404s above are not just typos).
-    const own = await page.request.get("/clubs/lakeshore-aero/members");
+    const own = await page.request.get("/clubs/reedwater/members");
     expect(own.status()).toBe(200);
     expect(failures).toEqual([]);
     await page.context().close();

@@ -5,7 +5,7 @@ import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
 import { baseUrl, newPage, signIn } from "./harness";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 
 function expectFixedHeaders(res: Response, what: string) {
   const h = res.headers;

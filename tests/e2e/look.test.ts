@@ -3,9 +3,9 @@ import { describe, expect, it } from "vitest";
 import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harness";
 
 // Our own status mark and due view, instants in the club's words, and touch targets on the phone.
-// Uses Lakeshore Aero's N0556L (no other browser test relies on it); its notice takes effect in
+// Uses Reedwater's N0556L (no other browser test relies on it); its notice takes effect in
 // 2199, so it never grounds the aircraft for anyone else. No retries, no sleeps.
-const CLUB = "/clubs/lakeshore-aero";
+const CLUB = "/clubs/reedwater";
 const REG = "N0556L";
 const ANSWER = { timeout: 120_000 };
 const STATUS_WORD = /^(Flyable|Flyable with limits|Grounded|Status unknown)$/;

@@ -7,7 +7,7 @@ import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harne
 // An all-OK preflight on a phone, counted tap by tap: one "All as expected" per area of the
 // club's checklist, one for the tanks (full) and samples (clear), one for the oil, one to
 // record. It must take 8 taps or fewer, and every control on the form must be at least 44 px.
-// Uses the seeded N0527L (Kestrel-style template: five areas, two wing tanks, three drain points);
+// Uses the seeded N0527L (Fernwhistle-style template: five areas, two wing tanks, three drain points);
 // its booking is written straight into the test database, since booking is tested elsewhere.
 
 const dbFile = path.join(inject("dataDir"), "e2e.db");
@@ -17,7 +17,7 @@ function insertBooking(): string {
   const db = new Database(dbFile, { fileMustExist: true });
   db.pragma("busy_timeout = 5000");
   try {
-    const club = db.prepare("select id from clubs where slug = 'lakeshore-aero'").get() as { id: string };
+    const club = db.prepare("select id from clubs where slug = 'reedwater'").get() as { id: string };
     const plane = db.prepare("select id from aircraft where club_id = ? and registration = 'N0527L'").get(club.id) as { id: string };
     const user = db.prepare("select id from users where email = 'member@hangarline.test'").get() as { id: string };
     const id = crypto.randomUUID();
@@ -62,7 +62,7 @@ describe("preflight in few taps", () => {
 async function flow(page: Page) {
   await signIn(page, "member@hangarline.test");
   const bookingId = insertBooking();
-  await page.goto(`/clubs/lakeshore-aero/bookings/${bookingId}/preflight`, { waitUntil: "networkidle" });
+  await page.goto(`/clubs/reedwater/bookings/${bookingId}/preflight`, { waitUntil: "networkidle" });
   const pf = page.getByRole("form", { name: "Preflight record" });
   await pf.waitFor();
   await expectNoHorizontalOverflow(page);

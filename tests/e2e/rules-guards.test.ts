@@ -38,7 +38,7 @@ function localDay(daysAhead: number, timeZone: string): string {
 }
 
 async function openBookingForm(page: Page, daysAhead: number, from: string, to: string) {
-  await page.goto("/clubs/lakeshore-aero/bookings/new", { waitUntil: "networkidle" });
+  await page.goto("/clubs/reedwater/bookings/new", { waitUntil: "networkidle" });
   const form = page.getByRole("form", { name: "Book an aircraft" });
   const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
   await form.getByLabel("Aircraft").selectOption(plane!);

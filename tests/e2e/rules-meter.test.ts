@@ -2,11 +2,11 @@ import { describe, expect, it } from "vitest";
 import { medicalPrivilegeDates } from "@/lib/currency";
 import { newPage, screenshot, signIn } from "./harness";
 
-// Lakeshore Aero's N0534L (no other browser test relies on it): after its inspections switch from
+// Reedwater's N0534L (no other browser test relies on it): after its inspections switch from
 // the tach to the Hobbs, its hours-based items cannot be placed on the Hobbs, so it reads
 // "Status unknown" with both meters named, on its page and on the flight line. N0549L takes a
 // squawk marked possibly unsafe. No retries, no sleeps: each step waits for the page's own answer.
-const CLUB = "/clubs/lakeshore-aero";
+const CLUB = "/clubs/reedwater";
 const REG = "N0534L";
 // A loaded two-core machine can take long to answer an action that re-renders the page.
 const ANSWER = { timeout: 120_000 };

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { expectNoHorizontalOverflow, newPage, screenshot, signIn, waitForEmail } from "./harness";
 
-const CLUB = "/clubs/lakeshore-aero";
+const CLUB = "/clubs/reedwater";
 
 function isoDatePlus(days: number): string {
   return new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);

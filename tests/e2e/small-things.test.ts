@@ -12,7 +12,7 @@ describe("the calendar link", () => {
   it("is shown again on a second device, and replacing it is a separate, confirmed choice", async () => {
     const page = await newPage("desktop");
     await signIn(page, "student@hangarline.test");
-    await page.goto("/clubs/lakeshore-aero/bookings/calendar", { waitUntil: "networkidle" });
+    await page.goto("/clubs/reedwater/bookings/calendar", { waitUntil: "networkidle" });
     const make = page.getByRole("button", { name: "Make my calendar link" });
     if (await make.count()) {
       await make.click();
@@ -28,7 +28,7 @@ describe("the calendar link", () => {
     // A second device (a phone) signs in and sees the very same link.
     const phone = await newPage("phone");
     await signIn(phone, "student@hangarline.test");
-    await phone.goto("/clubs/lakeshore-aero/bookings/calendar", { waitUntil: "networkidle" });
+    await phone.goto("/clubs/reedwater/bookings/calendar", { waitUntil: "networkidle" });
     expect(await phone.getByLabel("Your calendar link").inputValue()).toBe(first);
     await screenshot(phone, "calendar-link-phone");
     await phone.context().close();
@@ -57,7 +57,7 @@ describe("joining and signing in", () => {
     const address = `new.flyer.${Date.now()}@example.test`;
     const admin = await newPage("desktop");
     await signIn(admin, "admin@hangarline.test");
-    await admin.goto("/clubs/lakeshore-aero/members", { waitUntil: "networkidle" });
+    await admin.goto("/clubs/reedwater/members", { waitUntil: "networkidle" });
     const invite = admin.getByRole("form", { name: "Invite a member" });
     await invite.getByLabel("E-mail address").fill(address);
     await invite.getByRole("button", { name: "Send invitation" }).click();
@@ -73,7 +73,7 @@ describe("joining and signing in", () => {
     await form.getByLabel("Your name").fill("Nova Tarrant");
     await form.getByLabel("Choose a password").fill("a-long-enough-password-2026");
     await form.getByRole("button", { name: "Create my account and join" }).click();
-    await page.waitForURL(/\/clubs\/lakeshore-aero$/);
+    await page.waitForURL(/\/clubs\/reedwater$/);
     // The club's own pages, no sign-in form in between.
     await page.getByRole("heading", { level: 1 }).first().waitFor();
     expect(page.url()).not.toMatch(/sign-in/);

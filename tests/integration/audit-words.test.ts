@@ -5,7 +5,7 @@ import { auditLog, memberships, users } from "@/db/schema";
 import { changeRoles } from "@/lib/actions/members/change-roles";
 import { EMPTY, clubBySlug, db, form, seedOnce, signInAs } from "./helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 
 describe("the audit log reads as sentences in the club's time", () => {
   beforeAll(async () => {

@@ -46,8 +46,8 @@ describe("sessions can be revoked", () => {
   it("a role change ends the member's sessions", async () => {
     const client = await signedIn("student@hangarline.test");
     signInAs("admin@hangarline.test");
-    const m = membershipOf("student@hangarline.test", "lakeshore-aero")!;
-    const state = await changeRoles(EMPTY, form({ club: "lakeshore-aero", membershipId: m.id, roles: ["member", "instructor"] }));
+    const m = membershipOf("student@hangarline.test", "reedwater")!;
+    const state = await changeRoles(EMPTY, form({ club: "reedwater", membershipId: m.id, roles: ["member", "instructor"] }));
     expect(state.ok).toBe(true);
     expect(await client.session()).toBeNull();
     // Another member's session is untouched.
@@ -58,8 +58,8 @@ describe("sessions can be revoked", () => {
   it("deactivation ends the member's sessions", async () => {
     const client = await signedIn("pilot2@hangarline.test");
     signInAs("admin@hangarline.test");
-    const m = membershipOf("pilot2@hangarline.test", "lakeshore-aero")!;
-    const state = await setMembershipStatus(EMPTY, form({ club: "lakeshore-aero", membershipId: m.id, status: "inactive" }));
+    const m = membershipOf("pilot2@hangarline.test", "reedwater")!;
+    const state = await setMembershipStatus(EMPTY, form({ club: "reedwater", membershipId: m.id, status: "inactive" }));
     expect(state.ok).toBe(true);
     expect(await client.session()).toBeNull();
   }, 60_000);

@@ -11,7 +11,7 @@ import { params, treeText } from "./authz-helpers";
 import { planeId, seedScenario } from "./bookings-helpers";
 import { clubBySlug, db, signInAs } from "./helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const uid = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;
 const MEDICAL = "pilot2 has no medical certificate on record (14 CFR 61.23).";
 const ARREARS = "pilot2's account is overdue: $180.00 owed, unpaid since 2026-01-01.";

@@ -38,7 +38,7 @@ import { params, treeText } from "./authz-helpers";
 import { seedScenario } from "./bookings-helpers";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const MEMBER = "member@hangarline.test"; // Rowan Pike, plain member
 const uid = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;
 const nameOf = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.name!;

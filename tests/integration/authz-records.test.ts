@@ -16,7 +16,7 @@ import { params, treeText } from "./authz-helpers";
 import { seedScenario } from "./bookings-helpers";
 import { clubBySlug, db, expectRedirect, signInAs } from "./helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const MEMBER = "member@hangarline.test";
 const OTHER = "pilot2@hangarline.test";
 const uid = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;

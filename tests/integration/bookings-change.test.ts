@@ -14,7 +14,7 @@ import { squawks } from "@/db/schema";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 
 async function book(email: string, registration: string, days: number, from: string, to: string, extra: Record<string, string> = {}) {
   const club = clubBySlug(SLUG);
@@ -118,14 +118,14 @@ describe("changing and cancelling, the late rule, grounding e-mails, and the JSO
   it("the JSON routes: a week of bookings, one booking, creation with typed errors; another club's is a 404", async () => {
     const club = clubBySlug(SLUG);
     signInAs("member@hangarline.test");
-    const week = await listRoute(new Request("http://app.test/api/clubs/lakeshore-aero/bookings?view=week"), { params: Promise.resolve({ club: SLUG }) });
+    const week = await listRoute(new Request("http://app.test/api/clubs/reedwater/bookings?view=week"), { params: Promise.resolve({ club: SLUG }) });
     expect(week.status).toBe(200);
     const body = (await week.json()) as { data: { days: string[]; bookings: { id: string }[] } };
     expect(body.data.days).toHaveLength(7);
-    const bad = await listRoute(new Request("http://app.test/api/clubs/lakeshore-aero/bookings?date=tomorrow"), { params: Promise.resolve({ club: SLUG }) });
+    const bad = await listRoute(new Request("http://app.test/api/clubs/reedwater/bookings?date=tomorrow"), { params: Promise.resolve({ club: SLUG }) });
     expect(bad.status).toBe(400);
 
-    const post = (payload: unknown) => createRoute(new Request("http://app.test/api/clubs/lakeshore-aero/bookings", { method: "POST", body: JSON.stringify(payload) }), { params: Promise.resolve({ club: SLUG }) });
+    const post = (payload: unknown) => createRoute(new Request("http://app.test/api/clubs/reedwater/bookings", { method: "POST", body: JSON.stringify(payload) }), { params: Promise.resolve({ club: SLUG }) });
     const created = await post({ aircraftId: planeId(SLUG, "N0534L"), startsAt: localAt(club, 10, "09:00"), endsAt: localAt(club, 10, "10:00"), acceptedGuards: ALL_GUARDS });
     expect(created.status).toBe(201);
     const { data } = (await created.json()) as { data: { id: string } };
@@ -146,6 +146,6 @@ describe("changing and cancelling, the late rule, grounding e-mails, and the JSO
     // And a club the person has no role in is a 404 too.
     expect((await getBookingRoute(new Request("http://app.test"), { params: Promise.resolve({ club: "cottonwood-flyers", bookingId: theirs.id }) })).status).toBe(404);
     signInAs(null);
-    expect((await listRoute(new Request("http://app.test/api/clubs/lakeshore-aero/bookings"), { params: Promise.resolve({ club: SLUG }) })).status).toBe(401);
+    expect((await listRoute(new Request("http://app.test/api/clubs/reedwater/bookings"), { params: Promise.resolve({ club: SLUG }) })).status).toBe(401);
   });
 });

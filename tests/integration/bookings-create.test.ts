@@ -8,7 +8,7 @@ import { databaseFile } from "@/db/client";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 
 function bookForm(fields: Record<string, string | string[]>) {
   return form({ club: SLUG, ...fields });

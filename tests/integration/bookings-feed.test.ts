@@ -12,7 +12,7 @@ import { hashToken, sealSecret } from "@/lib/server/tokens";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 
 async function makeLink(email: string): Promise<string> {
   signInAs(email);

@@ -11,7 +11,7 @@ import { getWeightBalanceProfile } from "@/db/queries/tools-wb";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 const PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
 
 describe("weight and balance, preflight, beginning the flight and its flight sheet on one booking", () => {

@@ -7,7 +7,7 @@ import { postFlightCharge } from "@/db/queries/money-flight-charges";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { localAt, makePilot, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 let day = 0;
 
 /** Each attempt gets a day of its own, so that no two collide with each other. */
@@ -27,11 +27,11 @@ describe("booking guards: refused or warned as the club decides, always with the
     await seedScenario();
     const t = today();
     const good = { medicalExpiresOn: addDays(t, 400), flightReviewOn: addDays(t, -180), flewTypeDaysAgo: 5 };
-    makePilot(SLUG, "ready@example.test", { checkouts: ["Kestrel K160", "Brightwing BW-4"], ...good });
-    makePilot(SLUG, "kestrel.only@example.test", { checkouts: ["Kestrel K160"], ...good });
-    makePilot(SLUG, "stale@example.test", { checkouts: ["Kestrel K160"], medicalExpiresOn: addDays(t, 400), flightReviewOn: addDays(t, -900), flewTypeDaysAgo: 5 });
-    makePilot(SLUG, "nomedical@example.test", { checkouts: ["Kestrel K160"], medicalExpiresOn: addDays(t, -1), flightReviewOn: addDays(t, -180), flewTypeDaysAgo: 5 });
-    const owes = makePilot(SLUG, "owes@example.test", { checkouts: ["Kestrel K160"], ...good });
+    makePilot(SLUG, "ready@example.test", { checkouts: ["Fernwhistle F160", "Brightwing BW-4"], ...good });
+    makePilot(SLUG, "kestrel.only@example.test", { checkouts: ["Fernwhistle F160"], ...good });
+    makePilot(SLUG, "stale@example.test", { checkouts: ["Fernwhistle F160"], medicalExpiresOn: addDays(t, 400), flightReviewOn: addDays(t, -900), flewTypeDaysAgo: 5 });
+    makePilot(SLUG, "nomedical@example.test", { checkouts: ["Fernwhistle F160"], medicalExpiresOn: addDays(t, -1), flightReviewOn: addDays(t, -180), flewTypeDaysAgo: 5 });
+    const owes = makePilot(SLUG, "owes@example.test", { checkouts: ["Fernwhistle F160"], ...good });
     const club = clubBySlug(SLUG);
     db().transaction((tx) => {
       // A flight charge due long ago and never paid (terms + the club's 30 days' grace passed).

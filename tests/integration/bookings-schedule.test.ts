@@ -15,7 +15,7 @@ import { ALL_GUARDS, localAt, planeId, seedScenario } from "./bookings-helpers";
 // booking lists each week booked or refused and lands once, and the day-before reminder is queued
 // once per booking through the outbox.
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 const count = (aircraftId: string) => db().select().from(bookings).where(eq(bookings.aircraftId, aircraftId)).all().length;
 
 describe("the schedule beside the bookings", () => {

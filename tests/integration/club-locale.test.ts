@@ -13,20 +13,20 @@ describe("the club's locale", () => {
 
   it("starts the euro club in de-DE and the US clubs in en-US", () => {
     expect(clubBySlug("aeroclub-silberau").locale).toBe("de-DE"); // from EUR + Europe/Berlin (common practice)
-    expect(clubBySlug("lakeshore-aero").locale).toBe("en-US"); // from USD (common practice)
+    expect(clubBySlug("reedwater").locale).toBe("en-US"); // from USD (common practice)
   });
 
   it("is changed by the admin, audited, and refused for a tag it does not offer", async () => {
     signInAs("admin@hangarline.test");
-    const bad = await updateClubLocale(EMPTY, form({ club: "lakeshore-aero", locale: "xx-YY" }));
+    const bad = await updateClubLocale(EMPTY, form({ club: "reedwater", locale: "xx-YY" }));
     expect(bad.ok).toBe(false);
     expect(bad.fieldErrors.locale?.[0]).toMatch(/Choose one of the listed locales/);
-    expect(clubBySlug("lakeshore-aero").locale).toBe("en-US");
+    expect(clubBySlug("reedwater").locale).toBe("en-US");
 
-    const ok = await updateClubLocale(EMPTY, form({ club: "lakeshore-aero", locale: "en-CA" }));
+    const ok = await updateClubLocale(EMPTY, form({ club: "reedwater", locale: "en-CA" }));
     expect(ok.ok).toBe(true);
     expect(ok.message).toContain("$2,893.06"); // ECMA-402 Intl.NumberFormat, CLDR en-CA
-    const club = clubBySlug("lakeshore-aero");
+    const club = clubBySlug("reedwater");
     expect(club.locale).toBe("en-CA");
     const audit = db().select().from(auditLog).where(eq(auditLog.clubId, club.id)).all().filter((a) => a.action === "club.settings.update");
     expect(audit.at(-1)?.after).toEqual({ locale: "en-CA" });

@@ -27,11 +27,11 @@ describe("fleet tenant isolation", () => {
     await seedFleetOnce();
     foreignAircraft = planeByRegistration("cottonwood-flyers", "N0471C").id;
     foreignSquawk = db().select().from(squawks).where(eq(squawks.aircraftId, foreignAircraft)).get()!.id;
-    signInAs("maintenance@hangarline.test"); // member and maintenance of Lakeshore only
+    signInAs("maintenance@hangarline.test"); // member and maintenance of Reedwater only
   });
 
   it("route handlers: 404 through the own club's URL for another club's ids", async () => {
-    const L = "lakeshore-aero";
+    const L = "reedwater";
     expect((await callRoute(aircraftDetailRoute, `/api/clubs/${L}/aircraft/${foreignAircraft}`, { club: L, aircraftId: foreignAircraft })).status).toBe(404);
     expect((await callRoute(squawksRoute, `/api/clubs/${L}/squawks?aircraftId=${foreignAircraft}`, { club: L })).status).toBe(404);
     expect((await callRoute(squawkRoute, `/api/clubs/${L}/squawks/${foreignSquawk}`, { club: L, squawkId: foreignSquawk })).status).toBe(404);
@@ -56,35 +56,35 @@ describe("fleet tenant isolation", () => {
 
   it("route handlers: 401 without a session", async () => {
     signInAs(null);
-    expect((await callRoute(flightLineRoute, "/api/clubs/lakeshore-aero/flight-line", { club: "lakeshore-aero" })).status).toBe(401);
+    expect((await callRoute(flightLineRoute, "/api/clubs/reedwater/flight-line", { club: "reedwater" })).status).toBe(401);
     signInAs("maintenance@hangarline.test");
   });
 
   it("page queries filter by club: another club's aircraft and squawk are not found", () => {
-    const lake = clubBySlug("lakeshore-aero");
+    const lake = clubBySlug("reedwater");
     expect(getAircraft(db(), lake.id, foreignAircraft)).toBeUndefined();
     expect(getAircraftStatusEntry(db(), lake, foreignAircraft)).toBeUndefined();
     expect(getSquawk(db(), lake.id, foreignSquawk)).toBeUndefined();
   });
 
   it("pages render the not-found page for another club's aircraft", async () => {
-    await expect(AircraftPage({ params: Promise.resolve({ club: "lakeshore-aero", aircraftId: foreignAircraft }) })).rejects.toThrow("not found");
-    await expect(FlightsPage({ params: Promise.resolve({ club: "lakeshore-aero" }), searchParams: Promise.resolve({ aircraft: foreignAircraft }) })).rejects.toThrow("not found");
+    await expect(AircraftPage({ params: Promise.resolve({ club: "reedwater", aircraftId: foreignAircraft }) })).rejects.toThrow("not found");
+    await expect(FlightsPage({ params: Promise.resolve({ club: "reedwater" }), searchParams: Promise.resolve({ aircraft: foreignAircraft }) })).rejects.toThrow("not found");
     // and the own club's aircraft page renders
-    const own = planeByRegistration("lakeshore-aero", "N0512L");
-    await expect(AircraftPage({ params: Promise.resolve({ club: "lakeshore-aero", aircraftId: own.id }) })).resolves.toBeTruthy();
+    const own = planeByRegistration("reedwater", "N0512L");
+    await expect(AircraftPage({ params: Promise.resolve({ club: "reedwater", aircraftId: own.id }) })).resolves.toBeTruthy();
     signInAs("member@hangarline.test");
-    await expect(MaintenancePage({ params: Promise.resolve({ club: "lakeshore-aero" }) })).rejects.toThrow("not found"); // a plain member has no work queue
+    await expect(MaintenancePage({ params: Promise.resolve({ club: "reedwater" }) })).rejects.toThrow("not found"); // a plain member has no work queue
     signInAs("maintenance@hangarline.test");
   });
 
   it("actions refuse another club's aircraft and write nothing", async () => {
     const before = db().select().from(squawks).all().length;
-    const squawk = await reportSquawk(EMPTY, form({ club: "lakeshore-aero", aircraftId: foreignAircraft, description: "Should not land anywhere", foundDuring: "preflight" }));
+    const squawk = await reportSquawk(EMPTY, form({ club: "reedwater", aircraftId: foreignAircraft, description: "Should not land anywhere", foundDuring: "preflight" }));
     expect(squawk.message).toMatch(/not found/);
-    const notice = await issueGroundingNotice(EMPTY, form({ club: "lakeshore-aero", aircraftId: foreignAircraft, category: "safety", reason: "Not my club's aircraft" }));
+    const notice = await issueGroundingNotice(EMPTY, form({ club: "reedwater", aircraftId: foreignAircraft, category: "safety", reason: "Not my club's aircraft" }));
     expect(notice.message).toMatch(/not found/);
-    const flight = await logFlight(EMPTY, form({ club: "lakeshore-aero", aircraftId: foreignAircraft, flownOn: "2026-01-01", hobbsOut: "1", hobbsIn: "2", tachOut: "1", tachIn: "2" }));
+    const flight = await logFlight(EMPTY, form({ club: "reedwater", aircraftId: foreignAircraft, flownOn: "2026-01-01", hobbsOut: "1", hobbsIn: "2", tachOut: "1", tachIn: "2" }));
     expect(flight.message).toMatch(/not found/);
     expect(db().select().from(squawks).all().length).toBe(before);
   });

@@ -9,7 +9,7 @@ import type { FlightLineEntry } from "@/lib/fleet/types";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { callRoute, planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 
 async function statusOf(registration: string): Promise<FlightLineEntry> {
   const { body } = await callRoute(flightLineRoute, `/api/clubs/${CLUB}/flight-line`, { club: CLUB });

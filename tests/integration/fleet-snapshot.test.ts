@@ -23,7 +23,7 @@ import { callRoute, planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 // equal a fresh computation, and a fresh computation must equal the one from every completion
 // of every item (the status reads only the completions that govern each item).
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 
 /** The flight line from the whole completion history, as it was computed before the governing-completion reads. */
 function fromWholeHistory(now: Date) {

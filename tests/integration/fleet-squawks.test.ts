@@ -10,7 +10,7 @@ import type { FlightLineEntry } from "@/lib/fleet/types";
 import { EMPTY, db, squawkIdOf, form, signInAs } from "./helpers";
 import { callRoute, planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 
 async function lineEntry(registration: string): Promise<FlightLineEntry> {
   const { status, body } = await callRoute(flightLineRoute, `/api/clubs/${CLUB}/flight-line`, { club: CLUB });

@@ -10,7 +10,7 @@ import { uploadDir } from "@/lib/storage";
 import { EMPTY, clubBySlug, db, squawkIdOf, form, signInAs } from "./helpers";
 import { callRoute, fakePngFile, oversizeJpegFile, planeByRegistration, pngFile, seedFleetOnce } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 
 function filesOnDisk(): string[] {
   return fs.existsSync(uploadDir()) ? fs.readdirSync(uploadDir()) : [];

@@ -17,7 +17,7 @@ import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { lockBooksThrough } from "./books-helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 const MEMBER = "member@hangarline.test";
 const REG = "N0527L";
 

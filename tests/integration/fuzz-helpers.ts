@@ -59,7 +59,7 @@ export async function seedAllOnce() {
  */
 export const BROAD_USER = "admin@hangarline.test";
 export const PLAIN_MEMBER = "member@hangarline.test";
-export const FUZZ_CLUB = "lakeshore-aero";
+export const FUZZ_CLUB = "reedwater";
 
 export function widenAdminRoles(): void {
   const user = db().select().from(users).where(eq(users.email, BROAD_USER)).get()!;

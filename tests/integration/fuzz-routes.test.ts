@@ -43,7 +43,7 @@ const QUERY_KEYS = ["view", "date", "from", "to", "format", "userId", "aircraftI
 function badValuesFor(key: string): string[] {
   if (/^(date|from|to)$/.test(key)) return BAD_DATES;
   if (key === "month") return BAD_MONTHS;
-  if (key === "club") return ["cottonwood-flyers", "no-such-club", "", HUGE, "../lakeshore-aero", "LAKESHORE-AERO", "%2e%2e"];
+  if (key === "club") return ["cottonwood-flyers", "no-such-club", "", HUGE, "../reedwater", "LAKESHORE-AERO", "%2e%2e"];
   if (key === "token") return ["abc.ics", `${"a".repeat(40)}.ics`, HUGE, "", "../../etc/passwd", ...BAD_IDS];
   if (/Id$/.test(key)) return BAD_IDS;
   return GENERIC_BAD;

@@ -23,7 +23,7 @@ import { EMPTY, clubBySlug, db, expectRedirect, squawkIdOf, form, signInAs } fro
 import { pngFile } from "./fleet-helpers";
 import { ALL_GUARDS, localAt, planeId, seedScenario, setGuards } from "./bookings-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const MEMBER = "member@hangarline.test";
 type Action = (prev: ActionState, fd: FormData) => Promise<ActionState>;
 

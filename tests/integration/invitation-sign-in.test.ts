@@ -33,7 +33,7 @@ vi.mock("@/auth", async () => {
 
 async function invite(address: string): Promise<string> {
   signInAs("admin@hangarline.test");
-  const state = await inviteMember(EMPTY, form({ club: "lakeshore-aero", email: address, roles: ["member"] }));
+  const state = await inviteMember(EMPTY, form({ club: "reedwater", email: address, roles: ["member"] }));
   expect(state.ok, state.message).toBe(true);
   const url = (outboxFor(address).at(-1)?.payload as { url: string }).url;
   return url.split("/invitations/")[1]!;
@@ -49,10 +49,10 @@ describe("a new member is signed in by accepting the invitation", () => {
     signInAs(null);
     const answer = await acceptInvitation(EMPTY, form({ token, name: "Joiner One", password: "a-long-enough-password" }));
     expect(answer.ok, answer.message).toBe(true);
-    expect(answer.redirectTo).toBe("/clubs/lakeshore-aero");
+    expect(answer.redirectTo).toBe("/clubs/reedwater");
     expect(answer.message).toMatch(/signed in/);
     expect(signInCalls.at(-1)).toEqual({ provider: "credentials", email: "joiner.one@example.test", password: "a-long-enough-password" });
-    expect(membershipOf("joiner.one@example.test", "lakeshore-aero")?.roles).toEqual(["member"]);
+    expect(membershipOf("joiner.one@example.test", "reedwater")?.roles).toEqual(["member"]);
   });
 
   it("a refused acceptance signs nobody in and creates nothing", async () => {
@@ -73,7 +73,7 @@ describe("a new member is signed in by accepting the invitation", () => {
     const calls = signInCalls.length;
     const answer = await acceptInvitation(EMPTY, form({ token }));
     expect(answer.ok, answer.message).toBe(true);
-    expect(answer.redirectTo).toBe("/clubs/lakeshore-aero");
+    expect(answer.redirectTo).toBe("/clubs/reedwater");
     expect(signInCalls.length).toBe(calls);
   });
 
@@ -83,7 +83,7 @@ describe("a new member is signed in by accepting the invitation", () => {
     failNext.value = true;
     const answer = await acceptInvitation(EMPTY, form({ token, name: "Joiner Three", password: "a-long-enough-password" }));
     expect(answer.ok).toBe(true);
-    expect(answer.redirectTo).toBe(`/sign-in?joined=1&callbackUrl=${encodeURIComponent("/clubs/lakeshore-aero")}`);
-    expect(membershipOf("joiner.three@example.test", "lakeshore-aero")?.roles).toEqual(["member"]);
+    expect(answer.redirectTo).toBe(`/sign-in?joined=1&callbackUrl=${encodeURIComponent("/clubs/reedwater")}`);
+    expect(membershipOf("joiner.three@example.test", "reedwater")?.roles).toEqual(["member"]);
   });
 });

@@ -86,11 +86,11 @@ describe("the page Content-Security-Policy", () => {
   });
 
   it("a club page without a session cookie is redirected to sign-in, with the CSP on the redirect", () => {
-    const res = middleware(req("/clubs/lakeshore-aero/money?x=1"));
+    const res = middleware(req("/clubs/reedwater/money?x=1"));
     expect(res.status).toBe(307);
-    expect(res.headers.get("location")).toBe(`${APP}/sign-in?callbackUrl=${encodeURIComponent("/clubs/lakeshore-aero/money?x=1")}`);
+    expect(res.headers.get("location")).toBe(`${APP}/sign-in?callbackUrl=${encodeURIComponent("/clubs/reedwater/money?x=1")}`);
     expect(res.headers.get("content-security-policy")).toContain("frame-ancestors 'none'");
-    const withCookie = middleware(req("/clubs/lakeshore-aero", { headers: { cookie: "authjs.session-token=abc" } }));
+    const withCookie = middleware(req("/clubs/reedwater", { headers: { cookie: "authjs.session-token=abc" } }));
     expect(passedOn(withCookie)).toBe(true);
     expect(withCookie.headers.get("content-security-policy")).toContain("'nonce-");
     expect(passedOn(middleware(req("/operatorish")))).toBe(true); // only /operator and below need a session
@@ -106,7 +106,7 @@ describe("the page Content-Security-Policy", () => {
 
 describe("route handler responses", () => {
   it("get the strict policy: nothing may run, load or frame them", () => {
-    const res = middleware(req("/api/clubs/lakeshore-aero/flight-line"));
+    const res = middleware(req("/api/clubs/reedwater/flight-line"));
     expect(passedOn(res)).toBe(true);
     expect(res.headers.get("content-security-policy")).toBe(API_CSP);
     expect(directives(API_CSP).get("default-src")).toBe("'none'");
@@ -114,7 +114,7 @@ describe("route handler responses", () => {
   });
 
   it("a route that sets its own policy keeps it (Next would drop the handler's header if middleware set one)", () => {
-    expect(middleware(req("/api/clubs/lakeshore-aero/uploads/u1")).headers.get("content-security-policy")).toBeNull();
+    expect(middleware(req("/api/clubs/reedwater/uploads/u1")).headers.get("content-security-policy")).toBeNull();
     const own = apiRoutes().filter((r) => /content-security-policy/i.test(r.source));
     for (const r of own) expect(OWN_CSP_ROUTES.some((re) => re.test(r.url)), `${r.file} sets its own CSP but middleware.ts would overwrite it`).toBe(true);
     for (const r of apiRoutes().filter((x) => !own.includes(x) && !OWN_CSP_ROUTES.some((re) => re.test(x.url)))) {
@@ -124,7 +124,7 @@ describe("route handler responses", () => {
 });
 
 describe("state-changing route handlers answer only same-origin JSON", () => {
-  const url = "/api/clubs/lakeshore-aero/bookings";
+  const url = "/api/clubs/reedwater/bookings";
   const json = { "content-type": "application/json", origin: APP };
 
   async function expectRefusal(res: Response, status: number, code: string) {
@@ -165,7 +165,7 @@ describe("state-changing route handlers answer only same-origin JSON", () => {
     await expectRefusal(middleware(req(url, { method: "POST", headers: json, body: "{}" })), 403, "forbidden");
     expect(passedOn(middleware(req(url, { method: "POST", headers: { ...json, origin: "https://club.example.org" }, body: "{}" })))).toBe(true);
     // A forged Host cannot make a foreign Origin look like ours.
-    const forged = new NextRequest("https://evil.example/api/clubs/lakeshore-aero/bookings", { method: "POST", headers: { "content-type": "application/json", origin: "https://evil.example" }, body: "{}" });
+    const forged = new NextRequest("https://evil.example/api/clubs/reedwater/bookings", { method: "POST", headers: { "content-type": "application/json", origin: "https://evil.example" }, body: "{}" });
     await expectRefusal(middleware(forged), 403, "forbidden");
   });
 

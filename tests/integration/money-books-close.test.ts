@@ -22,7 +22,7 @@ import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { callRoute } from "./fleet-helpers";
 import { seedScenario } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 const TREASURER = "treasurer@hangarline.test";
 const ADMIN = "admin@hangarline.test";
 const MEMBER = "member@hangarline.test";

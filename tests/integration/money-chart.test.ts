@@ -13,7 +13,7 @@ import { FLYING_CLUB_CHART } from "@/lib/money";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { seedScenario } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 const TREASURER = "treasurer@hangarline.test";
 const key = () => crypto.randomUUID();
 const accountByCode = (code: string) => listChart(db(), clubBySlug(SLUG).id).find((a) => a.code === code);
@@ -24,7 +24,7 @@ describe("chart of accounts", () => {
   });
 
   it("every club's chart holds the flying-club categories", () => {
-    for (const slug of ["lakeshore-aero", "cottonwood-flyers", "aeroclub-silberau"]) {
+    for (const slug of ["reedwater", "cottonwood-flyers", "aeroclub-silberau"]) {
       const codes = listChart(db(), clubBySlug(slug).id).map((a) => a.code);
       for (const c of FLYING_CLUB_CHART) expect(codes, `${slug} ${c.code}`).toContain(c.code);
     }

@@ -21,7 +21,7 @@ import { postFlightCharge, reverseFlightCharge } from "@/db/queries/money-flight
 import { statementFor } from "@/db/queries/money-statements";
 import { EMPTY, clubBySlug, db, form, seedOnce, signInAs } from "./helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const TREASURER = "treasurer@hangarline.test";
 const uid = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;
 const club = () => clubBySlug(CLUB);
@@ -108,7 +108,7 @@ describe("dues plans and billing runs", () => {
 describe("flight charges", () => {
   let flightId = "";
   beforeAll(() => {
-    const [plane] = db().insert(aircraft).values({ clubId: club().id, registration: "N0777T", make: "Kestrel Aero", model: "K160", typeGroup: "Kestrel K160", hourlyRateMinor: 15200 }).returning().all();
+    const [plane] = db().insert(aircraft).values({ clubId: club().id, registration: "N0777T", make: "Fernwhistle", model: "F160", typeGroup: "Fernwhistle F160", hourlyRateMinor: 15200 }).returning().all();
     const [flight] = db().insert(flights).values({ clubId: club().id, aircraftId: plane!.id, pilotId: uid("member@hangarline.test"), flownOn: "2025-06-12", hobbsOut: 1233.5, hobbsIn: 1234.7, tachOut: 1010.2, tachIn: 1011.2, fuelUnit: "gal", oilUnit: "qt" }).returning().all();
     flightId = flight!.id;
   });

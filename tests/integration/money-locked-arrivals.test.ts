@@ -12,7 +12,7 @@ import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { lockBooksThrough } from "./books-helpers";
 import { seedScenario } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 const uid = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;
 
 describe("money dated in a locked period", () => {

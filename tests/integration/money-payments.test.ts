@@ -18,7 +18,7 @@ import { createPaymentsClient } from "@/lib/payments/provider";
 import { EMPTY, clubBySlug, db, expectRedirect, form, seedOnce, signInAs } from "./helpers";
 
 const SECRET = "whsec_money_integration";
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const MEMBER = "member@hangarline.test";
 const TREASURER = "treasurer@hangarline.test";
 

@@ -169,9 +169,9 @@ describe("OFX and who may reconcile", () => {
     const state = await importBankStatement(EMPTY, form({ club: CLUB, format: "ofx", file: file(OFX, "x.ofx") }));
     expect(state.message).toMatch(/treasurer/i);
     signInAs("treasurer@hangarline.test");
-    const other = await lockReconciledPeriod(EMPTY, form({ club: "lakeshore-aero", statementId: march }));
+    const other = await lockReconciledPeriod(EMPTY, form({ club: "reedwater", statementId: march }));
     expect(other).toMatchObject({ ok: false, message: "That statement was not found in this club." });
-    const undo = await unmatchLine(EMPTY, form({ club: "lakeshore-aero", bankLineId: lineByText(march, "Two cheques").id }));
+    const undo = await unmatchLine(EMPTY, form({ club: "reedwater", bankLineId: lineByText(march, "Two cheques").id }));
     expect(undo.message).toBe("That bank line was not found in this club.");
   });
 });

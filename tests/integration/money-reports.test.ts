@@ -9,7 +9,7 @@ import { clubBySlug, db, signInAs } from "./helpers";
 import { callRoute } from "./fleet-helpers";
 import { seedScenario } from "./bookings-helpers";
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 
 describe("profit and loss and balance sheet over the journal", () => {
   beforeAll(async () => {

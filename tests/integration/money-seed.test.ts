@@ -39,7 +39,7 @@ describe("the seeded books", () => {
     expect(Number(db().select({ n: sql<number>`count(*)` }).from(journalEntries).get()!.n)).toBeGreaterThan(300);
   });
 
-  it("has exactly one member in arrears, in Lakeshore", () => {
+  it("has exactly one member in arrears, in Reedwater", () => {
     const inArrears = db().select().from(clubs).all().flatMap((c) => [...membersInArrears(db(), c.id, isoDateInTimeZone(new Date(), c.timeZone)).keys()]);
     const emails = inArrears.map((id) => db().select().from(users).where(eq(users.id, id)).get()!.email);
     expect(emails).toEqual(["pilot2@hangarline.test"]);

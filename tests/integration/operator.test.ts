@@ -20,7 +20,7 @@ describe("operator console", () => {
   it("summarises each club with counts and totals only, no member-level detail", () => {
     const operator = signInAs("operator@hangarline.test")!;
     const summaries = listOperatorClubSummaries(db(), operator);
-    expect(summaries.map((s) => s.slug).sort()).toEqual(["aeroclub-silberau", "cottonwood-flyers", "lakeshore-aero"]);
+    expect(summaries.map((s) => s.slug).sort()).toEqual(["aeroclub-silberau", "cottonwood-flyers", "reedwater"]);
     for (const s of summaries) {
       // Club facts, then numbers only: no list of people anywhere in the shape.
       expect(Object.keys(s).sort()).toEqual(["activeMembers", "admins", "currency", "fleet", "id", "locale", "name", "receivables", "slug", "timeZone", "unitSystem"]);
@@ -47,7 +47,7 @@ describe("operator console", () => {
   it("an operator holds no membership in the demo and reads none of a club's member-level pages", async () => {
     const operator = signInAs("operator@hangarline.test")!;
     expect(db().select().from(memberships).where(eq(memberships.userId, operator.id)).all()).toEqual([]);
-    for (const slug of ["lakeshore-aero", "cottonwood-flyers", "aeroclub-silberau"]) {
+    for (const slug of ["reedwater", "cottonwood-flyers", "aeroclub-silberau"]) {
       expect(await resolveClubContext(slug)).toEqual({ ok: false, code: "not_found" });
       const res = await membersRoute(new Request(`http://app.test/api/clubs/${slug}/members`), { params: Promise.resolve({ club: slug }) });
       expect(res.status).toBe(404);
@@ -73,7 +73,7 @@ describe("operator console", () => {
   it("refuses a taken slug with a field error and creates nothing", async () => {
     signInAs("operator@hangarline.test");
     const before = db().select().from(clubs).all().length;
-    const state = await createClub(EMPTY, form({ ...newClub, slug: "lakeshore-aero", adminEmail: "x@y.test" }));
+    const state = await createClub(EMPTY, form({ ...newClub, slug: "reedwater", adminEmail: "x@y.test" }));
     expect(state.ok).toBe(false);
     expect(state.fieldErrors.slug?.[0]).toMatch(/another club/i);
     expect(db().select().from(clubs).all().length).toBe(before);
@@ -120,13 +120,13 @@ describe("operator console", () => {
 
   it("an operator who appoints an admin of an existing club grants nothing before acceptance", async () => {
     signInAs("operator@hangarline.test");
-    const lakeshore = clubBySlug("lakeshore-aero");
-    const before = membershipOf("pilot2@hangarline.test", "lakeshore-aero")!;
+    const reedwater = clubBySlug("reedwater");
+    const before = membershipOf("pilot2@hangarline.test", "reedwater")!;
     expect(before.roles).not.toContain("admin");
-    expect((await assignClubAdmin(EMPTY, form({ clubId: lakeshore.id, adminEmail: "pilot2@hangarline.test" }))).ok).toBe(true);
-    expect(membershipOf("pilot2@hangarline.test", "lakeshore-aero")!.roles).toEqual(before.roles);
+    expect((await assignClubAdmin(EMPTY, form({ clubId: reedwater.id, adminEmail: "pilot2@hangarline.test" }))).ok).toBe(true);
+    expect(membershipOf("pilot2@hangarline.test", "reedwater")!.roles).toEqual(before.roles);
     // An address that already holds the admin role is told so.
-    const again = await assignClubAdmin(EMPTY, form({ clubId: lakeshore.id, adminEmail: "admin@hangarline.test" }));
+    const again = await assignClubAdmin(EMPTY, form({ clubId: reedwater.id, adminEmail: "admin@hangarline.test" }));
     expect(again.ok).toBe(false);
     expect(again.message).toMatch(/already an admin/);
   });

@@ -16,7 +16,7 @@ import { pngFile } from "./fleet-helpers";
 // Night passenger currency (14 CFR 61.57(b)), the flight review refusal (61.56(c)), the
 // limitation of a deferred item (91.213(d)) at booking and when the flight begins, and claims vs proof.
 
-const SLUG = "lakeshore-aero";
+const SLUG = "reedwater";
 const today = () => isoDateInTimeZone(new Date(), clubBySlug(SLUG).timeZone);
 const userId = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;
 let day = 20;
@@ -38,9 +38,9 @@ describe("rules before the pilot: night, flight review, limitations, claims", ()
     const t = today();
     // Checked out, verified review and medical, 3 verified day landings in a single-engine land
     // airplane five days ago, no night landings at all.
-    makePilot(SLUG, "daytime@example.test", { checkouts: ["Kestrel K160"], medicalExpiresOn: addDays(t, 400), flightReviewOn: addDays(t, -100), flewTypeDaysAgo: 5 });
-    makePilot(SLUG, "noreview@example.test", { checkouts: ["Kestrel K160"], medicalExpiresOn: addDays(t, 400), flewTypeDaysAgo: 5 });
-    makePilot(SLUG, "claims@example.test", { checkouts: ["Kestrel K160"], medicalExpiresOn: addDays(t, 400), flewTypeDaysAgo: 5 });
+    makePilot(SLUG, "daytime@example.test", { checkouts: ["Fernwhistle F160"], medicalExpiresOn: addDays(t, 400), flightReviewOn: addDays(t, -100), flewTypeDaysAgo: 5 });
+    makePilot(SLUG, "noreview@example.test", { checkouts: ["Fernwhistle F160"], medicalExpiresOn: addDays(t, 400), flewTypeDaysAgo: 5 });
+    makePilot(SLUG, "claims@example.test", { checkouts: ["Fernwhistle F160"], medicalExpiresOn: addDays(t, 400), flewTypeDaysAgo: 5 });
   });
 
   it("night with passengers and no night currency: a finding citing 14 CFR 61.57(b); by day, none", async () => {
@@ -155,7 +155,7 @@ describe("rules before the pilot: night, flight review, limitations, claims", ()
     const club = clubBySlug(SLUG);
     const member = userId("claims@example.test");
     signInAs("claims@example.test");
-    const added = await recordOutsideFlight(EMPTY, form({ club: SLUG, flownOn: today(), aircraftDescription: "Rental at Pinecrest Strip (X03)", category: "Airplane", classRating: "Single-engine land", dayLandings: "0", nightFullStopLandings: "3" }));
+    const added = await recordOutsideFlight(EMPTY, form({ club: SLUG, flownOn: today(), aircraftDescription: "Rental at Pinecrest Strip (PINESTRIP)", category: "Airplane", classRating: "Single-engine land", dayLandings: "0", nightFullStopLandings: "3" }));
     expect(added, added.message).toMatchObject({ ok: true });
     const key = "passenger_night:airplane/singleengineland";
     const before = getMemberCurrency(db(), club, member, today()).items.find((i) => i.key === key)!;

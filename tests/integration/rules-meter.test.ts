@@ -12,7 +12,7 @@ import type { FlightLineEntry } from "@/lib/fleet/types";
 import { EMPTY, clubBySlug, db, form, signInAs, squawkIdOf } from "./helpers";
 import { callRoute, planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 
 async function detail(aircraftId: string) {
   const { status, body } = await callRoute(aircraftDetailRoute, `/api/clubs/${CLUB}/aircraft/${aircraftId}`, { club: CLUB, aircraftId });

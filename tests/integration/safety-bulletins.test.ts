@@ -11,7 +11,7 @@ import { updateDraft } from "@/lib/actions/safety/update-draft";
 import { EMPTY, clubBySlug, db, expectRedirect, form, seedOnce, signInAs } from "./helpers";
 import { callRoute, fakePngFile, seedFleetOnce } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const body = "Before taxi, press each brake pedal and hold it for five seconds.";
 
 function bulletinForm(extra: Record<string, string | Blob> = {}) {
@@ -30,7 +30,7 @@ function bulletinMail(bulletinId: string) {
   return db().select().from(emailOutbox).where(eq(emailOutbox.template, "bulletin")).all().filter((m) => String((m.payload as { url: string }).url).endsWith(`/bulletins/${bulletinId}`));
 }
 
-function activeLakeshoreMemberEmails(): string[] {
+function activeReedwaterMemberEmails(): string[] {
   const club = clubBySlug(CLUB);
   return db()
     .select({ email: users.email, roles: memberships.roles })
@@ -50,7 +50,7 @@ describe("safety bulletins", () => {
     signInAs("instructor@hangarline.test");
     for (const email of ["member@hangarline.test", "pilot2@hangarline.test"]) {
       const userId = db().select().from(users).where(eq(users.email, email)).get()!.id;
-      const state = await recordCheckout(EMPTY, form({ club: CLUB, userId, typeGroup: "Kestrel K160", checkedOutOn: "2026-01-05", instructorCertificateNumber: "CFI 0007719" }));
+      const state = await recordCheckout(EMPTY, form({ club: CLUB, userId, typeGroup: "Fernwhistle F160", checkedOutOn: "2026-01-05", instructorCertificateNumber: "CFI 0007719" }));
       expect(state.ok).toBe(true);
     }
   });
@@ -59,7 +59,7 @@ describe("safety bulletins", () => {
     signInAs("safety@hangarline.test");
     const id = await publish();
     const mail = bulletinMail(id);
-    const expected = activeLakeshoreMemberEmails();
+    const expected = activeReedwaterMemberEmails();
     expect(mail.map((m) => m.toAddress).sort()).toEqual(expected);
     expect(new Set(mail.map((m) => m.toAddress)).size).toBe(mail.length); // one each
     expect(mail.map((m) => m.toAddress)).not.toContain("mechanic@hangarline.test");
@@ -72,7 +72,7 @@ describe("safety bulletins", () => {
     const id = await publish({ audience: "type_group", audienceTypeGroup: "kestrel k160", acknowledgeBy: "2099-01-31" });
     expect(bulletinMail(id).map((m) => m.toAddress).sort()).toEqual(["member@hangarline.test", "pilot2@hangarline.test"]);
     const row = db().select().from(bulletins).where(eq(bulletins.id, id)).get()!;
-    expect(row).toMatchObject({ audienceTypeGroup: "Kestrel K160", acknowledgeBy: "2099-01-31", status: "published" }); // spelled as the fleet spells it
+    expect(row).toMatchObject({ audienceTypeGroup: "Fernwhistle F160", acknowledgeBy: "2099-01-31", status: "published" }); // spelled as the fleet spells it
   });
 
   it("publishing to instructors reaches only instructors", async () => {
@@ -83,7 +83,7 @@ describe("safety bulletins", () => {
 
   it("an acknowledgement is recorded once, however often it is sent", async () => {
     signInAs("safety@hangarline.test");
-    const id = await publish({ audience: "type_group", audienceTypeGroup: "Kestrel K160" });
+    const id = await publish({ audience: "type_group", audienceTypeGroup: "Fernwhistle F160" });
     signInAs("member@hangarline.test");
     const first = await acknowledgeBulletin(EMPTY, form({ club: CLUB, bulletinId: id }));
     const second = await acknowledgeBulletin(EMPTY, form({ club: CLUB, bulletinId: id }));
@@ -105,7 +105,7 @@ describe("safety bulletins", () => {
 
   it("the officer exports the list as CSV; admins read counts but cannot export; members neither", async () => {
     signInAs("safety@hangarline.test");
-    const id = await publish({ audience: "type_group", audienceTypeGroup: "Kestrel K160", title: "Fuel, caps, \"seals\"" });
+    const id = await publish({ audience: "type_group", audienceTypeGroup: "Fernwhistle F160", title: "Fuel, caps, \"seals\"" });
     const res = await exportRoute(new Request(`http://app.test/api/clubs/${CLUB}/safety/bulletins/${id}/acknowledgements/export`), { params: Promise.resolve({ club: CLUB, bulletinId: id }) });
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toMatch(/text\/csv/);
@@ -125,7 +125,7 @@ describe("safety bulletins", () => {
 
   it("reminds only those who have not acknowledged, and not twice within the hour", async () => {
     signInAs("safety@hangarline.test");
-    const id = await publish({ audience: "type_group", audienceTypeGroup: "Kestrel K160" });
+    const id = await publish({ audience: "type_group", audienceTypeGroup: "Fernwhistle F160" });
     signInAs("pilot2@hangarline.test");
     await acknowledgeBulletin(EMPTY, form({ club: CLUB, bulletinId: id }));
     signInAs("safety@hangarline.test");
@@ -170,7 +170,7 @@ describe("safety bulletins", () => {
     const past = await createBulletin(EMPTY, bulletinForm({ acknowledgeBy: "2001-01-01" }));
     expect(past.fieldErrors.acknowledgeBy).toEqual(["Choose today or a later date."]);
     const unknownGroup = await createBulletin(EMPTY, bulletinForm({ audience: "type_group", audienceTypeGroup: "Zeppelin" }));
-    expect(unknownGroup.fieldErrors.audienceTypeGroup?.[0]).toMatch(/Choose one of: Brightwing BW-4, Kestrel K160, Larkspur L-2/);
+    expect(unknownGroup.fieldErrors.audienceTypeGroup?.[0]).toMatch(/Choose one of: Brightwing BW-4, Fernwhistle F160, Larkspur L-2/);
     const fake = await createBulletin(EMPTY, bulletinForm({ attachment: fakePngFile() }));
     expect(fake.fieldErrors.attachment?.[0]).toMatch(/checked by its content/);
     signInAs("member@hangarline.test");

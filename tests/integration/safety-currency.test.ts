@@ -11,7 +11,7 @@ import type { CurrencyItem } from "@/lib/safety/currency-summary";
 import { EMPTY, clubBySlug, db, form, signInAs } from "./helpers";
 import { callRoute, planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const userId = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;
 const today = () => isoDateInTimeZone(new Date(), "America/Chicago");
 const checkoutForm = (email: string, extra: Record<string, string> = {}) =>
@@ -62,7 +62,7 @@ describe("checkouts and currency", () => {
     const flownOn = today();
     db().insert(flights).values({ clubId: club.id, aircraftId: plane.id, pilotId: student, flownOn, hobbsOut: 1, hobbsIn: 2, tachOut: 1, tachIn: 1.8, dayLandings: 3, dayFullStopLandings: 3, nightFullStopLandings: 0, fuelUnit: "gal", oilUnit: "qt" }).run();
     signInAs("student@hangarline.test");
-    const night = await recordOutsideFlight(EMPTY, form({ club: CLUB, flownOn: today(), aircraftDescription: "Rental at Pinecrest Strip (X03)", category: "Airplane", classRating: "Single-engine land", dayLandings: "0", nightFullStopLandings: "3" }));
+    const night = await recordOutsideFlight(EMPTY, form({ club: CLUB, flownOn: today(), aircraftDescription: "Rental at Pinecrest Strip (PINESTRIP)", category: "Airplane", classRating: "Single-engine land", dayLandings: "0", nightFullStopLandings: "3" }));
     expect(night.ok, night.message).toBe(true);
     const own = await callRoute(memberCurrencyRoute, "/x", { club: CLUB, userId: student });
     expect(own.status).toBe(200);
@@ -75,7 +75,7 @@ describe("checkouts and currency", () => {
     // N0534L is a tailwheel airplane of the class: its full stops count for both (61.57(a)(1)).
     expect(by("passenger_day:airplane/singleengineland")).toMatchObject({ state: "current", lastDay: addDays(today(), 89) });
     expect(by("passenger_day:airplane/singleengineland/tailwheel")).toMatchObject({ state: "current", lastDay: addDays(today(), 89) });
-    // Club setting for Lakeshore: flown the type group within 60 days (seeded recencyDaysInType).
+    // Club setting for Reedwater: flown the type group within 60 days (seeded recencyDaysInType).
     expect(by("recency:brightwing bw-4")).toMatchObject({ state: "current", lastDay: addDays(flownOn, 59) });
     expect(by("medical")).toMatchObject({ state: "missing", lastDay: null });
 

@@ -8,7 +8,7 @@ import { composeSafetyDigests } from "@/lib/email/safety-digest";
 import { startOfClubDay, zonedInstant } from "@/lib/safety/report-digest";
 import { EMPTY, clubBySlug, db, expectRedirect, form, seedOnce, signInAs } from "./helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const TZ = "America/Chicago";
 // Club-local wall times of an invented week; the Chicago offset (UTC−6 in January) is applied by the code under test.
 const at = (day: string, hour: number, minute = 0) => new Date(zonedInstant(day, hour, TZ).getTime() + minute * 60_000);

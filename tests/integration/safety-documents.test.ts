@@ -14,7 +14,7 @@ import { uploadDir } from "@/lib/storage";
 import { EMPTY, db, form, seedOnce, signInAs } from "./helpers";
 import { callRoute, fakePngFile, oversizeJpegFile, pngFile } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const userId = (email: string) => db().select().from(users).where(eq(users.email, email)).get()!.id;
 const storedFiles = () => (fs.existsSync(uploadDir()) ? fs.readdirSync(uploadDir()).length : 0);
 const pdfFile = () => new File([Buffer.from("%PDF-1.4\n1 0 obj << >> endobj\ntrailer << >>\n%%EOF\n")], "certificate.pdf", { type: "application/pdf" });
@@ -64,7 +64,7 @@ describe("member documents and medicals", () => {
     cottonwoodUploadId = db().select().from(memberDocuments).where(eq(memberDocuments.id, cottonwoodDocId)).get()!.uploadId!;
     expect((await callRoute(documentRoute, "/x", { club: "cottonwood-flyers", documentId: cottonwoodDocId })).status).toBe(200);
 
-    signInAs("admin@hangarline.test"); // reads every Lakeshore document, no role at Cottonwood
+    signInAs("admin@hangarline.test"); // reads every Reedwater document, no role at Cottonwood
     expect((await callRoute(documentRoute, "/x", { club: CLUB, documentId: cottonwoodDocId })).status).toBe(404);
     expect((await callRoute(documentRoute, "/x", { club: "cottonwood-flyers", documentId: cottonwoodDocId })).status).toBe(404);
     expect((await callRoute(uploadRoute, "/x", { club: CLUB, uploadId: cottonwoodUploadId })).status).toBe(404);

@@ -11,7 +11,7 @@ import { startOfClubDay } from "@/lib/safety/report-digest";
 import { EMPTY, clubBySlug, db, expectRedirect, form, signInAs } from "./helpers";
 import { callRoute, planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 const story = "The fuel sample from the left sump showed water twice before it ran clear.";
 
 function reportForm(extra: Record<string, string | string[]> = {}) {

@@ -11,7 +11,7 @@ import { uploadDir } from "@/lib/storage";
 import { EMPTY, db, squawkIdOf, form, signInAs } from "./helpers";
 import { planeByRegistration, seedFleetOnce } from "./fleet-helpers";
 
-const CLUB = "lakeshore-aero";
+const CLUB = "reedwater";
 
 async function serve(uploadId: string) {
   return uploadRoute(new Request(`http://app.test/api/clubs/${CLUB}/uploads/${uploadId}`), { params: Promise.resolve({ club: CLUB, uploadId }) });

@@ -7,7 +7,7 @@ import { formatMoney } from "@/lib/money/format";
 // What the test server's database holds, read-only: the ids that fill the route tree's dynamic
 // segments, and the private facts ("markers") that must not reach a role that may not see them.
 
-export const CLUB_SLUG = "lakeshore-aero";
+export const CLUB_SLUG = "reedwater";
 
 export type Viewer = {
   key: string;

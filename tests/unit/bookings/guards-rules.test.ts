@@ -10,7 +10,7 @@ const settings = defaultClubSettings();
 function input(over: { aircraft?: Partial<GuardInput["aircraft"]>; member?: Partial<GuardInput["member"]>; withInstructor?: boolean; carryingPassengers?: boolean; nightFlight?: boolean; nightUnknown?: boolean } = {}): GuardInput {
   return {
     window: { startDate: "2026-05-10", endDate: "2026-05-10" },
-    aircraft: { registration: "N0123X", typeGroup: "Kestrel K160", statusNow: flyable, statusAtEnd: flyable, averageFlightHours: 1.2, ...over.aircraft },
+    aircraft: { registration: "N0123X", typeGroup: "Fernwhistle F160", statusNow: flyable, statusAtEnd: flyable, averageFlightHours: 1.2, ...over.aircraft },
     member: {
       name: "Test Pilot", checkedOut: true, recencyLastDay: "2026-06-30", flightReviewLastDay: "2027-03-31", medicalLastDay: "2028-01-31",
       passengerDayLastDay: "2026-07-01", passengerNightLastDay: "2026-07-01", arrears: null, ...over.member,

@@ -7,7 +7,7 @@ const flyable = { status: "flyable" as const, reasons: [] };
 function input(over: { aircraft?: Partial<GuardInput["aircraft"]>; member?: Partial<GuardInput["member"]>; withInstructor?: boolean; carryingPassengers?: boolean; nightFlight?: boolean } = {}): GuardInput {
   return {
     window: { startDate: "2026-05-10", endDate: "2026-05-10" },
-    aircraft: { registration: "N0123X", typeGroup: "Kestrel K160", statusNow: flyable, statusAtEnd: flyable, averageFlightHours: 1.2, ...over.aircraft },
+    aircraft: { registration: "N0123X", typeGroup: "Fernwhistle F160", statusNow: flyable, statusAtEnd: flyable, averageFlightHours: 1.2, ...over.aircraft },
     member: {
       name: "Test Pilot", checkedOut: true, recencyLastDay: "2026-06-30", flightReviewLastDay: "2027-03-31", medicalLastDay: "2028-01-31", passengerDayLastDay: "2026-07-01", passengerNightLastDay: "2026-07-01",
       arrears: { inArrears: false, owedText: "$0.00", oldestDueDate: null }, ...over.member,
@@ -61,7 +61,7 @@ describe("evaluateBookingGuards", () => {
 
   it("currency lapsing before the booking's last day counts (flight review 14 CFR 61.56(c), club recency)", () => {
     const out = evaluateBookingGuards(input({ member: { flightReviewLastDay: "2026-05-09", recencyLastDay: null } }), settings);
-    expect(out.warnings).toEqual([{ guard: "notCurrent", reason: "Test Pilot is not current: no flight in the Kestrel K160 on record within the club's 90 days." }]);
+    expect(out.warnings).toEqual([{ guard: "notCurrent", reason: "Test Pilot is not current: no flight in the Fernwhistle F160 on record within the club's 90 days." }]);
     // 14 CFR 61.56(c): the review ran out the day before the booking: refused, not "not current".
     expect(out.refusals).toEqual([{ guard: "flightReview", reason: "Test Pilot may not act as pilot in command after 2026-05-09: the flight review expires before the booking ends (14 CFR 61.56(c)). Book with an instructor for a flight review." }]);
     // Still good on its last day (the day itself counts).

@@ -11,9 +11,9 @@ const people = [
   person("dee", ["member"]),
 ];
 const standing = [
-  { userId: "ada", typeGroup: "Kestrel K160" },
+  { userId: "ada", typeGroup: "Fernwhistle F160" },
   { userId: "ben", typeGroup: "Larkspur L-2" },
-  { userId: "mech", typeGroup: "Kestrel K160" },
+  { userId: "mech", typeGroup: "Fernwhistle F160" },
 ];
 
 describe("resolveAudience — who a bulletin is addressed to", () => {
@@ -28,15 +28,15 @@ describe("resolveAudience — who a bulletin is addressed to", () => {
   });
 
   it("a type group means members with a standing checkout in it, matched without regard to case or spacing", () => {
-    expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: "Kestrel K160" }).map((p) => p.userId)).toEqual(["ada"]);
+    expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: "Fernwhistle F160" }).map((p) => p.userId)).toEqual(["ada"]);
     expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: "  kestrel   k160 " }).map((p) => p.userId)).toEqual(["ada"]);
     expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: "Brightwing BW-4" })).toEqual([]);
     expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: null })).toEqual([]);
   });
 
   it("answers for one person the same way", () => {
-    expect(isInAudience({ userId: "ada", roles: ["member"] }, standing, { audience: "type_group", typeGroup: "Kestrel K160" })).toBe(true);
-    expect(isInAudience({ userId: "dee", roles: ["member"] }, standing, { audience: "type_group", typeGroup: "Kestrel K160" })).toBe(false);
+    expect(isInAudience({ userId: "ada", roles: ["member"] }, standing, { audience: "type_group", typeGroup: "Fernwhistle F160" })).toBe(true);
+    expect(isInAudience({ userId: "dee", roles: ["member"] }, standing, { audience: "type_group", typeGroup: "Fernwhistle F160" })).toBe(false);
     expect(isInAudience({ userId: "mech", roles: ["mechanic"] }, standing, { audience: "everyone", typeGroup: null })).toBe(false);
     expect(normalizeTypeGroup(" Larkspur  L-2 ")).toBe("larkspur l-2");
   });

@@ -8,10 +8,10 @@ const base: CurrencyInput = {
     { date: "2025-05-01", dayLandings: 3, nightFullStopLandings: 0 },
     { date: "2025-03-01", dayLandings: 0, nightFullStopLandings: 3 },
   ],
-  typeFlights: [{ date: "2025-05-20", typeGroup: "Kestrel K160" }],
+  typeFlights: [{ date: "2025-05-20", typeGroup: "Fernwhistle F160" }],
   lastFlightReview: "2023-06-10",
   medicalExpiresOn: "2027-06-30",
-  checkoutTypeGroups: ["Kestrel K160", "kestrel k160", "Larkspur L-2"],
+  checkoutTypeGroups: ["Fernwhistle F160", "kestrel k160", "Larkspur L-2"],
   recencyDaysInType: 60, // a club setting stricter than the regulations
   documentWarnDays: 30,
   today: "2025-06-15",
@@ -37,8 +37,8 @@ describe("summarizeCurrency — one member's currency from lib/currency", () => 
     expect(item("medical")).toEqual({ key: "medical", label: "Medical", state: "current", lastDay: "2027-06-30" });
   });
 
-  it("recency per checked-out type group, each group once: Kestrel flown 2025-05-20 counts through 2025-07-18 on a 60-day rule (club setting)", () => {
-    expect(item("recency:kestrel k160")).toMatchObject({ state: "current", lastDay: "2025-07-18", label: "Recency in Kestrel K160" });
+  it("recency per checked-out type group, each group once: Fernwhistle flown 2025-05-20 counts through 2025-07-18 on a 60-day rule (club setting)", () => {
+    expect(item("recency:kestrel k160")).toMatchObject({ state: "current", lastDay: "2025-07-18", label: "Recency in Fernwhistle F160" });
     expect(item("recency:larkspur l-2")).toMatchObject({ state: "missing", lastDay: null });
     expect(items.filter((i) => i.key.startsWith("recency:"))).toHaveLength(2);
   });

@@ -15,7 +15,7 @@ describe("safety form schemas", () => {
   });
 
   it("accepts a good bulletin and treats an empty file input as no file", () => {
-    const r = createBulletinSchema.safeParse({ title: "Brakes", bodyMarkdown: "Hold each pedal five seconds.", urgency: "priority", audience: "type_group", audienceTypeGroup: "Kestrel K160", acknowledgeBy: "", intent: "draft", attachment: new File([], "") });
+    const r = createBulletinSchema.safeParse({ title: "Brakes", bodyMarkdown: "Hold each pedal five seconds.", urgency: "priority", audience: "type_group", audienceTypeGroup: "Fernwhistle F160", acknowledgeBy: "", intent: "draft", attachment: new File([], "") });
     expect(r.success).toBe(true);
     expect(r.data?.attachment).toBeUndefined();
     expect(r.data?.acknowledgeBy).toBeUndefined();
