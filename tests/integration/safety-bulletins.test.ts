@@ -69,7 +69,7 @@ describe("safety bulletins", () => {
 
   it("publishing to a type group reaches exactly the members checked out in it", async () => {
     signInAs("safety@hangarline.test");
-    const id = await publish({ audience: "type_group", audienceTypeGroup: "kestrel k160", acknowledgeBy: "2099-01-31" });
+    const id = await publish({ audience: "type_group", audienceTypeGroup: "fernwhistle f160", acknowledgeBy: "2099-01-31" });
     expect(bulletinMail(id).map((m) => m.toAddress).sort()).toEqual(["member@hangarline.test", "pilot2@hangarline.test"]);
     const row = db().select().from(bulletins).where(eq(bulletins.id, id)).get()!;
     expect(row).toMatchObject({ audienceTypeGroup: "Fernwhistle F160", acknowledgeBy: "2099-01-31", status: "published" }); // spelled as the fleet spells it

@@ -83,7 +83,7 @@ describe("evaluateBookingGuards", () => {
   it("arrears apply with or without an instructor, warned by default", () => {
     const member = { arrears: { inArrears: true, owedText: "$212.40", oldestDueDate: "2026-03-01" } };
     const out = evaluateBookingGuards(input({ member, withInstructor: true }), settings);
-    expect(out.warnings).toEqual([{ guard: "inArrears", reason: "Test Pilot's account is in arrears: $212.40 owed, unpaid since 2026-03-01." }]);
+    expect(out.warnings).toEqual([{ guard: "inArrears", reason: "Test Pilot's account is overdue: $212.40 owed, unpaid since 2026-03-01." }]);
   });
 });
 

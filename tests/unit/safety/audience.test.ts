@@ -29,7 +29,7 @@ describe("resolveAudience — who a bulletin is addressed to", () => {
 
   it("a type group means members with a standing checkout in it, matched without regard to case or spacing", () => {
     expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: "Fernwhistle F160" }).map((p) => p.userId)).toEqual(["ada"]);
-    expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: "  kestrel   k160 " }).map((p) => p.userId)).toEqual(["ada"]);
+    expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: "  fernwhistle   f160 " }).map((p) => p.userId)).toEqual(["ada"]);
     expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: "Brightwing BW-4" })).toEqual([]);
     expect(resolveAudience(people, standing, { audience: "type_group", typeGroup: null })).toEqual([]);
   });

@@ -11,7 +11,7 @@ const base: CurrencyInput = {
   typeFlights: [{ date: "2025-05-20", typeGroup: "Fernwhistle F160" }],
   lastFlightReview: "2023-06-10",
   medicalExpiresOn: "2027-06-30",
-  checkoutTypeGroups: ["Fernwhistle F160", "kestrel k160", "Larkspur L-2"],
+  checkoutTypeGroups: ["Fernwhistle F160", "fernwhistle f160", "Larkspur L-2"],
   recencyDaysInType: 60, // a club setting stricter than the regulations
   documentWarnDays: 30,
   today: "2025-06-15",
@@ -38,7 +38,7 @@ describe("summarizeCurrency — one member's currency from lib/currency", () => 
   });
 
   it("recency per checked-out type group, each group once: Fernwhistle flown 2025-05-20 counts through 2025-07-18 on a 60-day rule (club setting)", () => {
-    expect(item("recency:kestrel k160")).toMatchObject({ state: "current", lastDay: "2025-07-18", label: "Recency in Fernwhistle F160" });
+    expect(item("recency:fernwhistle f160")).toMatchObject({ state: "current", lastDay: "2025-07-18", label: "Recency in Fernwhistle F160" });
     expect(item("recency:larkspur l-2")).toMatchObject({ state: "missing", lastDay: null });
     expect(items.filter((i) => i.key.startsWith("recency:"))).toHaveLength(2);
   });
