@@ -7,9 +7,10 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import type { ReconciliationWorkspace, WorkspaceLine } from "@/db/queries/money-reconcile";
 import { bookLine, ignoreLine, lockReconciledPeriod, matchBankLine, runAutoMatch, unmatchLine } from "@/lib/actions/money/reconcile-lines";
 import { daysBetween } from "@/lib/dates";
-import { formatMoney } from "@/lib/money";
+import { DEFAULT_LOCALE, formatMoney } from "@/lib/money";
 import { ActionButton } from "./action-form";
 import { PeriodReportPanel } from "./period-report";
+import { formatDate } from "@/lib/dates";
 
 type Data = ReconciliationWorkspace;
 const KIND_WORDS: Record<string, string> = { exact: "same amount and date", reference: "same reference", payout: "card payout", manual: "matched by hand", booked: "posted from the statement" };
@@ -34,7 +35,7 @@ function MatchForm({ slug, line, data, currency, locale }: { slug: string; line:
           {candidates.map((c) => (
             <label key={c.id} className="flex items-start gap-2 py-1 text-sm">
               <input type="checkbox" name="bookIds[]" value={c.id} className="mt-1 size-4" />
-              <span><span className="font-mono tabular">{c.date}</span> · {c.text} · <span className="font-mono tabular">{formatMoney(c.amountMinor, currency, locale)}</span></span>
+              <span><span className="tabular">{formatDate(c.date, locale ?? DEFAULT_LOCALE)}</span> · {c.text} · <span className="font-mono tabular">{formatMoney(c.amountMinor, currency, locale)}</span></span>
             </label>
           ))}
         </fieldset>
@@ -78,12 +79,12 @@ function LineRow({ slug, line, data, currency, locale, locked }: { slug: string;
   return (
     <li className="border-t border-sand-200 py-3 first:border-t-0">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
-        <span className="min-w-0"><span className="font-mono tabular">{line.date}</span> · <span className="break-words">{line.description}</span>{line.reference ? <span className="text-ink-500"> · {line.reference}</span> : null}</span>
+        <span className="min-w-0"><span className="tabular">{formatDate(line.date, locale ?? DEFAULT_LOCALE)}</span> · <span className="break-words">{line.description}</span>{line.reference ? <span className="text-ink-500"> · {line.reference}</span> : null}</span>
         <span className="flex items-baseline gap-3"><span className="font-mono font-bold tabular">{formatMoney(line.amountMinor, currency, locale)}</span><span className="text-sm"><span aria-hidden="true">{shape} </span>{status}</span></span>
       </div>
       {line.match ? (
         <ul className="mt-1 text-sm text-ink-700">
-          {line.match.items.map((i) => <li key={i.journalLineId}>↳ {i.date} · {i.memo} · <span className="font-mono tabular">{formatMoney(i.amountMinor, currency, locale)}</span></li>)}
+          {line.match.items.map((i) => <li key={i.journalLineId}>↳ {formatDate(i.date, locale ?? DEFAULT_LOCALE)} · {i.memo} · <span className="font-mono tabular">{formatMoney(i.amountMinor, currency, locale)}</span></li>)}
         </ul>
       ) : null}
       {!locked ? (
@@ -132,13 +133,13 @@ export function ReconcileWorkspace({ slug, currency, locale, initial, renderedAt
       <div className="grid min-w-0 grid-cols-1 content-start gap-4">
         <PeriodReportPanel report={data.report} currency={currency} locale={locale} />
         {data.period ? (
-          <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800"><span aria-hidden="true">■ </span>Reconciled and locked through {data.period.periodEnd}.</p>
+          <p role="status" className="rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800"><span aria-hidden="true">■ </span>Reconciled and locked through {formatDate(data.period.periodEnd, locale ?? DEFAULT_LOCALE)}.</p>
         ) : locked ? (
           <p className="rounded border border-sand-500 bg-sand-50 px-3 py-2 text-sm">This statement lies inside a locked period.</p>
         ) : data.report.agrees && data.report.bankItemsNotInBooks.length > 0 ? (
           <p className="rounded border border-ask-600 bg-ask-100 px-3 py-2 text-sm text-ask-800"><span aria-hidden="true">◆ </span>The sides agree, but {data.report.bankItemsNotInBooks.length} statement line(s) are not in the books yet. Post them (&ldquo;Not in the books: post it&rdquo;) so the locked period shows them.</p>
         ) : data.report.agrees ? (
-          <ActionButton action={lockReconciledPeriod} slug={slug} hidden={{ statementId: id }} label="Lock this period" variant="primary" pendingText="Locking…" confirm={`Lock the books through ${data.statement.periodEnd}? Nothing can be posted on or before that day afterwards.`} />
+          <ActionButton action={lockReconciledPeriod} slug={slug} hidden={{ statementId: id }} label="Lock this period" variant="primary" pendingText="Locking…" confirm={`Lock the books through ${formatDate(data.statement.periodEnd, locale ?? DEFAULT_LOCALE)}? Nothing can be posted on or before that day afterwards.`} />
         ) : (
           <p className="rounded border border-ask-600 bg-ask-100 px-3 py-2 text-sm text-ask-800"><span aria-hidden="true">◆ </span>The two sides differ by {formatMoney(data.report.differenceMinor, currency, locale)}. Match, post or set aside lines until they agree; then the period can be locked.</p>
         )}

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { isoDateInTimeZone } from "@/lib/dates";
+import { formatDate, isoDateInTimeZone } from "@/lib/dates";
 import { ofxFile, twoAccounts } from "../fixtures/ofx-two-accounts";
 import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harness";
 
@@ -43,7 +43,7 @@ describe("bank statements: an OFX file with two accounts, corrected and removed"
     await savings.check();
     await form.getByRole("button", { name: "Import the chosen account" }).click();
     await page.waitForURL(/\/money\/reconciliation\/[0-9a-f-]{36}$/);
-    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe(`Statement ${start} to ${end}`);
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe(`Statement ${formatDate(start, "en-US")} to ${formatDate(end, "en-US")}`);
     await expect(page.getByText(`${fileName} · 2 lines`).count()).resolves.toBe(1);
     await expect(page.getByText("INTEREST PAID").count()).resolves.toBeGreaterThan(0);
     await expect(page.getByText("DEPOSIT CLUB DUES BATCH").count()).resolves.toBe(0);

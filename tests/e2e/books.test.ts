@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { describe, expect, inject, it } from "vitest";
 import { openDatabase } from "@/db/client";
 import { clubs } from "@/db/schema";
-import { isoDateInTimeZone } from "@/lib/dates";
+import { formatDate, isoDateInTimeZone } from "@/lib/dates";
 import { expectNoHorizontalOverflow, newPage, screenshot, signIn } from "./harness";
 
 // The treasurer's books in the browser: a bill entered with its category, paid from the bank,
@@ -33,7 +33,7 @@ describe("the treasurer's books", () => {
     await enter.getByRole("status").filter({ hasText: `Bill from ${vendor} for $${amount} entered and ready to pay.` }).waitFor();
 
     const pay = page.getByRole("form", { name: "Pay a bill" });
-    await pay.getByLabel("Bill").selectOption({ label: `${vendor} · $${amount} · due ${today}` });
+    await pay.getByLabel("Bill").selectOption({ label: `${vendor} · $${amount} · due ${formatDate(today, "en-US")}` });
     await pay.getByRole("button", { name: "Pay from the bank" }).click();
     await pay.getByRole("status").filter({ hasText: `Paid: $${amount} to ${vendor} from the bank on ${today}.` }).waitFor();
 

@@ -4,7 +4,7 @@ import { describe, expect, inject, it } from "vitest";
 import { openDatabase } from "@/db/client";
 import { clubs } from "@/db/schema";
 import { demoBankStatement } from "@/db/seed/money";
-import { isoDateInTimeZone } from "@/lib/dates";
+import { formatDate, isoDateInTimeZone } from "@/lib/dates";
 import { monthOf, shiftMonthKey } from "@/lib/money/months";
 import { minorToDecimalString } from "@/lib/money";
 import { expectNoHorizontalOverflow, newPage, paymentsUrl, screenshot, signIn } from "./harness";
@@ -76,7 +76,7 @@ describe("money in the browser", () => {
     await fee.getByRole("button", { name: "Post to the books" }).click();
     await expect(page.getByText("The two sides agree.").waitFor()).resolves.toBeUndefined();
     await page.getByRole("button", { name: "Lock this period" }).click();
-    await expect(page.getByText(`Reconciled and locked through ${statement.periodEnd}.`).waitFor()).resolves.toBeUndefined();
+    await expect(page.getByText(`Reconciled and locked through ${formatDate(statement.periodEnd, "en-US")}.`).waitFor()).resolves.toBeUndefined();
     await screenshot(page, "money-reconciled-desktop");
 
     await page.goto("/clubs/cottonwood-flyers/money/reconciliation");

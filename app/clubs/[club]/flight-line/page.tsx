@@ -5,6 +5,7 @@ import { buttonClass } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { getFlightLine } from "@/db/queries/fleet-status";
+import { formatDateWords } from "@/lib/dates/words";
 import { authorizePage } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Flight line" };
@@ -18,7 +19,7 @@ export default async function FlightLinePage({ params }: { params: Promise<{ clu
     <div className="max-w-6xl">
       <PageHeader
         title="Flight line"
-        lead={`Every aircraft of ${club.name} with its status and the reasons for it, on ${initial.today}.`}
+        lead={`Every aircraft of ${club.name} with its status and the reasons for it, on ${formatDateWords(initial.today)}.`}
         actions={<Link href={`/clubs/${club.slug}/aircraft`} className={buttonClass("secondary")}>Aircraft records</Link>}
       />
       <div className="mb-4"><SafetyCaution compact /></div>

@@ -14,6 +14,7 @@ import { clubToday } from "@/lib/money/settings";
 import { formatMoney, minorToDecimalString, currencyExponent } from "@/lib/money";
 import { authorizePage } from "@/lib/server/authorize";
 import { can } from "@/permissions";
+import { formatDate } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Bills" };
 
@@ -54,7 +55,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
                   <span className="flex items-baseline gap-3"><Money minor={b.amountMinor} currency={club.currency} locale={club.locale} /><span className="text-sm font-bold"><span aria-hidden="true">{STATUS[b.status].shape} </span>{STATUS[b.status].word}</span></span>
                 </div>
                 <p className="text-sm text-ink-700">
-                  {b.periodKey ? `Recurring, ${b.periodKey} · ` : ""}Dated {b.billDate} · due {b.dueOn}{b.status !== "paid" && b.dueOn < today ? <span className="font-bold text-stop-800"> (overdue)</span> : null} · entered by {b.enteredBy}
+                  {b.periodKey ? `Recurring, ${b.periodKey} · ` : ""}Dated {formatDate(b.billDate, club.locale)} · due {formatDate(b.dueOn, club.locale)}{b.status !== "paid" && b.dueOn < today ? <span className="font-bold text-stop-800"> (overdue)</span> : null} · entered by {b.enteredBy}
                   {b.approvedBy ? ` · approved by ${b.approvedBy}` : ""}{b.paidOn ? ` · paid ${b.paidOn}` : ""}
                 </p>
                 {b.attachments.length ? (
@@ -70,7 +71,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
       {canApprove && toApprove.length ? (
         <section className="card mb-8 max-w-2xl" aria-labelledby="approve-h">
           <h2 id="approve-h" className="mb-3 text-lg font-bold">Approve a bill</h2>
-          <ActionForm action={approveBillAction} slug={club.slug} label="Approve a bill" submitLabel="Approve" fields={[{ name: "billId", label: "Bill", type: "select", options: toApprove.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency, club.locale)} · due ${b.dueOn}` })) }]} />
+          <ActionForm action={approveBillAction} slug={club.slug} label="Approve a bill" submitLabel="Approve" fields={[{ name: "billId", label: "Bill", type: "select", options: toApprove.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency, club.locale)} · due ${formatDate(b.dueOn, club.locale)}` })) }]} />
         </section>
       ) : null}
       {canEnter ? (
@@ -84,7 +85,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
             submitLabel="Pay from the bank"
             grid
             fields={[
-              { name: "billId", label: "Bill", type: "select", options: toPay.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency, club.locale)} · due ${b.dueOn}` })) },
+              { name: "billId", label: "Bill", type: "select", options: toPay.map((b) => ({ value: b.id, label: `${b.vendor} · ${formatMoney(b.amountMinor, club.currency, club.locale)} · due ${formatDate(b.dueOn, club.locale)}` })) },
               { name: "paidOn", label: "Paid on", type: "date", defaultValue: today },
             ]}
           />

@@ -9,6 +9,7 @@ import { getReconciliationWorkspace, type ReconciliationWorkspace } from "@/db/q
 import { currencyExponent as currencyExponentOf, minorToDecimalString } from "@/lib/money";
 import { can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
+import { formatDate } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Reconcile a statement" };
 export const dynamic = "force-dynamic";
@@ -25,7 +26,7 @@ export default async function StatementWorkspacePage({ params }: { params: Promi
   const matchedCount = workspace.lines.filter((l) => l.match).length;
   return (
     <>
-      <PageHeader title={`Statement ${st.periodStart} to ${st.periodEnd}`} lead={<><Link href={`/clubs/${club.slug}/money/reconciliation`}>All statements</Link> · {st.fileName} · {st.lineCount} lines{st.skippedCount ? `, ${st.skippedCount} skipped as already imported` : ""}</>} />
+      <PageHeader title={`Statement ${formatDate(st.periodStart, club.locale)} to ${formatDate(st.periodEnd, club.locale)}`} lead={<><Link href={`/clubs/${club.slug}/money/reconciliation`}>All statements</Link> · {st.fileName} · {st.lineCount} lines{st.skippedCount ? `, ${st.skippedCount} skipped as already imported` : ""}</>} />
       <MoneyNav slug={club.slug} ability={ability} />
       {can(ability, "reconcile", "Reconciliation") ? (
         <>
@@ -34,7 +35,7 @@ export default async function StatementWorkspacePage({ params }: { params: Promi
             <h2 id="edit-h" className="mb-1 text-lg font-bold">Correct or remove this statement</h2>
             {locked ? (
               <p className="text-sm text-ink-700">
-                <span aria-hidden="true">■ </span>This statement is in a reconciled, locked period (the books are locked through {workspace.period?.periodEnd ?? workspace.lockedThrough}): it can no longer be corrected or removed.
+                <span aria-hidden="true">■ </span>This statement is in a reconciled, locked period (the books are locked through {formatDate((workspace.period?.periodEnd ?? workspace.lockedThrough)!, club.locale)}): it can no longer be corrected or removed.
               </p>
             ) : (
               <div className="grid gap-6 sm:grid-cols-2">
