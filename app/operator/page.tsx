@@ -9,7 +9,8 @@ import { formatMoney } from "@/lib/money";
 import { STATUS_WORDS } from "@/lib/fleet/status-words";
 import { STATUS_TEXT_TONE, StatusShape } from "@/components/ui/status-badge";
 
-export const metadata: Metadata = { title: "Clubs · Operator console" };
+// Not "Operator console": that is the layout's header, and a render that skips the layout must not carry it.
+export const metadata: Metadata = { title: "Clubs you administer" };
 
 export default async function OperatorHome() {
   const user = await authorizeOperatorPage();

@@ -60,7 +60,9 @@ export function StatusShape({ status, size = 18 }: { status: StatusOrNothing; si
       return (
         <svg {...common}>
           <circle cx="10" cy="10" r="8.2" fill="none" stroke="currentColor" strokeWidth="2" strokeDasharray="3.2 2.2" />
-          <text x="10" y="14.3" textAnchor="middle" fontSize="11.5" fontWeight="700" fill="currentColor" fontFamily="sans-serif">?</text>
+          {/* The question mark is drawn, not typed: a glyph must not add a character to the badge's text. */}
+          <path d="M7.4 7.6 C7.4 5.9 8.6 5 10 5 C11.5 5 12.6 5.9 12.6 7.3 C12.6 8.6 11.7 9.1 10.9 9.6 C10.3 10 10 10.4 10 11.3" fill="none" stroke="currentColor" strokeWidth="2" strokeLinecap="round" />
+          <circle cx="10" cy="14.3" r="1.3" fill="currentColor" />
         </svg>
       );
   }

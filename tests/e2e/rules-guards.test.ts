@@ -117,7 +117,7 @@ describe("rules before the pilot, in the browser", () => {
       await begin.getByLabel("I have dealt with every finding listed for this aircraft.").check();
       await begin.getByRole("button", { name: "Begin flight" }).click();
       await page.getByRole("link", { name: "Close the flight sheet" }).waitFor();
-      await page.getByText(/^Flight begun \d/).waitFor();
+      await page.getByText(/^Flight begun [A-Z][a-z]{2} \d/).waitFor();
     });
   });
 });
