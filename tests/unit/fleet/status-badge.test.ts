@@ -27,6 +27,9 @@ describe("StatusBadge", () => {
     const shapes = statuses.map((s) => /<svg[^>]*>(.*?)<\/svg>/.exec(html[s]!)?.[1]);
     expect(new Set(shapes).size).toBe(4);
     for (const s of statuses) expect(html[s]).toMatch(/<svg[^>]*aria-hidden="true"/);
-    expect(html.unknown).toContain(">?</text>");
+    // The unknown mark's question mark is drawn (a stroke and a dot), never a text character that
+    // would join the badge's words.
+    expect(html.unknown).not.toContain("<text");
+    expect(html.unknown).toMatch(/<path[^>]*stroke-linecap="round"/);
   });
 });
