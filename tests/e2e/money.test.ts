@@ -66,7 +66,7 @@ describe("money in the browser", () => {
     await form.getByLabel(/^Closing balance/).fill(minorToDecimalString(statement.closingMinor, 2));
     await form.getByRole("button", { name: "Import and match" }).click();
     await page.waitForURL(/\/money\/reconciliation\/[0-9a-f-]{36}$/);
-    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe(`Statement ${statement.periodStart} to ${statement.periodEnd}`);
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe(`Statement ${formatDate(statement.periodStart, "en-US")} to ${formatDate(statement.periodEnd, "en-US")}`);
 
     // The bank's fee is not in the books yet: post it from the statement line.
     const fee = page.getByRole("listitem").filter({ hasText: "ACCOUNT MAINTENANCE FEE" }).first();
