@@ -1,3 +1,5 @@
+// Sources: ISO 216 (A4 is 210 × 297 mm), ANSI/ASME Y14.1 (size A, US Letter, is 8.5 × 11 in), and
+// ISO 32000-1 (PDF user space: 72 units per inch), which turn them into the MediaBox values below.
 import { describe, expect, it } from "vitest";
 import { renderStatementPdf } from "@/lib/money/statement-pdf";
 
