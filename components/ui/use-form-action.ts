@@ -2,6 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState, useTransition, type FormEvent, type RefObject } from "react";
 import { initialActionState, type ActionState } from "@/lib/actions/action-state";
+import { NAVIGATION_PATIENCE_MS } from "./navigation-watchdog";
 
 export type FormAction<R = unknown> = (prev: ActionState, formData: FormData) => Promise<ActionState<R>>;
 
@@ -19,7 +20,7 @@ export type FormActionHandle<R = unknown> = {
 };
 
 /** How long a follow-up (navigation or refresh) may take before the page is loaded the plain way. */
-const FOLLOW_UP_PATIENCE_MS = 10_000;
+const FOLLOW_UP_PATIENCE_MS = NAVIGATION_PATIENCE_MS;
 
 const NO_ANSWER: ActionState = {
   ok: false,

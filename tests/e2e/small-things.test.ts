@@ -150,3 +150,31 @@ describe("fresh data after a change, without a reload", () => {
     await page.context().close();
   });
 });
+
+describe("a tap on a link always leads somewhere", () => {
+  it("loads the page the plain way when the router never shows it", async () => {
+    const page = await newPage("desktop");
+    await signIn(page, "member@hangarline.test");
+    // Every router request for the flight line (its prefetches too) is held unanswered: the router's
+    // navigation can never commit, as when it parks under load. A plain page load (no RSC header) goes through.
+    let held = 0;
+    await page.route("**/clubs/reedwater/flight-line**", async (route) => {
+      if (route.request().headers()["rsc"]) held += 1;
+      else await route.continue();
+    });
+    await page.goto("/clubs/reedwater", { waitUntil: "load" });
+    const documents: string[] = [];
+    page.on("request", (r) => {
+      if (r.isNavigationRequest() && r.frame() === page.mainFrame()) documents.push(new URL(r.url()).pathname);
+    });
+    const nav = page.locator("aside").getByRole("navigation", { name: "Club sections" });
+    await nav.getByRole("link", { name: "Flight line" }).click();
+    await page.getByRole("heading", { level: 1, name: /Flight line/ }).waitFor({ timeout: 30_000 });
+    expect(new URL(page.url()).pathname).toBe("/clubs/reedwater/flight-line");
+    // It came as a plain page load, once.
+    expect(documents).toEqual(["/clubs/reedwater/flight-line"]);
+    expect(held).toBeGreaterThan(0);
+    await page.unrouteAll({ behavior: "ignoreErrors" });
+    await page.context().close();
+  });
+});
