@@ -9,7 +9,7 @@ import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
 import { currencyExponent, DEFAULT_LOCALE, formatMoney, minorToDecimalString } from "@/lib/money";
 import { formatDate, isIsoDate } from "@/lib/dates";
-import { writeCsv } from "@/lib/csv";
+import { writeCsv, type CsvCell } from "@/lib/csv";
 import { ActionButton, type ServerAction } from "./action-form";
 import { ArrearsFlag } from "./money-text";
 
@@ -26,9 +26,10 @@ export type ColumnSpec = {
 
 export type RowAction = { action: ServerAction; slug: string; label: string; idKey: string; fieldName: string; showKey?: string; confirm?: string };
 
-function csvValue(col: ColumnSpec, v: Cell, exponent: number): string {
+function csvValue(col: ColumnSpec, v: Cell, exponent: number): CsvCell {
   if (v === null || v === undefined) return "";
-  if (col.kind === "money" && typeof v === "number") return minorToDecimalString(v, exponent);
+  if (col.kind === "money" && typeof v === "number") return { decimal: minorToDecimalString(v, exponent) };
+  if (col.kind === "date" && typeof v === "string" && /^\d{4}-\d{2}-\d{2}$/.test(v)) return { day: v };
   if (col.kind === "flag") return v ? "yes" : "no";
   return String(v);
 }
@@ -126,7 +127,7 @@ export function DataTable({ rows, columns, currency, locale, csvName, label, fil
   function exportCsv() {
     const exponent = currencyExponent(currency);
     const shown = table.getPrePaginationRowModel().rows.map((r) => columns.map((c) => csvValue(c, r.original[c.key] ?? null, exponent)));
-    const blob = new Blob([writeCsv(columns.map((c) => c.header), shown)], { type: "text/csv;charset=utf-8" });
+    const blob = new Blob([writeCsv(columns.map((c) => c.header), shown, { locale })], { type: "text/csv;charset=utf-8" });
     const a = document.createElement("a");
     a.href = URL.createObjectURL(blob);
     a.download = `${csvName}.csv`;

@@ -1,3 +1,3 @@
 // CSV in and out, through the csv-parse / csv-stringify libraries (one reader, one writer).
-export { guardCsvCell, writeCsv, type CsvCell } from "./write";
+export { csvDialect, guardCsvCell, writeCsv, type CsvCell, type CsvDay, type CsvDecimal, type CsvDialect } from "./write";
 export { CsvReadError, readCsvRecords, type CsvRecord } from "./read";

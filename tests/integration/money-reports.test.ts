@@ -4,6 +4,7 @@
 import { and, eq, gte, lte } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { GET as reportsRoute } from "@/app/api/clubs/[club]/money/reports/route";
+import { GET as journalRoute } from "@/app/api/clubs/[club]/money/journal/route";
 import { journalEntries, journalLines, ledgerAccounts } from "@/db/schema";
 import { clubBySlug, db, signInAs } from "./helpers";
 import { callRoute } from "./fleet-helpers";
@@ -65,5 +66,23 @@ describe("profit and loss and balance sheet over the journal", () => {
     signInAs("member@hangarline.test");
     const member = await callRoute(reportsRoute, `/api/clubs/${SLUG}/money/reports?report=balance-sheet&asOf=2026-12-31`, { club: SLUG });
     expect(member.status).toBe(403);
+  });
+
+  it("exports in the club's locale: a de-DE club gets semicolons, decimal commas and its day order", async () => {
+    signInAs("silberau.admin@hangarline.test");
+    const csv = await callRoute(reportsRoute, `/api/clubs/aeroclub-silberau/money/reports?report=balance-sheet&asOf=2026-12-31&format=csv`, { club: "aeroclub-silberau" });
+    expect(csv.status).toBe(200);
+    const text = Buffer.from(csv.body as ArrayBuffer).toString("utf8");
+    // CLDR de: "," decimal mark; ";" between fields where the decimal mark is a comma (common practice).
+    expect(text.split("\r\n")[0]).toBe("Section;Account code;Account;Amount (EUR)");
+    expect(text).toMatch(/Check;;Balanced;0,00\r\n$/);
+    expect(text).not.toMatch(/\d\.\d{2}(;|\r\n)/);
+    const pnl = await callRoute(reportsRoute, `/api/clubs/aeroclub-silberau/money/reports?report=profit-and-loss&from=2026-01-01&to=2026-12-31&format=csv`, { club: "aeroclub-silberau" });
+    expect(Buffer.from(pnl.body as ArrayBuffer).toString("utf8")).toMatch(/Total;;Net \(income − expenses\);-?\d+,\d{2}\r\n$/);
+    const journal = await callRoute(journalRoute, `/api/clubs/aeroclub-silberau/money/journal?format=csv`, { club: "aeroclub-silberau" });
+    const lines = Buffer.from(journal.body as ArrayBuffer).toString("utf8").split("\r\n").filter(Boolean);
+    expect(lines[0]).toBe("Date;Entry;Kind;Memo;Reference;Account code;Account;Debit;Credit;Currency");
+    expect(lines.length).toBeGreaterThan(1);
+    for (const line of lines.slice(1)) expect(line).toMatch(/^\d{2}\.\d{2}\.\d{4};/); // CLDR de: dd.MM.y
   });
 });

@@ -2,7 +2,7 @@
 // OWASP "CSV Injection" (owasp.org/www-community/attacks/CSV_Injection) for the formula guard:
 // cells starting with = + - @, tab (0x09) or carriage return (0x0D) are prefixed with a single quote.
 import { describe, expect, it } from "vitest";
-import { guardCsvCell, writeCsv } from "@/lib/csv";
+import { csvDialect, guardCsvCell, writeCsv } from "@/lib/csv";
 import { splitCsvRecords } from "@/lib/reconcile";
 
 describe("writeCsv (RFC 4180)", () => {
@@ -46,5 +46,31 @@ describe("guardCsvCell (OWASP CSV Injection)", () => {
   it("guards every cell of a written document, the header too, and quotes what needs it", () => {
     expect(writeCsv(["=h"], [["=1+2"], ['=HYPERLINK("x")']])).toBe(`'=h\r\n'=1+2\r\n"'=HYPERLINK(""x"")"\r\n`); // OWASP CSV Injection + RFC 4180 §2.7
     expect(writeCsv(["m"], [["-12.50"], ["+1"], ["@x"]])).toBe("m\r\n-12.50\r\n'+1\r\n'@x\r\n");
+  });
+});
+
+describe("writeCsv in the club's locale", () => {
+  it("keeps RFC 4180 commas, '.' decimals and ISO 8601 days without a locale", () => {
+    expect(writeCsv(["Day", "Amount"], [[{ day: "2026-12-31" }, { decimal: "-1234.50" }]])).toBe("Day,Amount\r\n2026-12-31,-1234.50\r\n"); // RFC 4180 §2; ISO 8601 calendar date
+  });
+
+  it("writes a comma-decimal locale's amounts with its mark and separates fields with semicolons", () => {
+    // Decimal comma and day.month.year for de-DE: Unicode CLDR locale data, as Intl gives it.
+    // The semicolon between fields where the decimal mark is a comma: common practice (a spreadsheet
+    // set to such a locale reads ";" as the list separator).
+    expect(csvDialect("de-DE").delimiter).toBe(";");
+    expect(writeCsv(["Tag", "Betrag", "Memo"], [[{ day: "2026-12-31" }, { decimal: "-1234.50" }, "Treibstoff; Öl"]], { locale: "de-DE" })).toBe(
+      'Tag;Betrag;Memo\r\n31.12.2026;-1234,50;"Treibstoff; Öl"\r\n', // CLDR de: "," decimal, dd.MM.y; RFC 4180 §2.6 quoting (with ";" as the separator)
+    );
+    expect(writeCsv(["Jour", "Montant"], [[{ day: "2026-04-01" }, { decimal: "12.50" }]], { locale: "fr-FR" })).toBe("Jour;Montant\r\n01/04/2026;12,50\r\n"); // CLDR fr: "," decimal, dd/MM/y
+  });
+
+  it("keeps commas for point-decimal locales and writes their numeric day order", () => {
+    expect(writeCsv(["Day", "Amount"], [[{ day: "2026-04-01" }, { decimal: "12.50" }]], { locale: "en-US" })).toBe("Day,Amount\r\n04/01/2026,12.50\r\n"); // CLDR en-US: M/d/y
+    expect(writeCsv(["Day", "Amount"], [[{ day: "2026-04-01" }, { decimal: "12.50" }]], { locale: "en-GB" })).toBe("Day,Amount\r\n01/04/2026,12.50\r\n"); // CLDR en-GB: dd/MM/y
+  });
+
+  it("still guards text cells against formulas, whatever the locale", () => {
+    expect(writeCsv(["m"], [["=1+2"], [{ decimal: "=1+2" }]], { locale: "de-DE" })).toBe("m\r\n'=1+2\r\n'=1+2\r\n"); // OWASP CSV Injection
   });
 });

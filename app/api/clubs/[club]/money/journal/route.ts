@@ -29,7 +29,8 @@ export async function GET(req: Request, { params }: { params: Promise<{ club: st
     const rows = journalLinesForExport(ctx.db, ctx.club.id, range);
     const csv = writeCsv(
       ["Date", "Entry", "Kind", "Memo", "Reference", "Account code", "Account", "Debit", "Credit", "Currency"],
-      rows.map((r) => [r.date, r.entryId, r.kind, r.memo, r.reference ?? "", r.accountCode, r.account, r.debitMinor ? minorToDecimalString(r.debitMinor, exp) : "", r.creditMinor ? minorToDecimalString(r.creditMinor, exp) : "", r.currency]),
+      rows.map((r) => [{ day: r.date }, r.entryId, r.kind, r.memo, r.reference ?? "", r.accountCode, r.account, r.debitMinor ? { decimal: minorToDecimalString(r.debitMinor, exp) } : "", r.creditMinor ? { decimal: minorToDecimalString(r.creditMinor, exp) } : "", r.currency]),
+      { locale: ctx.club.locale },
     );
     return new Response(csv, { headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="journal-${ctx.club.slug}.csv"` } });
   });

@@ -31,7 +31,7 @@ export async function GET(req: Request, { params }: { params: Promise<{ club: st
     if (format !== "json" && format !== "csv" && format !== "pdf") return apiError("invalid", "Check the query.", { format: ["format is json, csv or pdf."] });
     if (format !== "json" && !can(ctx.ability, "export", "Ledger")) return apiError("forbidden", "Only a treasurer or club admin can export the reports.");
     const exp = currencyExponent(ctx.club.currency);
-    const amount = (minor: number) => minorToDecimalString(minor, exp);
+    const amount = (minor: number) => ({ decimal: minorToDecimalString(minor, exp) });
     const csv = (name: string, body: string) => new Response(body, { headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="${name}-${ctx.club.slug}.csv"` } });
     const pdf = async (name: string, render: Promise<Buffer>) =>
       new Response(new Uint8Array(await render), { headers: { "Content-Type": "application/pdf", "Content-Disposition": `attachment; filename="${name}-${ctx.club.slug}.pdf"`, "Cache-Control": "private, no-store" } });
@@ -67,6 +67,7 @@ export async function GET(req: Request, { params }: { params: Promise<{ club: st
           ["Total", "", "Total expenses", amount(pnl.expenseMinor)],
           ["Total", "", "Net (income − expenses)", amount(pnl.netMinor)],
         ],
+        { locale: ctx.club.locale },
       ));
     }
     if (report === "balance-sheet") {
@@ -104,6 +105,7 @@ export async function GET(req: Request, { params }: { params: Promise<{ club: st
           ["Total", "", "Total equity", amount(sheet.equityMinor)],
           ["Check", "", sheet.balanced ? "Balanced" : "NOT balanced", amount(sheet.assetsMinor - sheet.liabilitiesMinor - sheet.equityMinor)],
         ],
+        { locale: ctx.club.locale },
       ));
     }
     return apiError("invalid", "Choose the report.", { report: ["report is profit-and-loss or balance-sheet."] });

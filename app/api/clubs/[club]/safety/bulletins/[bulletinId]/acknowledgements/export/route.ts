@@ -15,7 +15,8 @@ export async function GET(_req: Request, { params }: { params: Promise<{ club: s
     const stats = bulletinAckStats(ctx.db, ctx.club.id, bulletin);
     const csv = writeCsv(
       ["Bulletin", "Version", "Member", "E-mail", "Acknowledged", "Acknowledged at (UTC)", "Deadline"],
-      stats.rows.map((r) => [bulletin.title, bulletin.version, r.name ?? "", r.email, r.acknowledgedAt ? "yes" : "no", r.acknowledgedAt?.toISOString() ?? "", bulletin.acknowledgeBy ?? ""]),
+      stats.rows.map((r) => [bulletin.title, bulletin.version, r.name ?? "", r.email, r.acknowledgedAt ? "yes" : "no", r.acknowledgedAt?.toISOString() ?? "", bulletin.acknowledgeBy ? { day: bulletin.acknowledgeBy } : ""]),
+      { locale: ctx.club.locale },
     );
     const name = `acknowledgements-${bulletin.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "bulletin"}-v${bulletin.version}.csv`;
     return new Response(csv, {
