@@ -45,9 +45,15 @@ function weightOfFuel(profile: LoadingProfile, volume: number): number {
   return profile.unitSystem === "metric" ? w.kg : w.lb;
 }
 
-const fmt = (n: number) => (Math.round(n * 10) / 10).toLocaleString("en-US");
+/** The figures of a problem, to one decimal, written as the club's locale writes numbers. */
+function numberWriter(locale: string) {
+  const nf = new Intl.NumberFormat(locale, { maximumFractionDigits: 1 });
+  return (n: number) => nf.format(Math.round(n * 10) / 10);
+}
 
-export function computeLoading(profile: LoadingProfile, input: LoadingInput): LoadingResult {
+/** Weights, arms and fuel at takeoff and landing against the aircraft's limits; problems in words, figures in `locale`. */
+export function computeLoading(profile: LoadingProfile, input: LoadingInput, locale = "en-US"): LoadingResult {
+  const fmt = numberWriter(locale);
   const u = unitsOf(profile.unitSystem);
   const problems: string[] = [];
   const envelope = input.category === "utility" && profile.envelopeUtility ? profile.envelopeUtility : profile.envelopeNormal;

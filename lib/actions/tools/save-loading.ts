@@ -24,7 +24,7 @@ export const saveLoading = clubAction({
     input.tankKey.forEach((k, i) => (fuelVolumes[k] = input.tankVolume[i] ?? 0));
     const unknown = [...Object.keys(stationWeights).filter((k) => !profile.stations.some((s) => s.key === k)), ...Object.keys(fuelVolumes).filter((k) => !profile.tanks.some((t) => t.key === k))];
     if (unknown.length) throw new ActionError("The aircraft's figures changed while you were typing; reload the page and enter the loading again.", {}, "conflict");
-    const result = computeLoading(toLoadingProfile(profile), { category: input.category, stationWeights, fuelVolumes, burnVolume: input.burnVolume });
+    const result = computeLoading(toLoadingProfile(profile), { category: input.category, stationWeights, fuelVolumes, burnVolume: input.burnVolume }, ctx.club.locale);
     const point = (p: typeof result.takeoff) => ({ weight: p.weight, moment: p.moment, cg: p.cg, withinEnvelope: p.withinEnvelope, overweight: p.overweight });
     saveBookingLoading(tx, club.id, booking.id, {
       profileId: profile.id,

@@ -53,6 +53,13 @@ describe("computeLoading", () => {
     expect(r.landing.withinEnvelope).toBe(true);
   });
 
+  it("writes the figures of its problems as the club's locale writes numbers", () => {
+    const r = computeLoading(profile, { category: "normal", stationWeights: { front: 400, rear: 340, bags: 150 }, fuelVolumes: { wings: 45 }, burnVolume: 50 }, "de-DE");
+    // The same loading as above (our arithmetic); "." groups thousands and "," marks decimals in de (Unicode CLDR).
+    expect(r.problems).toContain("Takeoff weight 2.660 lb is over the maximum of 2.400 lb.");
+    expect(r.problems).toContain("At takeoff the CG (46,6 in at 2.660 lb) is outside the normal envelope.");
+  });
+
   it("metric profiles read litres and give kilograms (6 lb/US gal = 0.7190 kg/L, our arithmetic)", () => {
     const metric: LoadingProfile = { ...profile, unitSystem: "metric", emptyWeight: 680, emptyArm: 965, maxTakeoffWeight: 1089, maxLandingWeight: null, stations: [{ key: "front", name: "Front seats", arm: 940, maxWeight: null }], tanks: [{ key: "wings", name: "Wing tanks", arm: 1219, usableCapacity: 151 }], envelopeNormal: [[889, 680], [889, 885], [1003, 1089], [1201, 1089], [1201, 680]] };
     const r = computeLoading(metric, { category: "normal", stationWeights: { front: 154 }, fuelVolumes: { wings: 100 }, burnVolume: 0 });

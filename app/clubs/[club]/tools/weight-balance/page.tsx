@@ -32,7 +32,7 @@ export default async function WeightBalanceToolPage({ params, searchParams }: { 
     const stationWeights = Object.fromEntries(parsed.data.stationKey.map((k, i) => [k, parsed.data.stationWeight[i] ?? 0]));
     const fuelVolumes = Object.fromEntries(parsed.data.tankKey.map((k, i) => [k, parsed.data.tankVolume[i] ?? 0]));
     values = { stationWeights, fuelVolumes, burnVolume: parsed.data.burnVolume, category: parsed.data.category };
-    result = computeLoading(toLoadingProfile(profile), values as Parameters<typeof computeLoading>[1]);
+    result = computeLoading(toLoadingProfile(profile), values as Parameters<typeof computeLoading>[1], club.locale);
   }
   return (
     <div className="max-w-5xl">
