@@ -15,7 +15,7 @@ function clock(iso: string, timeZone: string): string {
 }
 
 /** The flight line, kept live from the JSON route; the server-rendered data shows first. */
-export function FlightLineBoard({ slug, initial }: { slug: string; initial: FlightLineData }) {
+export function FlightLineBoard({ slug, initial, blockLines = {} }: { slug: string; initial: FlightLineData; /** Maintenance blocks today, in words, by aircraft id. */ blockLines?: Record<string, string[]> }) {
   // The tag of the flight line on screen: while it is still current the server answers 304 with
   // no body, and the records shown are confirmed as of that answer.
   const held = useRef<{ etag: string; data: FlightLineData } | null>(null);
@@ -65,7 +65,7 @@ export function FlightLineBoard({ slug, initial }: { slug: string; initial: Flig
       {data.entries.length === 0 ? <p className="card">No aircraft on the club&apos;s fleet yet.</p> : null}
       <div className="grid gap-4 lg:grid-cols-2">
         {data.entries.map((entry) => (
-          <AircraftCard key={entry.aircraft.id} entry={entry} slug={slug} />
+          <AircraftCard key={entry.aircraft.id} entry={entry} slug={slug} blockLines={blockLines[entry.aircraft.id]} />
         ))}
       </div>
     </div>
