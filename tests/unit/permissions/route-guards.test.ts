@@ -244,6 +244,65 @@ describe("every page and handler calls its own guard", () => {
   });
 });
 
+// Server actions: every export of a "use server" module is built by clubAction (session → club →
+// membership → permission) or userAction with a permission, unless it is listed here.
+const ACTIONS_OF_THEIR_OWN: Record<string, { reason: string; ownCheck: RegExp }> = {
+  "lib/actions/auth/sign-in.ts": { reason: "signing in: for whoever is not signed in yet; Auth.js checks the password or sends the link", ownCheck: /signIn\(/ },
+  "lib/actions/auth/sign-out.ts": { reason: "signing out: ends the caller's own session and takes no input", ownCheck: /signOut\(/ },
+  "lib/actions/invitations/accept-invitation.ts": { reason: "invitation acceptance: the token is the key, read inside the write", ownCheck: /findInvitationByToken\(/ },
+  "lib/actions/safety/ground-from-report.ts": { reason: "resolves the club and asks the officer's rights itself, then calls the clubAction issueGroundingNotice", ownCheck: /resolveClubContext\([\s\S]*canTriageReports\(ctx\.ability\)[\s\S]*can\(ctx\.ability, "create", "GroundingNotice"\)[\s\S]*issueGroundingNotice\(/ },
+};
+
+/** Exports of a "use server" module that are not built by clubAction, or by userAction with a permission. */
+function unguardedActions(file: string, text: string): string[] {
+  const source = ts.createSourceFile(file, text, ts.ScriptTarget.Latest, true, ts.ScriptKind.TS);
+  const out: string[] = [];
+  for (const st of source.statements) {
+    if (!hasModifier(st, ts.SyntaxKind.ExportKeyword) || hasModifier(st, ts.SyntaxKind.DeclareKeyword)) continue;
+    if (ts.isFunctionDeclaration(st)) out.push(`${st.name?.text ?? "default"}: a plain function, not clubAction/userAction`);
+    if (!ts.isVariableStatement(st)) continue;
+    for (const d of st.declarationList.declarations) {
+      const name = d.name.getText();
+      const init = d.initializer && unwrap(d.initializer);
+      const call = init && ts.isCallExpression(init) ? init : undefined;
+      const built = call ? calleeName(call) : undefined;
+      if (built !== "clubAction" && built !== "userAction") { out.push(`${name}: not built by clubAction/userAction`); continue; }
+      const def = call!.arguments[0];
+      const props = def && ts.isObjectLiteralExpression(def) ? def.properties.map((p) => p.name?.getText()) : [];
+      if (!props.includes("permission")) out.push(`${name}: ${built} without a permission`);
+    }
+  }
+  return out;
+}
+
+describe("every server action is built by its guard", () => {
+  const files = walk(path.join(ROOT, "lib"), /\.tsx?$/).concat(walk(path.join(ROOT, "app"), /\.tsx?$/), walk(path.join(ROOT, "components"), /\.tsx?$/))
+    .filter((f) => /^\s*["']use server["']/.test(fs.readFileSync(f, "utf8")))
+    .map(rel)
+    .sort();
+
+  it("each export of a \"use server\" module is clubAction(…) or userAction(…) with a permission, or is listed with its own check", () => {
+    expect(files.length).toBeGreaterThan(40);
+    const problems = files.filter((f) => !(f in ACTIONS_OF_THEIR_OWN)).flatMap((f) => unguardedActions(f, read(f)).map((p) => `${f} ${p}`));
+    expect(problems).toEqual([]);
+  });
+
+  it("each listed action exists, gives its reason and keeps its own check", () => {
+    for (const [file, entry] of Object.entries(ACTIONS_OF_THEIR_OWN)) {
+      expect(files, `${file} is listed but is not a "use server" module`).toContain(file);
+      expect(entry.reason.length, file).toBeGreaterThan(20);
+      expect(read(file), `${file} lost its own check`).toMatch(entry.ownCheck);
+    }
+  });
+
+  it("refuses a plain exported function and a userAction with no permission", () => {
+    expect(unguardedActions("x.ts", `"use server";\nexport async function doIt(_p: unknown, f: FormData) { return write(f); }`)).toEqual([expect.stringMatching(/plain function/)]);
+    expect(unguardedActions("x.ts", `"use server";\nexport const doIt = userAction({ schema, requireUser: true, run() {}, success: "Done." });`)).toEqual([expect.stringMatching(/without a permission/)]);
+    expect(unguardedActions("x.ts", `"use server";\nexport const doIt = clubAction({ schema, permission: ["create", "Squawk"], run() {}, success: "Done." });`)).toEqual([]);
+    expect(unguardedActions("x.ts", `"use server";\nexport const doIt = async () => write();`)).toEqual([expect.stringMatching(/not built by/)]);
+  });
+});
+
 describe("the scan itself refuses what it should", () => {
   const page = (body: string) => `import { authorizePage } from "@/lib/server/authorize";\nexport default async function P({ params, searchParams }: any) {\n${body}\n}\n`;
   const route = (body: string) => `import { withClub } from "@/lib/server/api";\nexport async function GET(req: Request, { params }: any) {\n${body}\n}\n`;
