@@ -226,6 +226,18 @@ describe("every page and handler calls its own guard", () => {
     expect(wrong).toEqual([]);
   });
 
+  it("a page or handler under a record's segment reads it within the club and answers one it may not show like a missing one", () => {
+    // [club] is the club itself; every other dynamic segment names a record (or a month of one).
+    const recordSegment = /\[(?!club\])[^\]]+\]/;
+    const wrong: string[] = [];
+    for (const f of [...pages, ...routes].filter((p) => !(p in PUBLIC_BY_DESIGN) && recordSegment.test(p.replace("[club]", "")))) {
+      const text = read(f);
+      if (!/\bclub\.id\b/.test(text)) wrong.push(`${f}: reads its record without the club's id`);
+      if (f.endsWith("page.tsx") ? !/\bnotFound\(\)/.test(text) : !/apiError\("not_found"/.test(text)) wrong.push(`${f}: never answers not-found for a record it may not show`);
+    }
+    expect(wrong).toEqual([]);
+  });
+
   it("the public list is short, each entry has a one-line reason, names a file that exists and keeps its own check", () => {
     const entries = Object.entries(PUBLIC_BY_DESIGN);
     expect(entries.length).toBeLessThanOrEqual(10);
