@@ -165,6 +165,8 @@ function guardProblems(file: string, text: string): string[] {
   for (const st of source.statements) {
     if (kind === "page") {
       if (ts.isFunctionDeclaration(st) && hasModifier(st, ts.SyntaxKind.ExportKeyword) && hasModifier(st, ts.SyntaxKind.DefaultKeyword)) exported.push({ name: "default", fn: st });
+      // A page's title is in its HTML too: metadata read from a record needs the same guard first.
+      if (ts.isFunctionDeclaration(st) && hasModifier(st, ts.SyntaxKind.ExportKeyword) && st.name?.text === "generateMetadata") exported.push({ name: "generateMetadata", fn: st });
       if (ts.isExportAssignment(st) && !st.isExportEquals) {
         const e = unwrap(st.expression);
         exported.push({ name: "default", fn: isFunction(e) ? e : ts.isIdentifier(e) ? localFunction(source, e.text) : undefined });
@@ -336,6 +338,12 @@ describe("the scan itself refuses what it should", () => {
     expect(guardProblems("x/page.tsx", page(`const { club: slug } = await params;\nif (slug) { await authorizePage(slug, ["read", "Ledger"]); }\nreturn null;`))).toEqual([expect.stringMatching(/never calls/)]);
     expect(guardProblems("x/page.tsx", page(`const { club: slug } = await params;\nconst rows = listJournal(getDb(), slug);\nawait authorizePage(slug, ["read", "Ledger"]);\nreturn rows;`))).toEqual([expect.stringMatching(/before its guard/)]);
     expect(guardProblems("x/page.tsx", page(`const { club: slug } = await params;\nawait check(slug);\nreturn null;`))).toEqual([expect.stringMatching(/never calls/)]);
+  });
+
+  it("checks a page's generateMetadata as well as the page", () => {
+    const meta = (body: string) => `${page(`const { club: slug } = await params;\nawait authorizePage(slug, ["read", "Ledger"]);\nreturn null;`)}export async function generateMetadata({ params }: any) {\n${body}\n}\n`;
+    expect(guardProblems("x/page.tsx", meta(`const { id } = await params;\nreturn { title: getReport(getDb(), id).title };`))).toEqual([expect.stringMatching(/^generateMetadata: never calls/)]);
+    expect(guardProblems("x/page.tsx", meta(`const { club: slug, id } = await params;\nconst { db } = await authorizePage(slug, ["read", "Ledger"]);\nreturn { title: id };`))).toEqual([]);
   });
 
   it("asks for a reason beside authorizePage(slug) with no permission", () => {
