@@ -3,15 +3,15 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/client";
 import { listClubsForUser } from "@/db/queries/clubs";
-import { getSessionUser } from "@/lib/server/session";
+import { authorizeSignedInPage } from "@/lib/server/authorize";
 import { ROLE_LABELS } from "@/permissions";
 import { SignOutButton } from "@/components/shell/sign-out-button";
 
 export const metadata: Metadata = { title: "Your clubs" };
 
 export default async function ClubsIndex() {
-  const user = await getSessionUser();
-  if (!user) redirect("/sign-in?callbackUrl=/clubs");
+  // The signed-in person's own clubs only (listClubsForUser reads their active memberships).
+  const user = await authorizeSignedInPage("/clubs");
   const clubs = listClubsForUser(getDb(), user.id);
   // An operator who is in no club of their own lands on the console they work from.
   if (user.platformRole === "operator" && clubs.length === 0) redirect("/operator");

@@ -62,6 +62,17 @@ export function deniedReason(permission: Permission): string {
 }
 
 /**
+ * Pages about the signed-in person alone, outside any club (their list of clubs): the session
+ * is the guard, checked in the page itself. Nobody signed in goes to sign-in and comes back to
+ * `callbackUrl` (a path of this site).
+ */
+export async function authorizeSignedInPage(callbackUrl: string): Promise<SessionUser> {
+  const user = await getSessionUser();
+  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(callbackUrl)}`);
+  return user;
+}
+
+/**
  * Operator console pages: the signed-in operator, checked in the page itself (the operator
  * layout's check is a courtesy). Anyone else gets the 404 page; nobody signed in, sign-in.
  */

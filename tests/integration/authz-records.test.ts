@@ -7,11 +7,13 @@ import { GET as currencyOf } from "@/app/api/clubs/[club]/currency/[userId]/rout
 import { GET as documentsOf } from "@/app/api/clubs/[club]/documents/route";
 import { GET as medicalOf } from "@/app/api/clubs/[club]/documents/medical/[userId]/route";
 import { GET as reportApi } from "@/app/api/clubs/[club]/safety/reports/[reportId]/route";
+import ClubsIndex from "@/app/clubs/page";
 import MePage from "@/app/clubs/[club]/me/page";
 import NewClubPage from "@/app/operator/clubs/new/page";
 import OperatorHome from "@/app/operator/page";
 import ReportPage from "@/app/clubs/[club]/safety/reports/[reportId]/page";
 import { safetyReports, users } from "@/db/schema";
+import { DEMO_CLUBS, DEMO_PEOPLE } from "@/db/seed/scenario";
 import { params, treeText } from "./authz-helpers";
 import { seedScenario } from "./bookings-helpers";
 import { clubBySlug, db, expectRedirect, signInAs } from "./helpers";
@@ -94,5 +96,24 @@ describe("operator console pages check the operator themselves", () => {
     expect(await expectRedirect(() => OperatorHome())).toBe("/sign-in?callbackUrl=/operator");
     signInAs("operator@hangarline.test");
     await expect(OperatorHome()).resolves.toBeTruthy();
+  });
+});
+
+describe("the list of clubs is the signed-in person's own (the session guard in the page)", () => {
+  it("nobody signed in is sent to sign in; a person sees their own clubs and no other", async () => {
+    signInAs(null);
+    expect(await expectRedirect(() => ClubsIndex())).toBe(`/sign-in?callbackUrl=${encodeURIComponent("/clubs")}`);
+    // A person in one club goes straight to it.
+    signInAs(MEMBER);
+    expect(await expectRedirect(() => ClubsIndex())).toBe(`/clubs/${CLUB}`);
+    // A person in two clubs chooses between those two; the third club is not named.
+    const person = DEMO_PEOPLE.find((p) => Object.keys(p.clubs).length === 2)!;
+    signInAs(person.email);
+    const text = treeText(await ClubsIndex());
+    for (const club of DEMO_CLUBS) {
+      if (club.key in person.clubs) expect(text, club.key).toContain(club.name);
+      else expect(text, club.key).not.toContain(club.name);
+    }
+    expect(DEMO_CLUBS.some((c) => !(c.key in person.clubs))).toBe(true);
   });
 });
