@@ -3,6 +3,7 @@ import { DataTable } from "@/components/money/data-table";
 import { MoneyNav } from "@/components/money/money-nav";
 import { PageHeader } from "@/components/ui/page-header";
 import { listPayments } from "@/db/queries/money-payments";
+import { isoDateInTimeZone } from "@/lib/dates";
 import { authorizePageAny } from "@/lib/server/authorize";
 
 export const metadata: Metadata = { title: "Payments" };
@@ -14,7 +15,7 @@ export default async function PaymentsPage({ params }: { params: Promise<{ club:
   const { club: slug } = await params;
   // Every member's payments: the treasurer (read Payment) or whoever reads every account.
   const { db, club, ability } = await authorizePageAny(slug, ["read", "Payment"], ["read", "Account", "all"]);
-  const rows = listPayments(db, club.id).map((p) => ({ ...p, href: `/clubs/${club.slug}/money/members/${p.memberUserId}`, statusWord: STATUS[p.status] ?? p.status, methodWord: METHOD[p.method] ?? p.method, date: p.receivedOn ?? p.createdAt.slice(0, 10), net: p.amountMinor - p.feeMinor }));
+  const rows = listPayments(db, club.id).map((p) => ({ ...p, href: `/clubs/${club.slug}/money/members/${p.memberUserId}`, statusWord: STATUS[p.status] ?? p.status, methodWord: METHOD[p.method] ?? p.method, date: p.receivedOn ?? isoDateInTimeZone(new Date(p.createdAt), club.timeZone), net: p.amountMinor - p.feeMinor }));
   return (
     <>
       <PageHeader title="Payments" lead="Card payments arrive through the payment provider's signed notices; cheques, cash and transfers are recorded by the treasurer. Refund a card payment from the member's page." />
