@@ -80,6 +80,19 @@ export const homePositionSchema = z
     }
   });
 
+const clock = (what: string) =>
+  z
+    .string({ error: `Enter the time the flying day ${what}, as HH:MM (24-hour club time).` })
+    .trim()
+    .regex(/^([01]\d|2[0-3]):[0-5]\d$/, `Enter the time the flying day ${what} as HH:MM on the 24-hour clock, e.g. 07:30.`);
+
+/** The club's flying day in club time: the booking page's day. Closing at or before opening runs past midnight. */
+export const flyingDaySchema = z
+  .object({ flyingDayOpens: clock("opens"), flyingDayCloses: clock("closes") })
+  .superRefine((v, ctx) => {
+    if (v.flyingDayOpens === v.flyingDayCloses) ctx.addIssue({ code: "custom", path: ["flyingDayCloses"], message: "The flying day cannot open and close at the same time." });
+  });
+
 /** The club's locale: one of the tags the settings page offers (lib/money/locale.ts). */
 export const clubLocaleSchema = z.object({
   locale: z

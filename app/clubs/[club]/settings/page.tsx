@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { ClubLocaleForm } from "@/components/clubs/club-locale-form";
+import { FlyingDayForm } from "@/components/clubs/flying-day-form";
 import { HomePositionForm } from "@/components/clubs/home-position-form";
 import { formatDate } from "@/lib/dates";
 import { formatMoney } from "@/lib/money/format";
@@ -24,6 +25,14 @@ export default async function ClubSettingsPage({ params }: { params: Promise<{ c
           passengers need night currency. {lat === null || lon === null ? <strong>Missing record: without it night is unknown, so every booking with passengers is checked as if it touched night.</strong> : `Recorded: ${lat}, ${lon}.`}
         </p>
         <HomePositionForm slug={club.slug} latitude={lat} longitude={lon} />
+      </section>
+      <section className="card mt-4" aria-labelledby="flying-day-h">
+        <h2 id="flying-day-h" className="mb-2 text-lg font-bold">Flying day</h2>
+        <p className="mb-3 text-sm text-ink-700">
+          The hours the club flies, on the club&apos;s clock ({club.timeZone}): the booking page shows each aircraft&apos;s day inside them, with night marked, and
+          lists the free time in words. Now from {club.settings.flyingDayOpens} to {club.settings.flyingDayCloses}.
+        </p>
+        <FlyingDayForm slug={club.slug} opens={club.settings.flyingDayOpens} closes={club.settings.flyingDayCloses} />
       </section>
       <section className="card mt-4" aria-labelledby="locale-h">
         <h2 id="locale-h" className="mb-2 text-lg font-bold">Locale</h2>
