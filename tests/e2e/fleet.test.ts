@@ -99,3 +99,50 @@ describe("flight line and squawks in the browser", () => {
     await screenshot(page, "fleet-maintenance-desktop");
   });
 });
+
+describe("maintenance blocks on the flight line", () => {
+  it("shows a block of the club's day beside the aircraft, on the club's clock, on a desktop and a phone", async () => {
+    const page = await newPage("desktop");
+    await signIn(page, "cottonwood.maint@hangarline.test");
+    // The club's clock (America/Denver): from the quarter hour just begun, for two hours, so the
+    // block is in force now whatever the time of the run.
+    const parts = Object.fromEntries(
+      new Intl.DateTimeFormat("en-US", { timeZone: "America/Denver", hourCycle: "h23", year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit" })
+        .formatToParts(new Date())
+        .map((p) => [p.type, p.value]),
+    );
+    const local = (h: number, m: number, dayShift = 0) => {
+      const d = new Date(Date.UTC(Number(parts.year), Number(parts.month) - 1, Number(parts.day) + dayShift, h, m));
+      return d.toISOString().slice(0, 16);
+    };
+    const hour = Number(parts.hour);
+    const minute = Math.floor(Number(parts.minute) / 15) * 15;
+    const from = local(hour, minute);
+    const until = local(hour + 2, minute);
+    const reason = `Magneto timing check ${Date.now()}`;
+    await page.goto(`${CLUB}/bookings/blocks`);
+    const form = page.getByRole("form", { name: "Block an aircraft for maintenance" });
+    const aircraftId = await form.getByLabel("Aircraft").locator("option", { hasText: `${REG} — ` }).getAttribute("value");
+    await form.getByLabel("Aircraft").selectOption(aircraftId!);
+    await form.getByLabel("From (club time)").fill(from);
+    await form.getByLabel("Until (club time)").fill(until);
+    await form.getByLabel("Reason, shown to members").fill(reason);
+    await form.getByRole("button", { name: "Block this time" }).click();
+    await form.getByRole("status").filter({ hasText: `${REG} blocked for maintenance` }).waitFor();
+
+    await page.goto(`${CLUB}/flight-line`);
+    const blocks = page.getByRole("region", { name: `Maintenance blocks for ${REG}` });
+    const line = blocks.getByText(reason, { exact: false });
+    await line.waitFor();
+    const text = (await line.textContent()) ?? "";
+    // On the club's clock, the start as entered: "HH:MM" of the form's value.
+    expect(text).toContain(from.slice(11, 16));
+    expect(text).toMatch(/^Maintenance block /);
+    expect(text).toContain("Bookings are refused while it lasts.");
+    await screenshot(page, "fleet-flight-line-block-desktop");
+    await page.setViewportSize({ width: 390, height: 844 });
+    await expectNoHorizontalOverflow(page);
+    await screenshot(page, "fleet-flight-line-block-phone");
+    await page.context().close();
+  });
+});
