@@ -13,6 +13,7 @@ import { listAuditEntries } from "@/db/queries/audit";
 import { produceScheduledBills, SCHEDULED_BILL_AUDIT } from "@/db/queries/money-recurring";
 import { previewYearClose } from "@/db/queries/money-year-end";
 import { auditLog, bills, journalEntries, recurringBills, yearCloses } from "@/db/schema";
+import { approveBillAction } from "@/lib/actions/money/approve-bill";
 import { closeYearAction } from "@/lib/actions/money/close-year";
 import { createRecurringBillAction } from "@/lib/actions/money/create-recurring-bill";
 import { enterBillAction } from "@/lib/actions/money/enter-bill";
@@ -24,6 +25,7 @@ import { seedScenario } from "./bookings-helpers";
 
 const SLUG = "reedwater";
 const TREASURER = "treasurer@hangarline.test";
+const ADMIN = "admin@hangarline.test";
 const key = () => crypto.randomUUID();
 const run = promisify(execFile);
 
@@ -43,9 +45,9 @@ describe("the treasurer's books on the schedule: recurring bills by the tick, ye
     delete process.env.CRON_SECRET;
   });
 
-  async function template(vendor: string, cadence: "monthly" | "quarterly" | "yearly", firstOn: string): Promise<string> {
+  async function template(vendor: string, cadence: "monthly" | "quarterly" | "yearly", firstOn: string, amount = "120.00"): Promise<string> {
     signInAs(TREASURER);
-    const saved = await createRecurringBillAction(EMPTY, form({ club: SLUG, vendor, reference: "", accountCode: "hangar-tie-down", amount: "120.00", cadence, firstOn, endsOn: "", dueDays: "10", idempotencyKey: key() }));
+    const saved = await createRecurringBillAction(EMPTY, form({ club: SLUG, vendor, reference: "", accountCode: "hangar-tie-down", amount, cadence, firstOn, endsOn: "", dueDays: "10", idempotencyKey: key() }));
     expect(saved, saved.message).toMatchObject({ ok: true });
     return (saved.data as { recurringBillId: string }).recurringBillId;
   }
@@ -124,6 +126,20 @@ describe("the treasurer's books on the schedule: recurring bills by the tick, ye
     expect(runner.runScheduledTick()).toMatchObject({ clubs: expect.any(Number), messages: expect.any(Number), reminders: expect.any(Number), bills: 1 });
     expect(runner.runScheduledTick()).toMatchObject({ bills: 0 });
     expect(billsOf(timed)).toHaveLength(1);
+  });
+
+  it("a bill the tick entered above the approval amount still needs a second officer: not the one who set the recurring bill up", async () => {
+    const templateId = await template("Summit Avionics Service Plan", "yearly", today, "650.00");
+    expect(produceScheduledBills(db())).toEqual({ clubs: 1, bills: 1 });
+    const [bill] = billsOf(templateId);
+    expect(bill).toMatchObject({ status: "awaiting_approval", enteredById: treasurer.id });
+    signInAs(TREASURER);
+    const own = await approveBillAction(EMPTY, form({ club: SLUG, billId: bill!.id, idempotencyKey: key() }));
+    expect(own).toMatchObject({ ok: false, message: "A second officer approves a bill: not the person who entered it." });
+    signInAs(ADMIN);
+    const second = await approveBillAction(EMPTY, form({ club: SLUG, billId: bill!.id, idempotencyKey: key() }));
+    expect(second, second.message).toMatchObject({ ok: true });
+    expect(billsOf(templateId)[0]!.status).toBe("approved");
   });
 
   it("two ticks in two processes at the same instant still make one bill per period", async () => {
