@@ -30,8 +30,11 @@ export function billCategories(db: Db | Tx, clubId: string): { code: string; nam
 
 export type BillInput = { vendor: string; billDate: string; dueOn: string; accountCode: string; amountMinor: number; reference: string | null };
 
-/** A bill produced from a recurring bill: its template and period (one bill per pair, ever). */
-export type BillRecurrence = { recurringBillId: string; periodKey: string };
+/**
+ * A bill produced from a recurring bill: its template and period (one bill per pair, ever).
+ * `bySchedule`: entered by the scheduled run, not by a person — its journal entry names no one.
+ */
+export type BillRecurrence = { recurringBillId: string; periodKey: string; bySchedule?: boolean };
 
 export type BillRefusal = { refused: string; field?: string };
 
@@ -48,7 +51,7 @@ export function enterBill(tx: Tx, club: { id: string; currency: string }, userId
     sourceType: "bill",
     sourceKey: recurrence ? `bill-recurring:${recurrence.recurringBillId}:${recurrence.periodKey}` : undefined,
     reference: input.reference,
-    createdById: userId,
+    createdById: recurrence?.bySchedule ? null : userId,
   });
   const status = billNeedsApproval(input.amountMinor, { approvalOverMinor: billApprovalOverMinor(tx, club.id) }) ? "awaiting_approval" : "approved";
   return tx.insert(bills).values({ clubId: club.id, ...input, currency: club.currency, status, enteredById: userId, entryId, recurringBillId: recurrence?.recurringBillId ?? null, periodKey: recurrence?.periodKey ?? null }).returning().all()[0]!;

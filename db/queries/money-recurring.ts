@@ -1,14 +1,18 @@
 import "server-only";
-import { and, asc, eq, lte, sql } from "drizzle-orm";
+import { and, asc, eq, isNull, lte, sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
-import { bills, ledgerAccounts, recurringBills, users, type RecurringBillRow } from "@/db/schema";
+import { bills, clubs, ledgerAccounts, recurringBills, users, type RecurringBillRow } from "@/db/schema";
 import { dueOccurrences, type Cadence } from "@/lib/money/recurring";
+import { clubToday } from "@/lib/money/settings";
+import { writeAudit } from "@/lib/server/audit";
+import { logError } from "@/lib/server/log";
 import { billCategories, enterBill } from "./money-bills";
 
 // Recurring bills (insurance, hangar rent): the templates the treasurer keeps, and producing the
 // bills that are due. Each bill goes through the one bill write path (enterBill), once per
 // template and period: the period key is unique per template (bills_recurring_period) and the
-// production skips a period already billed, so running it twice never doubles a bill.
+// production skips a period already billed, so running it twice never doubles a bill. The
+// treasurer's button and the scheduled tick both go through produceDueBills.
 
 export type RecurringBillInput = { vendor: string; accountCode: string; amountMinor: number; reference: string | null; cadence: Cadence; firstOn: string; endsOn: string | null; dueDays: number };
 
@@ -72,11 +76,18 @@ export function listRecurringBills(db: Db, clubId: string): RecurringListRow[] {
 export type ProducedBill = { billId: string; vendor: string; billDate: string; periodKey: string; amountMinor: number; status: string };
 
 /**
- * Enters every bill that is due by `today` from the club's active recurring bills (at most a
- * year's worth per template per run), moves each template's next date on, and ends a template
- * past its end date. A period already billed is skipped, never billed again.
+ * The one write path for bills from recurring bills, used by the treasurer's "Enter the bills
+ * due" and by the scheduled tick alike. Enters every bill that is due by `today` from the club's
+ * active recurring bills (at most a year's worth per template per run), writes each bill's audit
+ * entry, moves each template's next date on, and ends a template past its end date. A period
+ * already billed is skipped, never billed again (checked here, and the unique index
+ * bills_recurring_period stops a race; callers run this in a write-locked transaction).
+ *
+ * `userId` null: the scheduled run entered the bills, no person. The audit names no actor; the
+ * bill's "entered by" (a person is required) is the officer who set the recurring bill up, so
+ * the second-officer rule still keeps them from approving it alone.
  */
-export function produceDueBills(tx: Tx, club: { id: string; currency: string }, userId: string, today: string): { produced: ProducedBill[]; skipped: number } {
+export function produceDueBills(tx: Tx, club: { id: string; currency: string }, userId: string | null, today: string): { produced: ProducedBill[]; skipped: number } {
   const templates = tx.select().from(recurringBills).where(and(eq(recurringBills.clubId, club.id), eq(recurringBills.status, "active"), lte(recurringBills.nextOn, today))).all();
   const produced: ProducedBill[] = [];
   let skipped = 0;
@@ -89,13 +100,20 @@ export function produceDueBills(tx: Tx, club: { id: string; currency: string }, 
         skipped++;
         continue;
       }
-      const bill = enterBill(tx, club, userId, { vendor: t.vendor, billDate: d.billDate, dueOn: d.dueOn, accountCode: t.accountCode, amountMinor: t.amountMinor, reference: t.reference }, { recurringBillId: t.id, periodKey: d.periodKey });
+      const bill = enterBill(tx, club, userId ?? t.createdById, { vendor: t.vendor, billDate: d.billDate, dueOn: d.dueOn, accountCode: t.accountCode, amountMinor: t.amountMinor, reference: t.reference }, { recurringBillId: t.id, periodKey: d.periodKey, bySchedule: userId === null });
       if ("refused" in bill) {
         // The category left the chart: the template waits (paused) at this period rather than book elsewhere.
         stoppedAt = d.billDate;
         break;
       }
-      produced.push({ billId: bill.id, vendor: bill.vendor, billDate: bill.billDate, periodKey: d.periodKey, amountMinor: bill.amountMinor, status: bill.status });
+      const made = { billId: bill.id, vendor: bill.vendor, billDate: bill.billDate, periodKey: d.periodKey, amountMinor: bill.amountMinor, status: bill.status };
+      produced.push(made);
+      writeAudit(
+        tx,
+        userId
+          ? { clubId: club.id, actorId: userId, action: "money.bill.enter", subjectType: "Bill", subjectId: bill.id, after: { ...made, recurring: true } }
+          : { clubId: club.id, actorId: null, action: SCHEDULED_BILL_AUDIT, subjectType: "Bill", subjectId: bill.id, after: { ...made, recurring: true, setUpBy: t.createdById } },
+      );
     }
     tx.update(recurringBills)
       .set(stoppedAt ? { nextOn: stoppedAt, status: "paused", updatedAt: new Date() } : { nextOn, status: ended ? "ended" : "active", updatedAt: new Date() })
@@ -103,6 +121,41 @@ export function produceDueBills(tx: Tx, club: { id: string; currency: string }, 
       .run();
   }
   return { produced, skipped };
+}
+
+/** The audit action of a bill the scheduled run entered (no person did). */
+export const SCHEDULED_BILL_AUDIT = "money.bill.enter.scheduled";
+
+export type ScheduledBillsResult = { clubs: number; bills: number };
+
+/**
+ * The scheduled tick's part: every club's recurring bills due by the club's own day, entered
+ * through produceDueBills with no person as the actor, one write-locked transaction per club.
+ * Safe to run as often as wanted, twice at once, or beside the treasurer's button: a period is
+ * billed once. A club whose bills cannot be entered (a ledger refusal) is logged and skipped.
+ */
+export function produceScheduledBills(db: Db, now: Date = new Date()): ScheduledBillsResult {
+  const result: ScheduledBillsResult = { clubs: 0, bills: 0 };
+  const withTemplates = db
+    .selectDistinct({ id: clubs.id, currency: clubs.currency, timeZone: clubs.timeZone })
+    .from(recurringBills)
+    .innerJoin(clubs, eq(clubs.id, recurringBills.clubId))
+    .where(and(eq(recurringBills.status, "active"), isNull(clubs.archivedAt)))
+    .all();
+  for (const club of withTemplates) {
+    const today = clubToday(club, now);
+    if (countDueRecurring(db, club.id, today) === 0) continue;
+    try {
+      const made = db.transaction((tx) => produceDueBills(tx, club, null, today).produced.length, { behavior: "immediate" });
+      if (made > 0) {
+        result.clubs++;
+        result.bills += made;
+      }
+    } catch (error) {
+      logError("money", "scheduled recurring bills failed", error, { clubId: club.id });
+    }
+  }
+  return result;
 }
 
 /** How many active recurring bills have a bill due by `today` (for the bills page's prompt). */

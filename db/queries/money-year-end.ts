@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, lt, sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
-import { ledgerAccounts, users, yearCloses, type YearCloseRow } from "@/db/schema";
+import { journalEntries, ledgerAccounts, users, yearCloses, type YearCloseRow } from "@/db/schema";
 import { accountId } from "@/db/queries/money-accounts";
 import { postEntry } from "@/db/queries/money-post-entry";
 import { balanceSheet } from "@/lib/money/reports";
@@ -25,6 +25,16 @@ export function listYearCloses(db: Db | Tx, clubId: string): YearCloseListRow[] 
     .map((r) => ({ ...r.c, closedBy: r.closedBy }));
 }
 
+/** The years before `year` that have any journal entry (the years that must be closed first). */
+export function yearsWithPostingsBefore(db: Db | Tx, clubId: string, year: number): number[] {
+  return db
+    .selectDistinct({ y: sql<string>`substr(${journalEntries.entryDate}, 1, 4)` })
+    .from(journalEntries)
+    .where(and(eq(journalEntries.clubId, clubId), lt(journalEntries.entryDate, `${year}-01-01`)))
+    .all()
+    .map((r) => Number(r.y));
+}
+
 export type YearClosePreview = { year: number; date: string; netIncomeMinor: number; lines: { accountCode: string; accountName: string; debitMinor: number; creditMinor: number }[]; problem: string | null };
 
 /** What closing `year` would post, and why it may not be closed (null when it may). */
@@ -36,7 +46,7 @@ export function previewYearClose(db: Db | Tx, clubId: string, year: number, toda
     date: closing.date,
     netIncomeMinor: closing.netIncomeMinor,
     lines: closing.lines.map((l) => ({ accountCode: l.accountCode, accountName: names.get(l.accountCode) ?? l.accountCode, debitMinor: l.debitMinor ?? 0, creditMinor: l.creditMinor ?? 0 })),
-    problem: yearCloseProblem(year, today, listYearCloses(db, clubId).map((c) => c.year)),
+    problem: yearCloseProblem(year, today, listYearCloses(db, clubId).map((c) => c.year), yearsWithPostingsBefore(db, clubId, year)),
   };
 }
 

@@ -64,6 +64,7 @@ const VERBS: Record<string, string> = {
   "money.reminders.send": "sent payment reminders",
   "money.statement.email": "e-mailed a statement",
   "money.bill.enter": "entered a bill",
+  "money.bill.enter.scheduled": "entered a recurring bill that fell due",
   "money.bill.approve": "approved a bill",
   "money.bill.pay": "paid a bill",
   "money.bill.approval-amount": "changed the amount above which bills need a second officer",
@@ -95,6 +96,11 @@ const VERBS: Record<string, string> = {
   "weight-balance.profile.update": "changed an aircraft's weight and balance",
   "preflight.template.update": "changed an aircraft's preflight checklist",
   "preflight.record": "recorded a preflight",
+};
+
+// Who did it when no person did (no actor): the work the schedule does by itself says so.
+const NO_PERSON: Record<string, string> = {
+  "money.bill.enter.scheduled": "The scheduled run (no person)",
 };
 
 const whenFormats = new Map<string, Intl.DateTimeFormat>();
@@ -170,7 +176,7 @@ function asRecord(value: unknown): Record<string, unknown> | null {
 
 /** One entry as a sentence in words and, after it, each changed value ("roles: member → member, instructor"). */
 export function describeAuditEntry(entry: AuditEntryInput, words: AuditWords): DescribedAuditEntry {
-  const who = entry.actorName ?? "The system";
+  const who = entry.actorName ?? NO_PERSON[entry.action] ?? "The system";
   const verb = VERBS[entry.action] ?? `made a change: ${entry.action.split(/[._-]+/).join(", ")}`;
   const subject = words.names?.get(entry.subjectId);
   const sentence = `${who} ${verb}${subject ? ` (${subject})` : ""}.`;

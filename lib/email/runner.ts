@@ -1,5 +1,6 @@
 import { AsyncResource } from "node:async_hooks";
 import { getDb } from "@/db/client";
+import { produceScheduledBills } from "@/db/queries/money-recurring";
 import { createEmailProvider, type EmailProvider } from "./provider";
 import { composeBookingReminders } from "./booking-reminders";
 import { composeSafetyDigests, type DigestTickResult } from "./safety-digest";
@@ -40,11 +41,16 @@ function drainNow(): void {
     });
 }
 
+/** What one scheduled tick did: the safety digests' counts, the reminders queued and the recurring bills entered. */
+export type ScheduledTickResult = DigestTickResult & { reminders: number; bills: number };
+
 /**
- * The scheduled tick: queues any safety digest whose batch time has passed, then drains. Safe to
- * call as often as wanted (the in-process timer, a cron route or a script): a batch is composed once.
+ * The scheduled tick: queues any safety digest whose batch time has passed and the booking
+ * reminders, enters every club's recurring bills that have fallen due, then drains. Safe to
+ * call as often as wanted (the in-process timer, a cron route or a script): a batch is composed
+ * once and a recurring bill's period is billed once.
  */
-export function runScheduledTick(now = new Date()): DigestTickResult {
+export function runScheduledTick(now = new Date()): ScheduledTickResult {
   let result: DigestTickResult = { clubs: 0, messages: 0 };
   try {
     result = composeSafetyDigests(getDb(), now);
@@ -57,8 +63,14 @@ export function runScheduledTick(now = new Date()): DigestTickResult {
   } catch (error) {
     logError("outbox", "booking reminders failed", error);
   }
+  let bills = 0;
+  try {
+    bills = produceScheduledBills(getDb(), now).bills;
+  } catch (error) {
+    logError("money", "scheduled recurring bills failed", error);
+  }
   if (result.messages > 0 || reminders > 0) kickOutbox();
-  return result;
+  return { ...result, reminders, bills };
 }
 
 export function startOutboxWorker(intervalMs = Number(process.env.OUTBOX_INTERVAL_MS ?? 2000), digestIntervalMs = Number(process.env.SCHEDULED_TICK_INTERVAL_MS ?? 60_000)): void {

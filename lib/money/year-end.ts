@@ -23,7 +23,7 @@ export const RETAINED_FUNDS_CODE = "retained-funds";
 
 /**
  * The closing entry for `year` from the club's postings: the income and expense balances at the
- * year's last day (an earlier year left open is closed with it), each posted on its other side,
+ * year's last day (yearCloseProblem refuses a year while an earlier one is open), each posted on its other side,
  * the net to `retainedCode`. Postings after the year are ignored.
  */
 export function yearEndClosing(postings: readonly Posting[], year: number, retainedCode = RETAINED_FUNDS_CODE): YearEndClosing {
@@ -52,13 +52,21 @@ export function yearEndClosing(postings: readonly Posting[], year: number, retai
 
 /**
  * Why `year` may not be closed, or null when it may: the year must be over in the club's
- * calendar, not closed already, and no later year closed (years close in order).
+ * calendar, not closed already, no later year closed, and no earlier year with postings still
+ * open (years close in order: closing a year over an open earlier one would sweep that year's
+ * income and expenses into this one's close). `postedYears`: the years that have postings.
  */
-export function yearCloseProblem(year: number, today: string, closedYears: readonly number[]): string | null {
+export function yearCloseProblem(year: number, today: string, closedYears: readonly number[], postedYears: readonly number[] = []): string | null {
   if (!Number.isInteger(year)) return "Choose a year.";
   if (closedYears.includes(year)) return `${year} is already closed; a closed year is never closed twice.`;
   const later = closedYears.filter((y) => y > year);
   if (later.length) return `${Math.max(...later)} is already closed; years close in order, so ${year} can no longer be closed.`;
   if (today <= `${year}-12-31`) return `${year} is not over yet: a year is closed after its last day (${year}-12-31).`;
+  const open = [...new Set(postedYears)].filter((y) => y < year && !closedYears.includes(y)).sort((a, b) => a - b);
+  if (open.length) {
+    const first = open[0]!;
+    const which = open.length === 1 ? `${first} has postings and is still open` : `${open.slice(0, -1).join(", ")} and ${open.at(-1)} have postings and are still open`;
+    return `Close ${first} first: ${which}, and years close in order (${open.length === 1 ? first : open.join(", ")}, then ${year}). Nothing was closed.`;
+  }
   return null;
 }

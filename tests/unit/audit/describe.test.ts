@@ -25,6 +25,15 @@ describe("an audit entry in words", () => {
     expect(d.details).toEqual(["amount: $123.45", "aircraft id: N0123X", "received at: Sat, 4 Jul 2026, 12:00 GMT-5"]);
   });
 
+  it("a recurring bill the scheduled run entered names no person, and who set the recurring bill up", () => {
+    const d = describeAuditEntry(
+      { action: "money.bill.enter.scheduled", subjectType: "Bill", subjectId: "b-1", before: null, after: { billId: "b-000000001", vendor: "Cove Hangar Trust", billDate: "2026-11-01", periodKey: "2026-11", amountMinor: 45000, status: "approved", recurring: true, setUpBy: "m-000000001" }, actorName: null, createdAt: new Date("2026-11-01T12:00:00Z") },
+      words,
+    );
+    expect(d.sentence).toBe("The scheduled run (no person) entered a recurring bill that fell due.");
+    expect(d.details).toEqual(["vendor: Cove Hangar Trust", "bill date: 2026-11-01", "period key: 2026-11", "amount: $450.00", "status: approved", "recurring: yes", "set up by: Rowan Pike"]);
+  });
+
   it("an action without its own words is still read from its name", () => {
     const d = describeAuditEntry({ action: "money.widget.frob", subjectType: "X", subjectId: "x", before: null, after: null, actorName: "A", createdAt: new Date(0) }, words);
     expect(d.sentence).toBe("A made a change: money, widget, frob.");

@@ -113,4 +113,13 @@ describe("yearCloseProblem — years close once, in order, after they end", () =
   it("refuses a year before one already closed", () => {
     expect(yearCloseProblem(2024, "2026-02-01", [2025])).toMatch(/years close in order/); // standard accounting practice
   });
+  it("refuses a year while an earlier year with postings is still open, naming the earliest", () => {
+    // Closing entries are made period by period, in order (standard accounting practice).
+    expect(yearCloseProblem(2025, "2026-02-01", [], [2024])).toBe("Close 2024 first: 2024 has postings and is still open, and years close in order (2024, then 2025). Nothing was closed.");
+    expect(yearCloseProblem(2026, "2027-02-01", [], [2024, 2025, 2024])).toMatch(/^Close 2024 first: 2024 and 2025 have postings and are still open/); // standard accounting practice
+    expect(yearCloseProblem(2026, "2027-02-01", [2024], [2024, 2025])).toMatch(/^Close 2025 first: /); // standard accounting practice
+    expect(yearCloseProblem(2025, "2026-02-01", [2024], [2024])).toBeNull(); // the earlier year is closed
+    expect(yearCloseProblem(2025, "2026-02-01", [], [2025, 2026])).toBeNull(); // postings in the year itself or later do not block it
+    expect(yearCloseProblem(2025, "2025-06-01", [], [2024])).toMatch(/not over yet/); // the year's own problem first
+  });
 });
