@@ -103,7 +103,7 @@ function AircraftCard({ plane, slug, timeZone, days, bookings, blocks, nights, n
                     <li key={`f-${e.start}`} className={`${ROW} justify-between`} data-free={e.night ? "night" : "day"}>
                       <span className={e.night ? "text-ink-700" : "text-go-800"}>{e.night ? "☾ " : "○ "}{words}</span>
                       {canBook && !bookable ? (
-                        <span className="inline-flex min-h-11 items-center gap-1.5 font-bold text-plum-800">
+                        <span className="inline-flex min-h-11 items-center gap-1.5 font-bold text-plum-800 [--status-cut:#ffffff]">
                           <StatusShape status={plane.status} size={16} />
                           {`${STATUS_WORDS[plane.status]} — no booking`}
                         </span>
@@ -125,7 +125,8 @@ function AircraftCard({ plane, slug, timeZone, days, bookings, blocks, nights, n
   );
 }
 
-/** The status word with its mark and the reasons in words; the caution where the status is unknown. */
+/** The status word with its mark and the reasons in words; the caution where the status is unknown.
+ *  Outside the badge the grounded mark's cross is drawn white (--status-cut) so that it shows. */
 function StatusNote({ note }: { note: ScheduleStatusNote }) {
   const word = STATUS_WORDS[note.status];
   const rest = note.text.startsWith(word) ? note.text.slice(word.length) : ` — ${note.text}`;
@@ -133,7 +134,7 @@ function StatusNote({ note }: { note: ScheduleStatusNote }) {
   return (
     <div className="mb-2 space-y-2">
       <p className={`flex items-start gap-2 rounded border-l-4 px-3 py-2 text-sm ${tone}`} data-status-note={note.status}>
-        <span className="mt-0.5"><StatusShape status={note.status} size={18} /></span>
+        <span className="mt-0.5 [--status-cut:#ffffff]"><StatusShape status={note.status} size={18} /></span>
         <span className="min-w-0 break-words"><strong>{word}</strong>{rest}</span>
       </p>
       {note.status === "unknown" ? <SafetyCaution compact /> : null}
