@@ -1,6 +1,9 @@
-import { StatusBadge } from "@/components/ui/status-badge";
+import { SafetyCaution } from "@/components/ui/safety-caution";
+import { StatusBadge, StatusShape } from "@/components/ui/status-badge";
 import type { AircraftStatus } from "@/lib/airworthiness";
 import { planDay, type Span } from "@/lib/bookings/schedule";
+import type { ScheduleStatusNote } from "@/lib/bookings/status-note";
+import { STATUS_WORDS } from "@/lib/fleet/status-words";
 import type { BookingStatus } from "@/db/schema";
 import { BOOKING_STATUS_MARK, BOOKING_STATUS_WORDS, clockTime, dayHeading, localInputValue } from "./booking-words";
 
@@ -9,11 +12,14 @@ import { BOOKING_STATUS_MARK, BOOKING_STATUS_WORDS, clockTime, dayHeading, local
 // maintenance has it (blocks) and the free time between, in words, each free window with a
 // "Book" link that opens the booking form filled in. Plain anchors, not next/link: a two-week
 // view has hundreds of links, and prefetching each would cost more than it saves.
+// A grounded aircraft offers no "Book" link: its status word and grounding reasons stand in their
+// place. An aircraft whose status is unknown keeps its links beside the missing record named and
+// the airworthiness caution (scheduleStatusNote, lib/bookings/status-note.ts).
 
 export type ScheduleBooking = Span & { id: string; aircraftId: string; status: BookingStatus; who: string; mine: boolean };
 export type ScheduleBlock = Span & { id: string; aircraftId: string; reason: string };
 export type ScheduleDay = { date: string; day: Span; window: Span; note: string };
-export type ScheduleAircraft = { id: string; registration: string; name: string; status: AircraftStatus };
+export type ScheduleAircraft = { id: string; registration: string; name: string; status: AircraftStatus; note?: ScheduleStatusNote | null };
 
 const TWO_HOURS = 2 * 3_600_000;
 const ROW = "flex min-h-11 flex-wrap items-center gap-x-2 gap-y-1 py-1.5";
@@ -36,6 +42,8 @@ function AircraftCard({ plane, slug, timeZone, days, bookings, blocks, nights, n
   plane: ScheduleAircraft; slug: string; timeZone: string; days: ScheduleDay[]; bookings: ScheduleBooking[]; blocks: ScheduleBlock[]; nights: Span[]; now: number; canBook: boolean;
 }) {
   const base = `/clubs/${slug}/bookings`;
+  const note = plane.note;
+  const bookable = canBook && (note?.bookable ?? true);
   const headingId = `aircraft-${plane.id}`;
   const time = (ms: number) => clockTime(ms, timeZone);
   const span = (s: Span, clipped: Span) => {
@@ -52,12 +60,13 @@ function AircraftCard({ plane, slug, timeZone, days, bookings, blocks, nights, n
           <span className="text-sm text-ink-500">{plane.name}</span>
           <StatusBadge status={plane.status} />
         </div>
-        {canBook ? (
+        {bookable ? (
           <a href={`${base}/new?aircraft=${plane.id}`} className="inline-flex min-h-11 items-center rounded px-3 font-bold text-fin-700 ring-1 ring-fin-600 hover:bg-sand-100">
             Book {plane.registration}
           </a>
         ) : null}
       </header>
+      {note ? <StatusNote note={note} /> : null}
       <ol className="divide-y divide-sand-200" aria-label={`${plane.registration}, day by day`}>
         {days.map((d) => {
           const plan = planDay({ day: d.day, window: d.window, bookings, blocks, nights, now });
@@ -93,7 +102,13 @@ function AircraftCard({ plane, slug, timeZone, days, bookings, blocks, nights, n
                   return (
                     <li key={`f-${e.start}`} className={`${ROW} justify-between`} data-free={e.night ? "night" : "day"}>
                       <span className={e.night ? "text-ink-700" : "text-go-800"}>{e.night ? "☾ " : "○ "}{words}</span>
-                      {canBook ? (
+                      {canBook && !bookable ? (
+                        <span className="inline-flex min-h-11 items-center gap-1.5 font-bold text-plum-800 [--status-cut:#ffffff]">
+                          <StatusShape status={plane.status} size={16} />
+                          {`${STATUS_WORDS[plane.status]} — no booking`}
+                        </span>
+                      ) : null}
+                      {bookable ? (
                         <a href={href} aria-label={`Book ${plane.registration} ${dayHeading(d.date)} from ${time(e.start)}`} className="inline-flex min-h-11 min-w-16 items-center justify-center rounded bg-fin-600 px-4 font-bold text-white no-underline hover:bg-fin-700">
                           Book
                         </a>
@@ -107,5 +122,22 @@ function AircraftCard({ plane, slug, timeZone, days, bookings, blocks, nights, n
         })}
       </ol>
     </section>
+  );
+}
+
+/** The status word with its mark and the reasons in words; the caution where the status is unknown.
+ *  Outside the badge the grounded mark's cross is drawn white (--status-cut) so that it shows. */
+function StatusNote({ note }: { note: ScheduleStatusNote }) {
+  const word = STATUS_WORDS[note.status];
+  const rest = note.text.startsWith(word) ? note.text.slice(word.length) : ` — ${note.text}`;
+  const tone = note.status === "grounded" ? "border-plum-800 bg-plum-50 text-plum-800" : "border-dashed border-fog-600 bg-fog-50 text-fog-800";
+  return (
+    <div className="mb-2 space-y-2">
+      <p className={`flex items-start gap-2 rounded border-l-4 px-3 py-2 text-sm ${tone}`} data-status-note={note.status}>
+        <span className="mt-0.5 [--status-cut:#ffffff]"><StatusShape status={note.status} size={18} /></span>
+        <span className="min-w-0 break-words"><strong>{word}</strong>{rest}</span>
+      </p>
+      {note.status === "unknown" ? <SafetyCaution compact /> : null}
+    </div>
   );
 }

@@ -13,9 +13,10 @@ function described(id: string, errors: string[] | undefined, hint: ReactNode) {
   return { invalid, aria: { "aria-invalid": invalid ? true : undefined, "aria-describedby": ids || undefined } as const };
 }
 
-function Lines({ id, errors, hint, indent = "" }: { id: string; errors?: string[]; hint?: ReactNode; indent?: string }) {
-  if (errors?.length) return <p id={`${id}-error`} className={`field-error ${indent}`}>{errors.join(" ")}</p>;
-  return hint ? <p id={`${id}-hint`} className={`mt-1 text-sm text-ink-500 ${indent}`}>{hint}</p> : null;
+/** `tight`: under a checkbox row, whose own padding already spaces it from the line. */
+function Lines({ id, errors, hint, indent = "", tight = false }: { id: string; errors?: string[]; hint?: ReactNode; indent?: string; tight?: boolean }) {
+  if (errors?.length) return <p id={`${id}-error`} className={`field-error ${indent} ${tight ? "-mt-1.5" : ""}`}>{errors.join(" ")}</p>;
+  return hint ? <p id={`${id}-hint`} className={`${tight ? "-mt-1.5" : "mt-1"} text-sm text-ink-500 ${indent}`}>{hint}</p> : null;
 }
 
 export function Field({ label, name, errors, hint, ...input }: Common & InputHTMLAttributes<HTMLInputElement>) {
@@ -47,12 +48,13 @@ export function CheckboxField({ label, name, errors, hint, ...input }: { label: 
   const id = input.id ?? `f-${name}`;
   const { aria } = described(id, errors, hint);
   return (
-    <div className="mb-4">
-      <label htmlFor={id} className="flex items-start gap-2">
-        <input id={id} name={name} type="checkbox" className="mt-1 h-5 w-5 shrink-0" {...aria} {...input} />
-        <span>{label}</span>
+    <div className="mb-3">
+      {/* The whole row is the touch target: at least 44 px tall (WCAG 2.5.5), the box 24 px. */}
+      <label htmlFor={id} className="flex min-h-11 cursor-pointer items-start gap-3 py-2.5">
+        <input id={id} name={name} type="checkbox" className="h-6 w-6 shrink-0 cursor-pointer" {...aria} {...input} />
+        <span className="min-w-0">{label}</span>
       </label>
-      <Lines id={id} errors={errors} hint={hint} indent="pl-7" />
+      <Lines id={id} errors={errors} hint={hint} indent="pl-9" tight />
     </div>
   );
 }

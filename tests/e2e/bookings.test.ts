@@ -40,6 +40,43 @@ describe("the booking page on a desktop", () => {
   });
 });
 
+describe("a grounded aircraft on the booking page", () => {
+  // The seeded N0512L carries a squawk triaged as grounding (no other browser test touches it).
+  it("shows its status word and grounding reason in place of Book links, on a desktop and a phone", async () => {
+    for (const kind of ["desktop", "phone"] as const) {
+      const page = await newPage(kind);
+      if (kind === "desktop") await page.setViewportSize({ width: 1280, height: 800 });
+      try {
+        await signIn(page, "member@hangarline.test");
+        await page.goto("/clubs/reedwater/bookings?days=3", { waitUntil: "networkidle" });
+        const card = page.locator('section[data-aircraft="N0512L"]');
+        await card.getByRole("heading", { name: "N0512L", exact: true }).waitFor();
+        expect(await card.locator("[data-status]").first().getAttribute("data-status")).toBe("grounded");
+        const note = (await card.locator('[data-status-note="grounded"]').innerText()).replace(/\s+/g, " ").trim();
+        expect(note).toMatch(/^Grounded — /);
+        expect(note).toContain("Grounding squawk: Right brake fades and the pedal sinks; fluid on the right wheel fairing");
+        expect(note).toMatch(/\. Booking opens when maintenance returns it to service\.$/);
+        // No "Book" link anywhere on its card: each free window names the status instead.
+        expect(await card.getByRole("link", { name: /^Book\b/ }).count()).toBe(0);
+        const free = card.locator("li[data-free]");
+        const windows = await free.count();
+        expect(windows).toBeGreaterThan(0);
+        expect(await free.getByText("Grounded — no booking", { exact: true }).count()).toBe(windows);
+        // An aircraft that may fly keeps its links.
+        expect(await page.locator('section[data-aircraft="N0527L"]').getByRole("link", { name: /^Book N0527L / }).count()).toBeGreaterThan(0);
+        await expectNoHorizontalOverflow(page);
+        await card.scrollIntoViewIfNeeded();
+        await screenshot(page, `bookings-grounded-${kind}`);
+        await card.screenshot({ path: new URL(`../.artifacts/bookings-grounded-card-${kind}.png`, import.meta.url).pathname });
+      } catch (error) {
+        await screenshot(page, `bookings-grounded-failure-${kind}`);
+        throw error;
+      }
+      await page.context().close();
+    }
+  });
+});
+
 describe("bookings on a phone", () => {
   it("book → weight and balance with the envelope → preflight with a finding → begin flight → flight sheet", async () => {
     const page = await newPage("phone");
@@ -133,6 +170,15 @@ async function flow(page: Page) {
   await pf.getByRole("group", { name: "tire, brake and strut" }).first().getByRole("button", { name: "Finding" }).click();
   await pf.getByLabel("What you found (optional): tire, brake and strut").fill("Left main tire worn through the tread");
   await pf.locator('input[type=file][name^="photos."]').setInputFiles({ name: "tire.png", mimeType: "image/png", buffer: PNG });
+  // The finding's "may affect airworthiness" row: a 24 px box in a row at least 44 px tall.
+  const mark = pf.getByLabel("This may affect airworthiness");
+  expect((await mark.boundingBox())!.height).toBeGreaterThanOrEqual(24);
+  expect((await pf.locator("label").filter({ hasText: "This may affect airworthiness" }).boundingBox())!.height).toBeGreaterThanOrEqual(44);
+  await mark.scrollIntoViewIfNeeded();
+  await screenshot(page, "preflight-finding-phone");
+  await page.setViewportSize({ width: 1280, height: 800 });
+  await screenshot(page, "preflight-finding-desktop");
+  await page.setViewportSize({ width: 390, height: 844 });
   for (const area of await pf.getByRole("button", { name: /^All as expected: / }).all()) await area.click();
   await pf.getByRole("button", { name: "✓ Every tank full, every sample clear" }).click();
   await pf.getByRole("button", { name: "Oil 6 qt" }).click();

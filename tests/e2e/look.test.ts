@@ -96,8 +96,11 @@ describe("our own look on the flight line and the aircraft page", { retry: 0 }, 
     await openAircraft(page);
     await page.getByRole("group", { name: `Inspection items of ${REG}` }).waitFor();
     await expectNoHorizontalOverflow(page);
-    // A checkbox's target is its whole label (the box itself is drawn 20 px inside it).
+    // A checkbox's target is its whole label (the box itself is drawn 24 px inside it).
     expect(await smallTargets(page, "main button, main summary, main select, main input:not([type=checkbox]):not([type=radio]), main label:has(> input[type=checkbox]), main textarea, main li > a")).toEqual([]);
+    const boxes = await page.locator("main input[type=checkbox]").evaluateAll((els) => els.filter((el) => el.getBoundingClientRect().width > 0).map((el) => Math.round(el.getBoundingClientRect().width)));
+    expect(boxes.length).toBeGreaterThan(0);
+    expect(boxes.filter((w) => w < 24)).toEqual([]);
     await screenshot(page, "look-aircraft-phone");
     await page.locator("#due").screenshot({ path: new URL("../.artifacts/look-due-view-phone.png", import.meta.url).pathname });
   });

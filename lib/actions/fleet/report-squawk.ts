@@ -1,15 +1,14 @@
 "use server";
 import { getAircraft } from "@/db/queries/fleet";
-import { createSquawk, listSquawkAlertRecipients } from "@/db/queries/fleet-squawks";
+import { createSquawk } from "@/db/queries/fleet-squawks";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
-import { enqueueEmails } from "@/lib/email/outbox";
 import { kickOutbox } from "@/lib/email/runner";
 import { toldText } from "@/lib/fleet/squawk-words";
-import { appUrl } from "@/lib/server/urls";
 import { IMAGE_TYPES } from "@/lib/storage";
 import { reportSquawkSchema } from "@/lib/validation/fleet";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles } from "./files";
+import { alertPossiblyUnsafeSquawk } from "./squawk-alert";
 
 // Any member may report; the squawk weighs on the status at once (untriaged is never flyable
 // without a look, and "may affect airworthiness" grounds until maintenance triages it).
@@ -37,40 +36,16 @@ export const reportSquawk = clubAction({
           note: input.suspectedGrounding ? "Reported as possibly affecting airworthiness." : null,
         }),
       };
-      insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: row!.id, uploadedById: user.id }, stored);
-      let maintenance = 0;
-      let booking = 0;
-      if (input.suspectedGrounding) {
-        const recipients = listSquawkAlertRecipients(tx, club.id, plane.id, new Date(), user.id);
-        enqueueEmails(
-          tx,
-          recipients.map((r) => ({
-            clubId: club.id,
-            to: r.email,
-            subject: `${plane.registration} reported as possibly unsafe: ${input.description.slice(0, 70)}`,
-            template: "squawk-alert" as const,
-            payload: {
-              clubName: club.name,
-              registration: plane.registration,
-              aircraftName: `${plane.make} ${plane.model}`,
-              description: input.description,
-              foundDuring: input.foundDuring,
-              reportedBy: user.name ?? "A member",
-              because: r.why,
-              url: appUrl(`/clubs/${club.slug}/aircraft/${plane.id}`),
-              squawkId: row!.id,
-            },
-          })),
-        );
-        maintenance = recipients.filter((r) => r.why === "maintenance").length;
-        booking = recipients.length - maintenance;
-      }
+      insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: row.id, uploadedById: user.id }, stored);
+      const { maintenance, booking } = input.suspectedGrounding
+        ? alertPossiblyUnsafeSquawk(tx, club, plane, { id: row.id, description: input.description, foundDuring: input.foundDuring, reporter: { id: user.id, name: user.name ?? null } })
+        : { maintenance: 0, booking: 0 };
       const told = toldText(maintenance, booking);
       // The form shows this answer in place, quoting what was reported and saying only who was
       // e-mailed (nobody unless it was marked as possibly unsafe); then the page's lists refresh.
       return {
         message: `Squawk reported: “${input.description}”.${told ? ` ${told[0]!.toUpperCase()}${told.slice(1)}.` : ""}`,
-        data: { squawkId: row!.id, emailed: { maintenance, booking } },
+        data: { squawkId: row.id, emailed: { maintenance, booking } },
         refresh: true,
       };
     });

@@ -1,11 +1,15 @@
 "use server";
 import { preflightRecordItems, preflightRecords } from "@/db/schema";
+import { getAircraft } from "@/db/queries/fleet";
 import { createSquawk } from "@/db/queries/fleet-squawks";
 import { getPreflightTemplate, preflightTanks } from "@/db/queries/tools-preflight";
 import { loadBookingForParty } from "@/lib/actions/bookings/booking-access";
 import { clubAction } from "@/lib/actions/create-action";
 import { ActionError } from "@/lib/actions/action-state";
 import { checkFiles, discardStored, insertUploadRows, storeFiles, withStoredFiles, type StoredFile } from "@/lib/actions/fleet/files";
+import { alertPossiblyUnsafeSquawk } from "@/lib/actions/fleet/squawk-alert";
+import { kickOutbox } from "@/lib/email/runner";
+import { toldText } from "@/lib/fleet/squawk-words";
 import { evaluatePreflight, findingDescription, fuelAboveCapacity } from "@/lib/bookings/preflight-outcome";
 import { writeAudit } from "@/lib/server/audit";
 import { IMAGE_TYPES } from "@/lib/storage";
@@ -15,10 +19,13 @@ const INVALID = "Some fields need attention; nothing was saved.";
 
 // One step: the record, its items and — for every finding — a squawk with its photos, so
 // maintenance sees it on the flight line at once. The record is attached to the booking.
+// A finding marked "may affect airworthiness" sends the same alert as a squawk report so
+// marked (alertPossiblyUnsafeSquawk, through the outbox in this transaction).
 export const recordPreflight = clubAction({
   schema: preflightRecordSchema,
   permission: ["create", "Squawk"],
   success: "Preflight recorded.",
+  after: () => kickOutbox(),
   async prepare(_ctx, input) {
     const stored = new Map<string, StoredFile[]>();
     try {
@@ -81,6 +88,9 @@ export const recordPreflight = clubAction({
         .all();
 
       const squawkIds: string[] = [];
+      const emailed = { maintenance: 0, booking: 0 };
+      const plane = getAircraft(tx, club.id, booking.aircraftId);
+      if (!plane) throw new ActionError("That aircraft was not found in this club.", {}, "not_found");
       for (const r of itemResults) {
         let squawkId: string | null = null;
         if (r.result === "finding") {
@@ -89,6 +99,11 @@ export const recordPreflight = clubAction({
             note: "Found during the preflight of a booking.",
           });
           squawkIds.push(squawkId);
+          if (r.grounding) {
+            const sent = alertPossiblyUnsafeSquawk(tx, club, plane, { id: squawkId, description: findingDescription(r.template, r.note), foundDuring: "preflight", reporter: { id: user.id, name: user.name ?? null } });
+            emailed.maintenance += sent.maintenance;
+            emailed.booking += sent.booking;
+          }
           insertUploadRows(tx, { clubId: club.id, subjectType: "Squawk", subjectId: squawkId, uploadedById: user.id }, stored.get(r.template.id) ?? []);
         }
         tx.insert(preflightRecordItems)
@@ -96,10 +111,12 @@ export const recordPreflight = clubAction({
           .run();
       }
       writeAudit(tx, { clubId: club.id, actorId: user.id, action: "preflight.record", subjectType: "Booking", subjectId: booking.id, after: { recordId: record!.id, outcome: outcome.outcome, findings: outcome.findings, squawkIds } });
-      const message = outcome.outcome === "ok"
+      const told = toldText(emailed.maintenance, emailed.booking);
+      const recorded = outcome.outcome === "ok"
         ? "Preflight recorded: everything as expected. You can begin the flight."
         : `Preflight recorded with ${outcome.findings.length} finding${outcome.findings.length === 1 ? "" : "s"}${squawkIds.length ? `; ${squawkIds.length} reported as squawk${squawkIds.length === 1 ? "" : "s"} for maintenance` : ""}.`;
-      return { message, data: { recordId: record!.id, squawkIds, findings: outcome.findings }, refresh: true };
+      const message = told ? `${recorded} Marked as possibly affecting airworthiness: ${told}.` : recorded;
+      return { message, data: { recordId: record!.id, squawkIds, findings: outcome.findings, emailed }, refresh: true };
     });
   },
 });

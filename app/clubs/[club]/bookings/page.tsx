@@ -16,6 +16,7 @@ import { addDays, isoDateInTimeZone } from "@/lib/dates";
 import { dayBounds } from "@/lib/bookings/grid";
 import { isFieldPosition, nightIntervals } from "@/lib/bookings/night";
 import { flyingWindow, type Span } from "@/lib/bookings/schedule";
+import { scheduleStatusNote } from "@/lib/bookings/status-note";
 import { bookingDaysSchema } from "@/lib/validation/bookings";
 import { can } from "@/permissions";
 import { authorizePage } from "@/lib/server/authorize";
@@ -54,7 +55,7 @@ export default async function BookingsPage({ params, searchParams }: { params: P
   });
 
   const line = getFlightLine(db, club);
-  const aircraft = line.entries.map((e) => ({ id: e.aircraft.id, registration: e.aircraft.registration, name: `${e.aircraft.make} ${e.aircraft.model}`, status: e.status }));
+  const aircraft = line.entries.map((e) => ({ id: e.aircraft.id, registration: e.aircraft.registration, name: `${e.aircraft.make} ${e.aircraft.model}`, status: e.status, note: scheduleStatusNote(e.status, e.reasons) }));
   const rows = listSheetBookings(db, club.id, from, to);
   const blocks = listBlocksInRange(db, club.id, from, to);
   const availability = listAvailability(db, club.id, from, to);
