@@ -99,6 +99,21 @@ describe("acting on a weekly series", () => {
     expect(seriesAudits("booking.cancel").length).toBe(auditsBefore + 3);
   });
 
+  it("a week inside the club's late-cancellation window is cancelled late, and the answer says so", async () => {
+    const club = clubBySlug(SLUG);
+    const soon = Date.now() + 3 * 3_600_000;
+    const local = (ms: number) => new Intl.DateTimeFormat("sv-SE", { timeZone: club.timeZone, dateStyle: "short", timeStyle: "short" }).format(new Date(ms)).replace(" ", "T");
+    signInAs("member@hangarline.test");
+    const made = await createBooking(EMPTY, form({ club: SLUG, aircraftId: planeId(SLUG, "N0556L"), startsAt: local(soon), endsAt: local(soon + 3_600_000), repeatWeeks: "2", acceptedGuards: ALL_GUARDS }));
+    expect(made, made.message).toMatchObject({ ok: true });
+    const weeks = (made.data as { booked: { bookingId: string }[] }).booked.map((b) => b.bookingId);
+    expect(weeks).toHaveLength(2);
+    const state = await cancelBookingSeries(EMPTY, form({ club: SLUG, bookingId: weeks[0]!, idempotencyKey: randomUUID() }));
+    expect(state, state.message).toMatchObject({ ok: true });
+    expect(state.message).toMatch(/^Cancelled 2 weeks: .*: Late cancellation: \d\.\d h before the start, inside the club's 24-hour rule\./);
+    expect(weeks.map((id) => row(id).lateCancel)).toEqual([true, false]);
+  });
+
   it("moving lists a week refused by another member's booking, and moves the others", async () => {
     const club = clubBySlug(SLUG);
     const weeks = await bookWeekly("member@hangarline.test", "N0549L", 60, "06:00", "07:00", 4);
