@@ -17,6 +17,12 @@ export function ChangeBookingForm({ slug, bookingId, defaults, instructors, late
   const form = useFormAction(changeBooking);
   const { state } = form;
   const [values, setValues] = useState(defaults);
+  // The booking moved under the form (a series move, another device): show its times now.
+  const [shown, setShown] = useState(defaults);
+  if (shown.startsAt !== defaults.startsAt || shown.endsAt !== defaults.endsAt || shown.instructorId !== defaults.instructorId) {
+    setShown(defaults);
+    setValues(defaults);
+  }
   const set = (k: keyof typeof values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [k]: e.target.value }));
   const e = state.fieldErrors;
   return (
@@ -117,7 +123,7 @@ export function SeriesActions({ slug, bookingId, weeks, defaults, lateNote }: { 
                 <>
                   <input type="hidden" name="club" value={slug} />
                   <input type="hidden" name="bookingId" value={bookingId} />
-                  <Field label="Reason (optional)" name="reason" maxLength={300} errors={cancel.state.fieldErrors.reason} />
+                  <Field id="series-cancel-reason" label="Reason (optional)" name="reason" maxLength={300} errors={cancel.state.fieldErrors.reason} />
                   <p className="mb-3 text-sm">Weeks already flown, begun or past are left as they are.</p>
                   {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
                   <SubmitButton variant="danger" pendingText="Cancelling…">Cancel this and the later weeks</SubmitButton>

@@ -224,6 +224,8 @@ describe("a weekly series on its booking page", () => {
       }
       await moved.getByText(/^Moved 4 weeks to 06:30–08:00 club time: (Sun|Mon|Tue|Wed|Thu|Fri|Sat) \d{1,2} [A-Z][a-z]{2} \d{4}; /).waitFor();
       await series.getByRole("list", { name: "Weeks still booked" }).getByText(/, 06:30–08:00$/).first().waitFor();
+      // The single change form shows the booking's new times too.
+      expect(await page.getByRole("form", { name: "Change the booking" }).getByLabel("New start (club time)").inputValue()).toBe(`${day}T06:30`);
       await screenshot(page, "booking-series-moved-desktop");
 
       // Cancel them all: the answer stays on screen after the page shows nothing left to act on.
