@@ -7,6 +7,8 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { cancelBooking } from "@/lib/actions/bookings/cancel-booking";
 import { changeBooking } from "@/lib/actions/bookings/change-booking";
 import { beginFlight } from "@/lib/actions/bookings/begin-flight";
+import { cancelBookingSeries } from "@/lib/actions/bookings/cancel-booking-series";
+import { moveBookingSeries } from "@/lib/actions/bookings/move-booking-series";
 import { GuardNotes } from "./guard-notes";
 
 type Choice = { id: string; label: string };
@@ -15,6 +17,12 @@ export function ChangeBookingForm({ slug, bookingId, defaults, instructors, late
   const form = useFormAction(changeBooking);
   const { state } = form;
   const [values, setValues] = useState(defaults);
+  // The booking moved under the form (a series move, another device): show its times now.
+  const [shown, setShown] = useState(defaults);
+  if (shown.startsAt !== defaults.startsAt || shown.endsAt !== defaults.endsAt || shown.instructorId !== defaults.instructorId) {
+    setShown(defaults);
+    setValues(defaults);
+  }
   const set = (k: keyof typeof values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [k]: e.target.value }));
   const e = state.fieldErrors;
   return (
@@ -47,6 +55,85 @@ export function CancelBookingForm({ slug, bookingId, lateNote }: { slug: string;
       {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
       <SubmitButton variant="danger" pendingText="Cancelling…">Cancel the booking</SubmitButton>
     </FormShell>
+  );
+}
+
+export type SeriesWeekChoice = { id: string; label: string; current: boolean };
+
+/**
+ * "Move this and the later weeks" and "Cancel this and the later weeks" on a booking of a weekly
+ * series. `weeks` are the weeks from this one on still booked and yet to start. The forms stay
+ * mounted after the page refreshes, so that their answer (how many weeks, which were left as they
+ * were) stays on screen even when nothing is left to act on.
+ */
+export function SeriesActions({ slug, bookingId, weeks, defaults, lateNote }: { slug: string; bookingId: string; weeks: SeriesWeekChoice[]; defaults: { startTime: string; endTime: string }; lateNote: string | null }) {
+  const move = useFormAction(moveBookingSeries);
+  const cancel = useFormAction(cancelBookingSeries);
+  const [values, setValues] = useState(defaults);
+  const set = (k: keyof typeof values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [k]: e.target.value }));
+  const open = weeks.length > 0;
+  const showMove = open || move.answerCount > 0;
+  const showCancel = open || cancel.answerCount > 0;
+  if (!showMove && !showCancel) return null;
+  const me = move.state.fieldErrors;
+  return (
+    <section className="mt-4" aria-labelledby="series-h">
+      <h2 id="series-h" className="mb-1 text-lg font-bold">Weekly series</h2>
+      {open ? (
+        <>
+          <p className="mb-2 text-sm">Booked as part of a weekly series. From this booking on, {weeks.length === 1 ? "1 week is" : `${weeks.length} weeks are`} still booked and yet to start:</p>
+          <ul className="mb-3 flex flex-wrap gap-2 text-sm" aria-label="Weeks still booked">
+            {weeks.map((w) => (
+              <li key={w.id} className={`rounded border px-2 py-0.5 ${w.current ? "border-fin-600 font-bold" : "border-ink-300"}`}>
+                {w.label}{w.current ? <span className="sr-only"> (this booking)</span> : null}
+              </li>
+            ))}
+          </ul>
+        </>
+      ) : (
+        <p className="mb-3 text-sm">No week of this series from this booking on is still booked and yet to start.</p>
+      )}
+      <div className="grid gap-4 md:grid-cols-2">
+        {showMove ? (
+          <section className="card" aria-labelledby="series-move-h">
+            <h3 id="series-move-h" className="mb-3 font-bold">Move this and the later weeks</h3>
+            <FormShell form={move} label="Move this and the later weeks">
+              {open ? (
+                <>
+                  <GuardNotes state={move.state} />
+                  <input type="hidden" name="club" value={slug} />
+                  <input type="hidden" name="bookingId" value={bookingId} />
+                  <div className="grid gap-x-3 sm:grid-cols-2">
+                    <Field label="New start (club time)" name="startTime" type="time" step={900} value={values.startTime} onChange={set("startTime")} errors={me.startTime} />
+                    <Field label="New end (club time)" name="endTime" type="time" step={900} value={values.endTime} onChange={set("endTime")} errors={me.endTime} />
+                  </div>
+                  <p className="mb-3 text-sm">Each week keeps its own date. A week that cannot take the new time stays as it is, and the answer says why.</p>
+                  {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
+                  <SubmitButton variant="secondary" pendingText="Moving…">Move this and the later weeks</SubmitButton>
+                </>
+              ) : null}
+            </FormShell>
+          </section>
+        ) : null}
+        {showCancel ? (
+          <section className="card" aria-labelledby="series-cancel-h">
+            <h3 id="series-cancel-h" className="mb-3 font-bold">Cancel this and the later weeks</h3>
+            <FormShell form={cancel} label="Cancel this and the later weeks">
+              {open ? (
+                <>
+                  <input type="hidden" name="club" value={slug} />
+                  <input type="hidden" name="bookingId" value={bookingId} />
+                  <Field id="series-cancel-reason" label="Reason (optional)" name="reason" maxLength={300} errors={cancel.state.fieldErrors.reason} />
+                  <p className="mb-3 text-sm">Weeks already flown, begun or past are left as they are.</p>
+                  {lateNote ? <p className="mb-3 text-sm text-sock-700">▲ {lateNote}</p> : null}
+                  <SubmitButton variant="danger" pendingText="Cancelling…">Cancel this and the later weeks</SubmitButton>
+                </>
+              ) : null}
+            </FormShell>
+          </section>
+        ) : null}
+      </div>
+    </section>
   );
 }
 

@@ -2,6 +2,7 @@
 import { FormShell } from "@/components/ui/form-shell";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { SubmitButton } from "@/components/ui/submit-button";
+import Link from "next/link";
 import { useState } from "react";
 import { CheckboxField, Field, SelectField } from "@/components/ui/field";
 import { createBooking } from "@/lib/actions/bookings/create-booking";
@@ -9,11 +10,11 @@ import type { CreateBookingData } from "@/lib/actions/bookings/create-booking";
 import { GuardNotes } from "./guard-notes";
 
 /** A weekly booking's answer, week by week: booked (with a link) or not, and why. */
-function WeeksAnswer({ data }: { data: CreateBookingData | undefined }) {
+function WeeksAnswer({ slug, data }: { slug: string; data: CreateBookingData | undefined }) {
   if (!data?.booked) return null;
   return (
     <ul className="mt-3 space-y-1 text-sm" aria-label="Weeks">
-      {data.booked.map((b) => <li key={b.bookingId}>✓ Booked: {b.when}</li>)}
+      {data.booked.map((b) => <li key={b.bookingId}>✓ Booked: <Link className="underline" href={`/clubs/${slug}/bookings/${b.bookingId}`}>{b.when}</Link></li>)}
       {(data.refused ?? []).map((r) => <li key={r.startsAt}>✕ Not booked: {r.when} — {r.reason}</li>)}
     </ul>
   );
@@ -56,7 +57,7 @@ export function BookingForm({ slug, aircraft, instructors, members, defaults }: 
       <Field label="Purpose (optional)" name="purpose" value={values.purpose} onChange={set("purpose")} errors={e.purpose} maxLength={200} />
       <CheckboxField label="I plan to carry passengers" name="carryingPassengers" checked={values.carryingPassengers} onChange={set("carryingPassengers")} errors={e.carryingPassengers} hint="Then passenger currency (14 CFR 61.57(a)) is checked too." />
       <SubmitButton pendingText="Booking…">Book</SubmitButton>
-      <WeeksAnswer data={state.ok ? (state.data as CreateBookingData | undefined) : undefined} />
+      <WeeksAnswer slug={slug} data={state.ok ? (state.data as CreateBookingData | undefined) : undefined} />
     </FormShell>
   );
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, gt, inArray, lt, ne, or, sql } from "drizzle-orm";
+import { and, asc, eq, gt, gte, inArray, lt, ne, or, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/sqlite-core";
 import type { Db, Tx } from "@/db/client";
 import { aircraft, bookings, MAX_BOOKING_MS, users, type BookingRow } from "@/db/schema";
@@ -70,6 +70,16 @@ export function updateBookingRow(tx: Tx, clubId: string, bookingId: string, chan
   } catch (error) {
     rethrowOverlap(error);
   }
+}
+
+/** The weeks of one weekly series that start at or after `from`, earliest first (every status). */
+export function listSeriesFrom(db: Handle, clubId: string, seriesId: string, from: Date): BookingRow[] {
+  return db
+    .select()
+    .from(bookings)
+    .where(and(eq(bookings.clubId, clubId), eq(bookings.seriesId, seriesId), gte(bookings.startsAt, from)))
+    .orderBy(asc(bookings.startsAt))
+    .all();
 }
 
 export function getBookingRow(db: Handle, clubId: string, bookingId: string): BookingRow | undefined {

@@ -43,10 +43,13 @@ export const bookings = sqliteTable(
     checkedInAt: integer("checked_in_at", { mode: "timestamp_ms" }),
     flightId: text("flight_id").references(() => flights.id),
     createdById: text("created_by_id").references(() => users.id),
+    /** Shared by the weeks of one weekly booking (made together); null for a single booking. */
+    seriesId: text("series_id"),
     ...timestamps(),
   },
   (t) => [
     index("bookings_club_id").on(t.clubId),
+    index("bookings_series").on(t.clubId, t.seriesId, t.startsAt),
     index("bookings_aircraft_time").on(t.clubId, t.aircraftId, t.startsAt),
     index("bookings_instructor_time").on(t.clubId, t.instructorId, t.startsAt),
     index("bookings_member_time").on(t.clubId, t.userId, t.startsAt),

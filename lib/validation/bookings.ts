@@ -72,6 +72,33 @@ export const cancelBookingSchema = z.object({
   reason: optionalText("the reason", 300),
 });
 
+/** "Cancel this and the later weeks" of a weekly series, from one of its bookings. */
+export const cancelSeriesSchema = z.object({
+  bookingId: id("a booking"),
+  reason: optionalText("the reason", 300),
+});
+
+const clockTime = (label: string) =>
+  z
+    .string({ error: `Enter ${label} as HH:MM on a 24-hour clock, like 09:30.` })
+    .trim()
+    .regex(/^([01]\d|2[0-3]):[0-5]\d$/, { error: `Enter ${label} as HH:MM on a 24-hour clock, like 09:30.` });
+
+/**
+ * "Move this and the later weeks": new club times of day for this week and each later one, each
+ * on its own date. The end is on the same day, after the start.
+ */
+export const moveSeriesSchema = z
+  .object({
+    bookingId: id("a booking"),
+    startTime: clockTime("the new start"),
+    endTime: clockTime("the new end"),
+    acceptedGuards,
+  })
+  .superRefine((v, ctx) => {
+    if (v.endTime <= v.startTime) ctx.addIssue({ code: "custom", path: ["endTime"], message: "The end must be after the start, on the same day." });
+  });
+
 export const beginFlightSchema = z
   .object({
     bookingId: id("a booking"),
@@ -212,4 +239,5 @@ export const bookingDaysSchema = z.object({
 
 export type CreateBookingInput = z.output<typeof createBookingSchema>;
 export type ChangeBookingInput = z.output<typeof changeBookingSchema>;
+export type MoveSeriesInput = z.output<typeof moveSeriesSchema>;
 export type FlightSheetInput = z.output<typeof flightSheetSchema>;

@@ -224,3 +224,69 @@ async function flow(page: Page) {
   await page.goto(bookingUrl, { waitUntil: "networkidle" });
   await page.getByText("Flown, sheet closed").first().waitFor();
 }
+
+describe("a weekly series on its booking page", () => {
+  it("books four weeks, moves them all to a new time, then cancels them, each answer in words", async () => {
+    const page = await newPage("desktop");
+    const phone = await newPage("phone");
+    try {
+      await signIn(page, "member@hangarline.test");
+      // Early in the day, on days after the phone flow's (its days are 11 to 50 ahead).
+      const day = localDay(55 + Math.floor(Math.random() * 40), "America/Chicago");
+      await page.goto(`/clubs/reedwater/bookings/new?start=${day}T06:00&end=${day}T07:00`, { waitUntil: "networkidle" });
+      const form = page.getByRole("form", { name: "Book an aircraft" });
+      const plane = await form.locator("select[name=aircraftId] option", { hasText: "N0527L" }).getAttribute("value");
+      await form.getByLabel("Aircraft").selectOption(plane!);
+      await form.getByLabel("Repeat").selectOption("4");
+      await form.getByRole("button", { name: "Book", exact: true }).click();
+      const answer = form.getByRole("status");
+      await Promise.race([answer.getByText(/booked \d of 4 weeks/).waitFor({ timeout: 15_000 }), page.getByRole("group", { name: "Warnings to read" }).waitFor({ timeout: 15_000 })]).catch(() => undefined);
+      if (!(await answer.getByText(/booked \d of 4 weeks/).count())) await tickWarningsAndRetry(page, "Book");
+      await answer.getByText(/^N0527L booked 4 of 4 weeks: /).waitFor();
+      // The first week's page, from the answer's list.
+      await form.getByRole("list", { name: "Weeks" }).getByRole("link").first().click();
+      await page.waitForURL(/\/bookings\/[\w-]{36}$/);
+      const series = page.getByRole("region", { name: "Weekly series" });
+      await series.getByText("4 weeks are still booked and yet to start").waitFor();
+      expect(await series.getByRole("list", { name: "Weeks still booked" }).getByRole("listitem").count()).toBe(4);
+      await expectNoHorizontalOverflow(page);
+      await screenshot(page, "booking-series-desktop");
+      await signIn(phone, "member@hangarline.test");
+      await phone.goto(page.url(), { waitUntil: "networkidle" });
+      await phone.getByRole("region", { name: "Weekly series" }).getByRole("button", { name: "Cancel this and the later weeks" }).waitFor();
+      await expectNoHorizontalOverflow(phone);
+      await screenshot(phone, "booking-series-phone");
+
+      // Move every week to 06:30–08:00: the answer counts the weeks and names their dates in words.
+      const move = series.getByRole("form", { name: "Move this and the later weeks" });
+      await move.getByLabel("New start (club time)").fill("06:30");
+      await move.getByLabel("New end (club time)").fill("08:00");
+      await move.getByRole("button", { name: "Move this and the later weeks" }).click();
+      const moved = move.getByRole("status");
+      await Promise.race([moved.getByText(/^Moved /).waitFor({ timeout: 15_000 }), move.getByRole("group", { name: "Warnings to read" }).waitFor({ timeout: 15_000 })]).catch(() => undefined);
+      if (!(await moved.getByText(/^Moved /).count())) {
+        for (const box of await move.getByRole("group", { name: "Warnings to read" }).getByRole("checkbox").all()) await box.check();
+        await move.getByRole("button", { name: "Move this and the later weeks" }).click();
+      }
+      await moved.getByText(/^Moved 4 weeks to 06:30–08:00 club time: (Sun|Mon|Tue|Wed|Thu|Fri|Sat) \d{1,2} [A-Z][a-z]{2} \d{4}; /).waitFor();
+      await series.getByRole("list", { name: "Weeks still booked" }).getByText(/, 06:30–08:00$/).first().waitFor();
+      // The single change form shows the booking's new times too.
+      expect(await page.getByRole("form", { name: "Change the booking" }).getByLabel("New start (club time)").inputValue()).toBe(`${day}T06:30`);
+      await screenshot(page, "booking-series-moved-desktop");
+
+      // Cancel them all: the answer stays on screen after the page shows nothing left to act on.
+      const cancel = series.getByRole("form", { name: "Cancel this and the later weeks" });
+      await cancel.getByLabel("Reason (optional)").fill("Lessons moved to another aircraft");
+      await cancel.getByRole("button", { name: "Cancel this and the later weeks" }).click();
+      await cancel.getByRole("status").getByText(/^Cancelled 4 weeks: .*The aircraft is free again on those days\./).waitFor();
+      await series.getByText("No week of this series from this booking on is still booked and yet to start.").waitFor();
+      await page.getByText(/Cancelled .*: Lessons moved to another aircraft\./).waitFor();
+      await screenshot(page, "booking-series-cancelled-desktop");
+    } catch (error) {
+      await screenshot(page, "booking-series-failure-desktop");
+      throw error;
+    }
+    await page.context().close();
+    await phone.context().close();
+  });
+});

@@ -117,7 +117,8 @@ function loadPlane(tx: Tx, clubId: string, aircraftId: string): Aircraft {
   return plane;
 }
 
-export function createBookingInTx(tx: Tx, ctx: Ctx, input: CreateBookingInput, now: Date = new Date()) {
+/** `seriesId` is given only by the weekly path (booking-recurring.ts): the weeks made together share it. */
+export function createBookingInTx(tx: Tx, ctx: Ctx, input: CreateBookingInput, now: Date = new Date(), opts: { seriesId?: string } = {}) {
   claimBookingWriteLock(tx);
   const memberId = input.memberId ?? ctx.user.id;
   if (memberId !== ctx.user.id && !canOn(ctx.ability, "update", "Booking", { userId: memberId })) {
@@ -137,7 +138,7 @@ export function createBookingInTx(tx: Tx, ctx: Ctx, input: CreateBookingInput, n
   const acceptedWarnings = applyGuards(refusals, warnings, input.acceptedGuards);
   let bookingId: string;
   try {
-    bookingId = insertBooking(tx, { clubId: ctx.club.id, ...wanted, purpose: input.purpose, carryingPassengers: input.carryingPassengers, acceptedWarnings, createdById: ctx.user.id });
+    bookingId = insertBooking(tx, { clubId: ctx.club.id, ...wanted, purpose: input.purpose, carryingPassengers: input.carryingPassengers, acceptedWarnings, createdById: ctx.user.id, seriesId: opts.seriesId ?? null });
   } catch (error) {
     if (error instanceof BookingOverlapError) throw overlapRefusal(error, plane.registration);
     throw error;

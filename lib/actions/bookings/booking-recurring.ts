@@ -1,5 +1,6 @@
 import "server-only";
 import type { Tx } from "@/db/client";
+import { newId } from "@/db/schema/columns";
 import { ActionError } from "@/lib/actions/action-state";
 import { describeLocalWindow, expandWeekly } from "@/lib/bookings/recurrence";
 import type { ClubContext } from "@/lib/server/club-context";
@@ -23,7 +24,8 @@ export type RecurringResult = {
   acceptedWarnings: number;
 };
 
-function reasonOf(error: ActionError): string {
+/** The words of a refusal, without the warnings still to be read. */
+export function reasonOf(error: ActionError): string {
   const fields = Object.entries(error.fieldErrors).filter(([k]) => k !== "warnings" && k !== "warningGuards" && k !== "refusals");
   const texts = [...(error.fieldErrors.refusals ?? []), ...fields.flatMap(([, v]) => v)];
   const unique = [...new Set(texts)];
@@ -33,10 +35,13 @@ function reasonOf(error: ActionError): string {
 export function createRecurringInTx(tx: Tx, ctx: Ctx, input: CreateBookingInput, now: Date = new Date()): RecurringResult {
   const result: RecurringResult = { booked: [], refused: [], registration: "", memberId: input.memberId ?? ctx.user.id, acceptedWarnings: 0 };
   const warnings = new Map<string, string>();
+  // The weeks booked by this one submission share a series id, so the later ones can be
+  // cancelled or moved together from any week's page.
+  const seriesId = newId();
   for (const week of expandWeekly({ startsAt: input.startsAt, endsAt: input.endsAt }, input.repeatWeeks)) {
     const when = describeLocalWindow(week);
     try {
-      const made = createBookingInTx(tx, ctx, { ...input, ...week, repeatWeeks: 1 }, now);
+      const made = createBookingInTx(tx, ctx, { ...input, ...week, repeatWeeks: 1 }, now, { seriesId });
       result.registration = made.plane.registration;
       result.acceptedWarnings += made.acceptedWarnings.length;
       result.booked.push({ ...week, when, bookingId: made.bookingId });

@@ -2,14 +2,14 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { notFound } from "next/navigation";
-import { BeginFlightForm, CancelBookingForm, ChangeBookingForm } from "@/components/bookings/booking-actions";
+import { BeginFlightForm, CancelBookingForm, ChangeBookingForm, SeriesActions } from "@/components/bookings/booking-actions";
 import { limitationTexts } from "@/lib/bookings/guards";
 import { BOOKING_STATUS_MARK, BOOKING_STATUS_WORDS, dayHeading, localInputValue } from "@/components/bookings/booking-words";
 import { buttonClass } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
 import { SafetyCaution } from "@/components/ui/safety-caution";
 import { StatusBadge } from "@/components/ui/status-badge";
-import { getBooking } from "@/db/queries/bookings";
+import { getBooking, listSeriesFrom } from "@/db/queries/bookings";
 import { getAircraftStatusEntry } from "@/db/queries/fleet-status";
 import { listMembers } from "@/db/queries/members";
 import { listPreflightRecords } from "@/db/queries/tools-preflight";
@@ -18,6 +18,7 @@ import { visibleBookingWarnings } from "@/lib/bookings/warning-access";
 import { mayActOnBooking } from "@/lib/actions/bookings/booking-access";
 import { describeLateCheck, lateCancellation } from "@/lib/bookings/late-cancellation";
 import { isoDateInTimeZone } from "@/lib/dates";
+import { formatDateWords } from "@/lib/dates/words";
 import { formatLocalTime } from "@/lib/fleet/time";
 import { authorizePage } from "@/lib/server/authorize";
 
@@ -53,6 +54,11 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
   const lateNote = late ? `${late.replace("Late cancellation:", "Cancelling or shortening now is late:")}` : null;
   const instructors = listMembers(db, club.id).filter((m) => m.status === "active" && m.roles.includes("instructor") && m.userId !== booking.userId).map((m) => ({ id: m.userId, label: m.name ?? m.email }));
   const open = booking.status === "reserved" || booking.status === "dispatched";
+  // The weeks of this booking's weekly series from this one on that can still be cancelled or
+  // moved: reserved and yet to start (the actions check each week again).
+  const now = Date.now();
+  const laterWeeks = booking.seriesId ? listSeriesFrom(db, club.id, booking.seriesId, booking.startsAt).filter((w) => w.status === "reserved" && w.startsAt.getTime() > now) : [];
+  const clock = (d: Date) => localInputValue(d, tz).slice(11);
   return (
     <div className="max-w-4xl">
       <PageHeader
@@ -119,6 +125,16 @@ export default async function BookingPage({ params }: { params: Promise<{ club: 
             <CancelBookingForm slug={club.slug} bookingId={booking.id} lateNote={lateNote} />
           </section>
         </div>
+      ) : null}
+
+      {mayAct && booking.seriesId ? (
+        <SeriesActions
+          slug={club.slug}
+          bookingId={booking.id}
+          lateNote={lateNote}
+          defaults={{ startTime: clock(booking.startsAt), endTime: clock(booking.endsAt) }}
+          weeks={laterWeeks.map((w) => ({ id: w.id, current: w.id === booking.id, label: `${formatDateWords(isoDateInTimeZone(w.startsAt, tz))}, ${clock(w.startsAt)}–${clock(w.endsAt)}` }))}
+        />
       ) : null}
     </div>
   );
