@@ -68,7 +68,7 @@ const accepts = (schema: z.ZodType, value: unknown) => schema.safeParse(value).s
 
 /** Where one field's valid value depends on another's (an end after its start, weights in order). */
 const BASELINE_BY_NAME: Record<string, string> = {
-  endsAt: "2026-12-01T11:00", startTime: "09:00", endTime: "11:00", confirmPreflight: "on", birthDate: "1980-04-02", timeZone: "America/Chicago", locale: "en-US", emptyWeight: "1500", maxTakeoffWeight: "2300", year: "2026",
+  endsAt: "2026-12-01T11:00", startTime: "09:00", endTime: "11:00", flyingDayOpens: "07:00", flyingDayCloses: "21:00", confirmPreflight: "on", birthDate: "1980-04-02", timeZone: "America/Chicago", locale: "en-US", emptyWeight: "1500", maxTakeoffWeight: "2300", year: "2026",
 };
 const PLAIN_TEXT = "A plain description that is long enough for every check";
 const NOT_DATES = [PLAIN_TEXT, "Rowan Pike", "N0123X", "abc", "12", "Cockpit: documents aboard"];
