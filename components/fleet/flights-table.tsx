@@ -1,11 +1,12 @@
 import { scrollArea } from "@/components/ui/scroll-area";
 import type { FlightListRow } from "@/db/queries/fleet-flights";
 import { formatHours } from "@/lib/airworthiness";
+import { Day } from "@/components/ui/day";
 
 const FLAG = { ok: "Continuous", gap: "Gap", overlap: "Overlap" } as const;
 
 /** The meter log. A flagged flight says so in words, with what was found when reviewed. */
-export function FlightsTable({ rows, showAircraft = true }: { rows: FlightListRow[]; showAircraft?: boolean }) {
+export function FlightsTable({ rows, showAircraft = true, locale }: { rows: FlightListRow[]; showAircraft?: boolean; locale?: string }) {
   if (rows.length === 0) return <p className="text-ink-700">No flights logged yet.</p>;
   return (
     <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Flights")}>
@@ -25,7 +26,7 @@ export function FlightsTable({ rows, showAircraft = true }: { rows: FlightListRo
         <tbody>
           {rows.map((f) => (
             <tr key={f.id} className="border-t border-sand-200 align-top" data-continuity={f.continuity}>
-              <td className="px-3 py-2 font-mono tabular">{f.flownOn}</td>
+              <td className="px-3 py-2 tabular"><Day date={f.flownOn} locale={locale} /></td>
               {showAircraft ? <td className="px-3 py-2 font-bold">{f.registration}</td> : null}
               <td className="px-3 py-2">{f.pilotName ?? "—"}</td>
               <td className="px-3 py-2 font-mono tabular">{formatHours(f.hobbsOut)}–{formatHours(f.hobbsIn)}</td>

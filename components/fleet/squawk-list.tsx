@@ -3,6 +3,7 @@ import type { UploadLink } from "@/db/queries/fleet";
 import { FOUND_DURING_WORDS, TRIAGE_WORDS } from "@/lib/fleet/status-words";
 import { formatLocalTime } from "@/lib/fleet/time";
 import { CloseSquawkForm, TriageSquawkForm } from "./squawk-forms";
+import { Day } from "@/components/ui/day";
 
 const EVENT_WORDS = { reported: "Reported", triaged: "Triaged", closed: "Closed" } as const;
 
@@ -12,7 +13,8 @@ function stamp(d: Date, timeZone: string): string {
 }
 
 /** Squawks with their whole history (who and when) and files; maintenance controls where allowed. */
-export function SquawkList({ slug, timeZone, rows, events, files, today, canTriage, canClose, showAircraft = false, empty = "No squawks on record." }: {
+export function SquawkList({ slug, timeZone, rows, events, files, today, canTriage, canClose, showAircraft = false, empty = "No squawks on record.", locale }: {
+  locale?: string;
   slug: string;
   timeZone: string;
   rows: SquawkListRow[];
@@ -41,7 +43,7 @@ export function SquawkList({ slug, timeZone, rows, events, files, today, canTria
             <p className="text-sm text-ink-500">{FOUND_DURING_WORDS[s.foundDuring]} · reported by {s.reportedByName ?? "a member"}{s.suspectedGrounding ? " · reporter thinks it may affect airworthiness" : ""}</p>
             {s.limitation && s.status === "open" ? <p className="mt-1 text-sm font-bold text-sock-700">Limitation: {s.limitation}</p> : null}
             {s.status === "closed" ? (
-              <p className="mt-1 text-sm">{s.triage === "note" ? "Closed" : "Returned to service"} {s.rtsOn}{s.rtsMechanicName ? ` by ${s.rtsMechanicName}, certificate ${s.rtsCertificate}` : ""}: {s.repairNotes}</p>
+              <p className="mt-1 text-sm">{s.triage === "note" ? "Closed" : "Returned to service"} <Day date={s.rtsOn} locale={locale} />{s.rtsMechanicName ? ` by ${s.rtsMechanicName}, certificate ${s.rtsCertificate}` : ""}: {s.repairNotes}</p>
             ) : null}
             {photos.length ? (
               <ul className="mt-2 flex flex-wrap gap-2" aria-label="Files">

@@ -4,6 +4,7 @@ import { FormShell } from "@/components/ui/form-shell";
 import { SubmitButton } from "@/components/ui/submit-button";
 import { useFormAction } from "@/components/ui/use-form-action";
 import { importBankStatement, type BankImportAnswer } from "@/lib/actions/money/import-bank-statement";
+import { Day } from "@/components/ui/day";
 
 function fieldsFor(currency: string): FieldSpec[] {
   return [
@@ -30,7 +31,7 @@ function fieldsFor(currency: string): FieldSpec[] {
  * The statement import. When an OFX file holds several accounts the answer lists them and the
  * treasurer chooses one (the file stays chosen); nothing is imported until then.
  */
-export function BankImportForm({ slug, currency }: { slug: string; currency: string }) {
+export function BankImportForm({ slug, currency, locale }: { slug: string; currency: string; locale?: string }) {
   const form = useFormAction(importBankStatement);
   const { state } = form;
   const accounts = !state.ok ? ((state.data as BankImportAnswer | undefined)?.accounts ?? []) : [];
@@ -49,7 +50,7 @@ export function BankImportForm({ slug, currency }: { slug: string; currency: str
               <input type="radio" name="account" value={a.key} className="mt-1 size-5" />
               <span>
                 <span className="font-mono font-bold">{a.maskedId}</span> · {a.type ? a.type.toLowerCase() : "type not given"} · {a.currency || "currency not given"} · {a.transactions} transaction{a.transactions === 1 ? "" : "s"}
-                {a.firstDate && a.lastDate ? <> · <span className="font-mono tabular">{a.firstDate}</span> to <span className="font-mono tabular">{a.lastDate}</span></> : null}
+                {a.firstDate && a.lastDate ? <> · <span className="tabular"><Day date={a.firstDate} locale={locale} /></span> to <span className="tabular"><Day date={a.lastDate} locale={locale} /></span></> : null}
               </span>
             </label>
           ))}

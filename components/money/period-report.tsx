@@ -1,5 +1,6 @@
 import type { PeriodReport } from "@/db/queries/money-reconcile-match";
 import { formatMoney } from "@/lib/money";
+import { Day } from "@/components/ui/day";
 
 type Report = Pick<PeriodReport, "statementBalanceMinor" | "bookBalanceMinor" | "depositsInTransitMinor" | "outstandingChequesMinor" | "bankChargesMinor" | "bankCreditsMinor" | "adjustedBankBalanceMinor" | "adjustedBookBalanceMinor" | "differenceMinor" | "agrees" | "periodEnd" | "depositsInTransit" | "outstandingCheques" | "bankItemsNotInBooks">;
 
@@ -19,7 +20,7 @@ function Row({ label, minor, currency, locale, strong = false }: { label: string
 export function PeriodReportPanel({ report: r, currency, locale }: { report: Report; currency: string; locale?: string }) {
   return (
     <section className="card" aria-labelledby="report-h">
-      <h2 id="report-h" className="mb-2 text-lg font-bold">Reconciliation at {r.periodEnd}</h2>
+      <h2 id="report-h" className="mb-2 text-lg font-bold">Reconciliation at <Day date={r.periodEnd} locale={locale} /></h2>
       <dl className="text-sm">
         <Row label="Balance on the statement" minor={r.statementBalanceMinor} currency={currency} locale={locale} />
         <Row label="+ Deposits in transit" minor={r.depositsInTransitMinor} currency={currency} locale={locale} />

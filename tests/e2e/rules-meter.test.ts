@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { medicalPrivilegeDates } from "@/lib/currency";
 import { newPage, screenshot, signIn } from "./harness";
+import { formatDate } from "@/lib/dates";
 
 // Reedwater's N0534L (no other browser test relies on it): after its inspections switch from
 // the tach to the Hobbs, its hours-based items cannot be placed on the Hobbs, so it reads
@@ -86,7 +87,9 @@ describe("meter provenance, squawk alerts and medical dates in the browser", { r
     await page.goto(`${CLUB}/me`, { waitUntil: "networkidle" });
     const medical = page.getByRole("region", { name: "Medical" });
     await medical.getByText("Class 2").waitFor();
-    const cell = async (label: string) => (await medical.locator("dt", { hasText: label }).locator("xpath=following-sibling::dd[1]").textContent())?.trim() ?? "";
+    // Each day is shown in the club's locale in a <time> carrying the ISO day.
+    const dd = (label: string) => medical.locator("dt", { hasText: label }).locator("xpath=following-sibling::dd[1]");
+    const cell = async (label: string) => (await dd(label).locator("time").getAttribute("datetime")) ?? "";
     const examDate = await cell("Exam");
     const birthDate = await cell("Date of birth");
     // 14 CFR 61.23(d)(2): a second class carries commercial (12 months) and private (24 months at 40 or over) privileges, never ATP
@@ -94,6 +97,7 @@ describe("meter provenance, squawk alerts and medical dates in the browser", { r
     expect(expected.map((e) => e.privilege)).toEqual(["commercial", "private"]);
     expect(await cell("Commercial pilot privileges through")).toBe(expected[0]!.lastDay);
     expect(await cell("Private pilot privileges through")).toBe(expected[1]!.lastDay);
+    expect((await dd("Private pilot privileges through").textContent())?.trim()).toBe(formatDate(expected[1]!.lastDay, "en-US")); // the club's locale (en-US)
     expect(await medical.getByText("Airline transport pilot privileges").count()).toBe(0);
     await screenshot(page, "rules-meter-medical-privileges");
   });

@@ -39,7 +39,7 @@ export default async function FlightsPage({ params, searchParams }: { params: Pr
           <Link key={a.id} href={`${base}?aircraft=${a.id}`} aria-current={selected?.id === a.id ? "page" : undefined} className={selected?.id === a.id ? "font-bold" : ""}>{a.registration}</Link>
         ))}
       </nav>
-      <FlightsTable rows={rows} />
+      <FlightsTable rows={rows} locale={club.locale} />
     </div>
   );
 }

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { Day } from "@/components/ui/day";
 import Link from "next/link";
 import { ReviewMeterFlagForm } from "@/components/fleet/flight-forms";
 import { NoticeList } from "@/components/fleet/notice-list";
@@ -54,12 +55,12 @@ export default async function MaintenancePage({ params }: { params: Promise<{ cl
 
       <section aria-labelledby="triage-h" className="mt-8">
         <h2 id="triage-h" className="mb-3 text-xl font-bold">Squawks awaiting triage</h2>
-        <SquawkList slug={club.slug} timeZone={club.timeZone} rows={untriaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="Nothing waiting for triage." />
+        <SquawkList slug={club.slug} locale={club.locale} timeZone={club.timeZone} rows={untriaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="Nothing waiting for triage." />
       </section>
 
       <section aria-labelledby="open-h" className="mt-8">
         <h2 id="open-h" className="mb-3 text-xl font-bold">Open squawks</h2>
-        <SquawkList slug={club.slug} timeZone={club.timeZone} rows={triaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="No other open squawks." />
+        <SquawkList slug={club.slug} locale={club.locale} timeZone={club.timeZone} rows={triaged} events={events} files={files} today={line.today} canTriage={can(ability, "triage", "Squawk")} canClose={can(ability, "close", "Squawk")} showAircraft empty="No other open squawks." />
       </section>
 
       <section aria-labelledby="due-h" className="mt-8">
@@ -82,7 +83,7 @@ export default async function MaintenancePage({ params }: { params: Promise<{ cl
           <ul className="space-y-3">
             {flags.map((f) => (
               <li key={f.id} className="rounded border border-stop-600 bg-white p-3" data-flight={f.id}>
-                <p className="font-bold">{f.registration} · {f.flownOn} · {f.pilotName ?? "pilot"}: {f.continuity === "gap" ? "gap" : "overlap"}</p>
+                <p className="font-bold">{f.registration} · <Day date={f.flownOn} locale={club.locale} /> · {f.pilotName ?? "pilot"}: {f.continuity === "gap" ? "gap" : "overlap"}</p>
                 <p className="text-sm">{f.continuityText}</p>
                 {canReview ? <details className="mt-2"><summary className="cursor-pointer font-bold text-fin-600">Review</summary><div className="mt-2"><ReviewMeterFlagForm slug={club.slug} flightId={f.id} /></div></details> : null}
               </li>

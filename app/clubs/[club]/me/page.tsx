@@ -1,4 +1,5 @@
 import { scrollArea } from "@/components/ui/scroll-area";
+import { Day } from "@/components/ui/day";
 import type { Metadata } from "next";
 import { CurrencyList } from "@/components/currency/currency-list";
 import { DocumentForm } from "@/components/documents/document-form";
@@ -54,9 +55,9 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
           <ul className="divide-y divide-sand-200">
             {mine.map((c) => (
               <li key={c.id} className="py-2">
-                <span className="font-bold">{c.typeGroup}</span> · since {c.checkedOutOn} · {c.instructorName ?? "instructor"}
+                <span className="font-bold">{c.typeGroup}</span> · since <Day date={c.checkedOutOn} locale={club.locale} /> · {c.instructorName ?? "instructor"}
                 {c.conditions ? <span className="block text-sm text-ink-700">Conditions: {c.conditions}</span> : null}
-                {c.revokedAt ? <span className="block text-sm font-bold text-stop-800">Revoked {isoDateInTimeZone(c.revokedAt, club.timeZone)}: {c.revokeReason}</span> : null}
+                {c.revokedAt ? <span className="block text-sm font-bold text-stop-800">Revoked <Day date={isoDateInTimeZone(c.revokedAt, club.timeZone)} locale={club.locale} />: {c.revokeReason}</span> : null}
               </li>
             ))}
           </ul>
@@ -66,16 +67,16 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
           {medical ? (
             <dl className="mb-4 grid grid-cols-2 gap-2 text-sm">
               <dt className="font-bold">Kind</dt><dd>{medical.kind === "basicmed" ? "BasicMed" : `Class ${medical.medicalClass}`}</dd>
-              <dt className="font-bold">Exam</dt><dd className="font-mono tabular">{medical.examDate}</dd>
-              {medical.courseDate ? <><dt className="font-bold">Course</dt><dd className="font-mono tabular">{medical.courseDate}</dd></> : null}
+              <dt className="font-bold">Exam</dt><dd className="tabular"><Day date={medical.examDate} locale={club.locale} /></dd>
+              {medical.courseDate ? <><dt className="font-bold">Course</dt><dd className="tabular"><Day date={medical.courseDate} locale={club.locale} /></dd></> : null}
               {privilegeDates ? privilegeDates.map((p) => (
                 <div key={p.privilege} className="contents" data-privilege={p.privilege}>
-                  <dt className="font-bold">{PRIVILEGE_WORDS[p.privilege]} through</dt><dd className="font-mono tabular">{p.lastDay}</dd>
+                  <dt className="font-bold">{PRIVILEGE_WORDS[p.privilege]} through</dt><dd className="tabular"><Day date={p.lastDay} locale={club.locale} /></dd>
                 </div>
-              )) : <><dt className="font-bold">{medical.kind === "basicmed" ? "Expires after" : "Private pilot privileges expire after"}</dt><dd className="font-mono tabular">{medical.expiresOn}</dd></>}
+              )) : <><dt className="font-bold">{medical.kind === "basicmed" ? "Expires after" : "Private pilot privileges expire after"}</dt><dd className="tabular"><Day date={medical.expiresOn} locale={club.locale} /></dd></>}
               <dt className="font-bold">Standing</dt><dd>{medical.verifiedAt ? "✓ Verified" : "◇ Claimed: counts once an instructor or the safety officer has seen the certificate"}</dd>
               {medical.limitations ? <><dt className="font-bold">Limitations</dt><dd>{medical.limitations}</dd></> : null}
-              {birthDate ? <><dt className="font-bold">Date of birth (only you see it)</dt><dd className="font-mono tabular">{birthDate}</dd></> : null}
+              {birthDate ? <><dt className="font-bold">Date of birth (only you see it)</dt><dd className="tabular"><Day date={birthDate} locale={club.locale} /></dd></> : null}
             </dl>
           ) : <p className="mb-3 text-ink-500">No medical recorded.</p>}
           <p className="mb-3 text-sm text-ink-700">The safety officer and instructors see only the date it expires; club admins see the details; only you see your date of birth.</p>
@@ -86,7 +87,7 @@ export default async function MePage({ params }: { params: Promise<{ club: strin
         </section>
         <section className="card min-w-0" aria-labelledby="docs-h">
           <h2 id="docs-h" className="mb-2 text-lg font-bold">Documents</h2>
-          <DocumentsList slug={club.slug} docs={docs} today={today} warnDays={club.settings.documentReminderDays} />
+          <DocumentsList slug={club.slug} locale={club.locale} docs={docs} today={today} warnDays={club.settings.documentReminderDays} />
           <details className="mt-3">
             <summary className="cursor-pointer font-bold text-fin-600">Record a document</summary>
             <div className="mt-3"><DocumentForm slug={club.slug} today={today} /></div>

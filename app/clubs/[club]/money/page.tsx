@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { Day } from "@/components/ui/day";
 import Link from "next/link";
 import { ActionButton, ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
@@ -90,7 +91,7 @@ export default async function MoneyOverview({ params }: { params: Promise<{ club
               {arrears.map((m) => (
                 <li key={m.userId} className="flex flex-wrap justify-between gap-2 py-2">
                   <Link href={`${base}/members/${m.userId}`}>{m.name}</Link>
-                  <span><Money minor={m.balanceMinor} currency={club.currency} locale={club.locale} /> · oldest due {m.oldestDueDate}</span>
+                  <span><Money minor={m.balanceMinor} currency={club.currency} locale={club.locale} /> · oldest due <Day date={m.oldestDueDate} locale={club.locale} /></span>
                 </li>
               ))}
             </ul>

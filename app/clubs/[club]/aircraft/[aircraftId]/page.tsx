@@ -122,11 +122,11 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
       </Section>
 
       <Section id="squawks" title={`Squawks (${open.length} open)`}>
-        <SquawkList slug={club.slug} timeZone={club.timeZone} rows={open} events={events} files={squawkFiles} today={entry.today} canTriage={may.triage} canClose={may.close} />
+        <SquawkList slug={club.slug} locale={club.locale} timeZone={club.timeZone} rows={open} events={events} files={squawkFiles} today={entry.today} canTriage={may.triage} canClose={may.close} />
         {closed.length ? (
           <details className="mt-3">
             <summary className="cursor-pointer font-bold text-fin-600">Closed squawks ({closed.length})</summary>
-            <div className="mt-2"><SquawkList slug={club.slug} timeZone={club.timeZone} rows={closed} events={events} files={squawkFiles} today={entry.today} canTriage={false} canClose={false} /></div>
+            <div className="mt-2"><SquawkList slug={club.slug} locale={club.locale} timeZone={club.timeZone} rows={closed} events={events} files={squawkFiles} today={entry.today} canTriage={false} canClose={false} /></div>
           </details>
         ) : null}
       </Section>
@@ -149,13 +149,13 @@ export default async function AircraftPage({ params }: { params: Promise<{ club:
               <div className="mt-3"><LogFlightForm slug={club.slug} aircraft={[{ id: plane.id, registration: plane.registration, hobbs: plane.currentHobbs, tach: plane.currentTach }]} fixedAircraftId={plane.id} today={entry.today} metric={club.unitSystem === "metric"} /></div>
             </details>
           ) : null}
-          <FlightsTable rows={flights} showAircraft={false} />
+          <FlightsTable rows={flights} showAircraft={false} locale={club.locale} />
           <p className="mt-2 text-sm"><Link href={`${base}/flights?aircraft=${plane.id}`}>The whole flight log of {plane.registration}</Link></p>
         </Section>
       ) : null}
 
       <Section id="history" title="Inspection history">
-        <CompletionHistory slug={club.slug} rows={history} files={completionFiles} due={entry.due} />
+        <CompletionHistory slug={club.slug} locale={club.locale} rows={history} files={completionFiles} due={entry.due} />
       </Section>
 
       <Section id="record" title="Aircraft record">

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { dayText } from "@/components/ui/day";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ChangeRolesForm, MembershipStatusForm } from "@/components/members/member-admin-forms";
@@ -16,7 +17,7 @@ export default async function MemberPage({ params }: { params: Promise<{ club: s
   return (
     <div className="max-w-3xl">
       <p className="mb-2 text-sm"><Link href={`/clubs/${club.slug}/members`}>← Members</Link></p>
-      <PageHeader title={member.name ?? member.email} lead={`${member.email} · joined ${member.joinedOn} · ${member.status === "active" ? "active" : "inactive"}`} />
+      <PageHeader title={member.name ?? member.email} lead={`${member.email} · joined ${dayText(member.joinedOn, club.locale)} · ${member.status === "active" ? "active" : "inactive"}`} />
       <section className="card mb-6" aria-labelledby="roles-h">
         <h2 id="roles-h" className="mb-3 text-lg font-bold">Roles in {club.name}</h2>
         <ChangeRolesForm slug={club.slug} membershipId={member.membershipId} roles={member.roles} />

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { dayText } from "@/components/ui/day";
 import Link from "next/link";
 import { ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
@@ -56,7 +57,7 @@ export default async function BillsPage({ params }: { params: Promise<{ club: st
                 </div>
                 <p className="text-sm text-ink-700">
                   {b.periodKey ? `Recurring, ${b.periodKey} · ` : ""}Dated {formatDate(b.billDate, club.locale)} · due {formatDate(b.dueOn, club.locale)}{b.status !== "paid" && b.dueOn < today ? <span className="font-bold text-stop-800"> (overdue)</span> : null} · entered by {b.enteredBy}
-                  {b.approvedBy ? ` · approved by ${b.approvedBy}` : ""}{b.paidOn ? ` · paid ${b.paidOn}` : ""}
+                  {b.approvedBy ? ` · approved by ${b.approvedBy}` : ""}{b.paidOn ? ` · paid ${dayText(b.paidOn, club.locale)}` : ""}
                 </p>
                 {b.attachments.length ? (
                   <p className="text-sm">Invoice: {b.attachments.map((f) => <a key={f.id} className="mr-2" href={`/api/clubs/${club.slug}/uploads/${f.id}`}>{f.name}</a>)}</p>

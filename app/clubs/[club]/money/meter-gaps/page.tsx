@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { Day, dayText } from "@/components/ui/day";
 import { ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
 import { PageHeader } from "@/components/ui/page-header";
@@ -32,7 +33,7 @@ export default async function MeterGapsPage({ params }: { params: Promise<{ club
               <li key={g.flightId} className="card">
                 <p className="font-bold">
                   <span aria-hidden="true">▲ </span>
-                  {g.continuity === "gap" ? "Gap" : "Overlap"} · {g.registration} · flown {g.flownOn} by {g.pilotName}
+                  {g.continuity === "gap" ? "Gap" : "Overlap"} · {g.registration} · flown <Day date={g.flownOn} locale={club.locale} /> by {g.pilotName}
                 </p>
                 <p className="text-sm text-ink-700">{g.continuityText}</p>
                 <p className="text-sm">
@@ -45,7 +46,7 @@ export default async function MeterGapsPage({ params }: { params: Promise<{ club
                     <ActionForm
                       action={settleMeterGapAction}
                       slug={club.slug}
-                      label={`Settle the meter gap of ${g.registration} on ${g.flownOn}`}
+                      label={`Settle the meter gap of ${g.registration} on ${dayText(g.flownOn, club.locale)}`}
                       submitLabel="Settle"
                       hidden={{ flightId: g.flightId }}
                       fields={[{ name: "note", label: "What was decided", placeholder: "0.5 h charged to the previous pilot" }]}
@@ -67,7 +68,7 @@ export default async function MeterGapsPage({ params }: { params: Promise<{ club
             <tbody>
               {uncharged.map((f) => (
                 <tr key={f.flightId} className="border-t border-sand-200">
-                  <td className="py-1">{f.flownOn}</td><td className="py-1">{f.registration}</td><td className="py-1">{f.pilotName}</td>
+                  <td className="py-1"><Day date={f.flownOn} locale={club.locale} /></td><td className="py-1">{f.registration}</td><td className="py-1">{f.pilotName}</td>
                   <td className="py-1 font-mono">{f.hobbsOut.toFixed(1)} → {f.hobbsIn.toFixed(1)}</td>
                 </tr>
               ))}

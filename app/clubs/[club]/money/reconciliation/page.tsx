@@ -47,7 +47,7 @@ export default async function ReconciliationPage({ params }: { params: Promise<{
         <h2 id="imp-h" className="mb-1 text-lg font-bold">Import a bank statement</h2>
         <p className="mb-3 text-sm text-ink-700">OFX files carry their own balance and period; when one holds several accounts you choose which to import. A file or line in a currency other than the club's ({club.currency}) is refused. For CSV, say which columns hold what (by header name), and enter the closing balance printed on the statement. Lines already imported are skipped, and matching runs straight away.</p>
         {can(ability, "reconcile", "Reconciliation") ? (
-          <BankImportForm slug={club.slug} currency={club.currency} />
+          <BankImportForm slug={club.slug} currency={club.currency} locale={club.locale} />
         ) : (
           <p className="text-sm text-ink-500">{explainDenied("reconcile", "Reconciliation")}</p>
         )}

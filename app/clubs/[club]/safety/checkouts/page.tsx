@@ -1,4 +1,5 @@
 import { scrollArea } from "@/components/ui/scroll-area";
+import { Day } from "@/components/ui/day";
 import type { Metadata } from "next";
 import { RecordCheckoutForm, RevokeCheckoutForm } from "@/components/safety/checkout-forms";
 import { SafetyLinks } from "@/components/safety/safety-links";
@@ -39,7 +40,7 @@ export default async function CheckoutsPage({ params, searchParams }: { params: 
               <tr key={c.id} className="border-t border-sand-200 align-top">
                 <td className="px-3 py-2 font-bold">{c.memberName ?? c.memberEmail}</td>
                 <td className="px-3 py-2">{c.typeGroup}</td>
-                <td className="whitespace-nowrap px-3 py-2 font-mono tabular">{c.checkedOutOn}</td>
+                <td className="whitespace-nowrap px-3 py-2 tabular"><Day date={c.checkedOutOn} locale={club.locale} /></td>
                 <td className="px-3 py-2">{c.instructorName ?? "—"}<span className="block font-mono text-xs text-ink-500">{c.instructorCertificateNumber}</span></td>
                 <td className="px-3 py-2">{c.conditions ?? "None"}</td>
                 <td className="px-3 py-2">

@@ -1,4 +1,5 @@
 import { scrollArea } from "@/components/ui/scroll-area";
+import { Day } from "@/components/ui/day";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { ReportStatusBadge } from "@/components/safety/status-shapes";
@@ -12,7 +13,7 @@ import { REPORT_FILED_MESSAGE } from "@/lib/safety/report-filed";
 
 export const metadata: Metadata = { title: "Safety reports" };
 
-function ReportTable({ slug, rows, officer }: { slug: string; rows: ReportListRow[]; officer: boolean }) {
+function ReportTable({ slug, rows, officer, locale }: { slug: string; rows: ReportListRow[]; officer: boolean; locale: string }) {
   return (
     <div className="overflow-x-auto rounded border border-sand-300 bg-white" {...scrollArea("Safety reports")}>
       <table className="w-full min-w-[40rem] text-left text-sm">
@@ -22,7 +23,7 @@ function ReportTable({ slug, rows, officer }: { slug: string; rows: ReportListRo
         <tbody>
           {rows.map((r) => (
             <tr key={r.id} className="border-t border-sand-200 align-top">
-              <td className="whitespace-nowrap px-3 py-2 font-mono tabular">{r.occurredOn}</td>
+              <td className="whitespace-nowrap px-3 py-2 tabular"><Day date={r.occurredOn} locale={locale} /></td>
               <td className="px-3 py-2">{r.location}{r.aircraftRegistration ? <span className="block text-xs text-ink-500">{r.aircraftRegistration}</span> : null}</td>
               <td className="px-3 py-2"><Link href={`/clubs/${slug}/safety/reports/${r.id}`}>{r.whatHappened.slice(0, 90)}{r.whatHappened.length > 90 ? "…" : ""}</Link></td>
               <td className="px-3 py-2"><ReportStatusBadge status={r.status} /></td>
@@ -56,11 +57,11 @@ export default async function ReportsPage({ params, searchParams }: { params: Pr
       {sp.filed ? <p role="status" className="mb-4 rounded border border-go-600 bg-go-100 px-3 py-2 text-go-800">{REPORT_FILED_MESSAGE} Reports filed under your name are listed here; anonymous reports are not linked to you and never appear.</p> : null}
       <section aria-labelledby="open-h" className="mb-6">
         <h2 id="open-h" className="mb-2 text-lg font-bold">Open ({open.length})</h2>
-        <ReportTable slug={club.slug} rows={open} officer={officer} />
+        <ReportTable slug={club.slug} rows={open} officer={officer} locale={club.locale} />
       </section>
       <section aria-labelledby="closed-h">
         <h2 id="closed-h" className="mb-2 text-lg font-bold">Closed ({closed.length})</h2>
-        <ReportTable slug={club.slug} rows={closed} officer={officer} />
+        <ReportTable slug={club.slug} rows={closed} officer={officer} locale={club.locale} />
       </section>
     </div>
   );

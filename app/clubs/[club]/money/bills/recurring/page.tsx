@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { dayText } from "@/components/ui/day";
 import Link from "next/link";
 import { ActionButton, ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
@@ -55,10 +56,10 @@ export default async function RecurringBillsPage({ params }: { params: Promise<{
               <li key={r.id} className="card">
                 <div className="flex flex-wrap items-baseline justify-between gap-2">
                   <span><span className="font-bold">{r.vendor}</span>{r.reference ? <span className="text-ink-700"> · {r.reference}</span> : null} · {r.categoryName}</span>
-                  <span className="flex items-baseline gap-3"><Money minor={r.amountMinor} currency={club.currency} /><span className="text-sm font-bold"><span aria-hidden="true">{STATUS[r.status].shape} </span>{STATUS[r.status].word}</span></span>
+                  <span className="flex items-baseline gap-3"><Money minor={r.amountMinor} currency={club.currency} locale={club.locale} /><span className="text-sm font-bold"><span aria-hidden="true">{STATUS[r.status].shape} </span>{STATUS[r.status].word}</span></span>
                 </div>
                 <p className="text-sm text-ink-700">
-                  {CADENCE_WORDS[r.cadence]}{r.status === "ended" ? "" : ` · next bill ${r.nextOn}`}{r.endsOn ? ` · last bill by ${r.endsOn}` : ""} · {r.dueDays === 0 ? "due on its date" : `due ${r.dueDays} days after its date`} · {r.billCount} bill{r.billCount === 1 ? "" : "s"} entered{r.lastPeriod ? `, the latest dated ${r.lastPeriod}` : ""}
+                  {CADENCE_WORDS[r.cadence]}{r.status === "ended" ? "" : ` · next bill ${dayText(r.nextOn, club.locale)}`}{r.endsOn ? ` · last bill by ${dayText(r.endsOn, club.locale)}` : ""} · {r.dueDays === 0 ? "due on its date" : `due ${r.dueDays} days after its date`} · {r.billCount} bill{r.billCount === 1 ? "" : "s"} entered{r.lastPeriod ? `, the latest dated ${r.lastPeriod}` : ""}
                 </p>
                 {canEdit && r.status !== "ended" ? (
                   <div className="mt-2 flex flex-wrap gap-2">

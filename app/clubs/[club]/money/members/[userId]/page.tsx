@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { Day, dayText } from "@/components/ui/day";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AccountView } from "@/components/money/account-view";
@@ -35,11 +36,11 @@ export default async function MemberAccountPage({ params }: { params: Promise<{ 
           <div className="grid gap-4 lg:grid-cols-2">
             {refundable.map((p) => (
               <div key={p.id} className="card">
-                <p className="mb-3 text-sm">{p.receivedOn} · <Money minor={p.amountMinor} currency={club.currency} locale={club.locale} /> by card{p.refundedMinor ? <> · <Money minor={p.refundedMinor} currency={club.currency} locale={club.locale} /> refunded already</> : null}</p>
+                <p className="mb-3 text-sm"><Day date={p.receivedOn} locale={club.locale} /> · <Money minor={p.amountMinor} currency={club.currency} locale={club.locale} /> by card{p.refundedMinor ? <> · <Money minor={p.refundedMinor} currency={club.currency} locale={club.locale} /> refunded already</> : null}</p>
                 <ActionForm
                   action={refundPayment}
                   slug={club.slug}
-                  label={`Refund the payment of ${p.receivedOn}`}
+                  label={`Refund the payment of ${p.receivedOn ? dayText(p.receivedOn, club.locale) : "this payment"}`}
                   submitLabel="Refund to the card"
                   pendingText="Refunding…"
                   hidden={{ paymentId: p.id }}

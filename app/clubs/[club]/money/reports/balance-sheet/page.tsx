@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { dayText } from "@/components/ui/day";
 import { MoneyNav } from "@/components/money/money-nav";
 import { ExportLinks, PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
 import { PageHeader } from "@/components/ui/page-header";
@@ -31,7 +32,7 @@ export default async function BalanceSheetPage({ params, searchParams }: { param
     <>
       <PageHeader
         title="Balance sheet"
-        lead={`What the club owns and owes at the end of ${asOf}. Equity includes the net income not yet closed into retained funds.`}
+        lead={`What the club owns and owes at the end of ${dayText(asOf, club.locale)}. Equity includes the net income not yet closed into retained funds.`}
         actions={can(ability, "export", "Ledger") ? <ExportLinks csvHref={csvHref} pdfHref={pdfHref} /> : null}
       />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/reports/profit-and-loss`} />
@@ -48,7 +49,7 @@ export default async function BalanceSheetPage({ params, searchParams }: { param
           : `Not balanced: assets ${formatMoney(sheet.assetsMinor, club.currency, club.locale)} differ from liabilities + equity by ${formatMoney(sheet.assetsMinor - sheet.liabilitiesMinor - sheet.equityMinor, club.currency, club.locale)}. Check the journal for an unbalanced entry.`}
       </p>
       <ReportTable
-        caption={`Balance sheet at ${asOf}`}
+        caption={`Balance sheet at ${dayText(asOf, club.locale)}`}
         lines={lines}
         currency={club.currency} locale={club.locale}
         groups={["asset", "liability", "equity"]}

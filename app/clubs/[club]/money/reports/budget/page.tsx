@@ -68,8 +68,8 @@ export default async function BudgetPage({ params, searchParams }: { params: Pro
           ))}
         </ul>
       </nav>
-      <BudgetTable caption={`${monthName}: budget against actual`} report={monthReport} currency={club.currency} />
-      <BudgetTable caption={`Year to date, Jan to ${monthName}`} report={ytdReport} currency={club.currency} />
+      <BudgetTable caption={`${monthName}: budget against actual`} report={monthReport} currency={club.currency} locale={club.locale} />
+      <BudgetTable caption={`Year to date, Jan to ${monthName}`} report={ytdReport} currency={club.currency} locale={club.locale} />
       <section aria-labelledby="grid-h" className="mb-8">
         <h2 id="grid-h" className="mb-2 text-lg font-bold">Budget for {year}</h2>
         {canEdit ? (

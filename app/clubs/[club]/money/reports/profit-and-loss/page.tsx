@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { dayText } from "@/components/ui/day";
 import { MoneyNav } from "@/components/money/money-nav";
 import { ExportLinks, PeriodPicker, ReportTable, ReportTabs } from "@/components/money/report-views";
 import { PageHeader } from "@/components/ui/page-header";
@@ -30,7 +31,7 @@ export default async function ProfitAndLossPage({ params, searchParams }: { para
     <>
       <PageHeader
         title="Profit and loss"
-        lead={`Income and expenses from ${period.from} to ${period.to}, both days included. Member charges count as income when charged, not when paid.`}
+        lead={`Income and expenses from ${dayText(period.from, club.locale)} to ${dayText(period.to, club.locale)}, both days included. Member charges count as income when charged, not when paid.`}
         actions={can(ability, "export", "Ledger") ? <ExportLinks csvHref={csvHref} pdfHref={pdfHref} /> : null}
       />
       <MoneyNav slug={club.slug} ability={ability} current={`/clubs/${club.slug}/money/reports/profit-and-loss`} />
@@ -41,7 +42,7 @@ export default async function ProfitAndLossPage({ params, searchParams }: { para
         presets={reportPresets(today).map((p) => ({ label: p.label, href: `${base}?from=${p.from}&to=${p.to}` }))}
       />
       <ReportTable
-        caption={`Profit and loss, ${period.from} to ${period.to}`}
+        caption={`Profit and loss, ${dayText(period.from, club.locale)} to ${dayText(period.to, club.locale)}`}
         lines={pnl.byAccount}
         currency={club.currency} locale={club.locale}
         groups={["income", "expense"]}

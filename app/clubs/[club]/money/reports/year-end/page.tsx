@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { Day } from "@/components/ui/day";
 import Link from "next/link";
 import { ActionForm } from "@/components/money/action-form";
 import { MoneyNav } from "@/components/money/money-nav";
@@ -43,7 +44,7 @@ export default async function YearEndPage({ params, searchParams }: { params: Pr
             {closes.map((c) => (
               <li key={c.id} className="card flex flex-wrap items-baseline justify-between gap-2">
                 <span><span aria-hidden="true">■ </span><span className="font-bold">{c.year}</span> closed through {c.closedThrough} by {c.closedBy}</span>
-                <span className="text-sm">{c.netIncomeMinor >= 0 ? "Surplus" : "Deficit"} <Money minor={Math.abs(c.netIncomeMinor)} currency={club.currency} /></span>
+                <span className="text-sm">{c.netIncomeMinor >= 0 ? "Surplus" : "Deficit"} <Money minor={Math.abs(c.netIncomeMinor)} currency={club.currency} locale={club.locale} /></span>
               </li>
             ))}
           </ul>
@@ -60,7 +61,7 @@ export default async function YearEndPage({ params, searchParams }: { params: Pr
         ) : (
           <>
             <table className="mb-3 w-full text-sm">
-              <caption className="mb-1 text-left font-bold">The closing entry, dated {preview.date}</caption>
+              <caption className="mb-1 text-left font-bold">The closing entry, dated <Day date={preview.date} locale={club.locale} /></caption>
               <thead>
                 <tr className="text-left text-ink-700"><th scope="col">Account</th><th scope="col" className="text-right">Debit</th><th scope="col" className="text-right">Credit</th></tr>
               </thead>
@@ -71,14 +72,14 @@ export default async function YearEndPage({ params, searchParams }: { params: Pr
                   preview.lines.map((l) => (
                     <tr key={l.accountCode} className="border-t border-sand-200">
                       <td className="py-1">{l.accountName}</td>
-                      <td className="py-1 text-right">{l.debitMinor ? <Money minor={l.debitMinor} currency={club.currency} /> : null}</td>
-                      <td className="py-1 text-right">{l.creditMinor ? <Money minor={l.creditMinor} currency={club.currency} /> : null}</td>
+                      <td className="py-1 text-right">{l.debitMinor ? <Money minor={l.debitMinor} currency={club.currency} locale={club.locale} /> : null}</td>
+                      <td className="py-1 text-right">{l.creditMinor ? <Money minor={l.creditMinor} currency={club.currency} locale={club.locale} /> : null}</td>
                     </tr>
                   ))
                 )}
               </tbody>
             </table>
-            <p className="mb-3 text-sm font-bold">{preview.netIncomeMinor >= 0 ? "Surplus" : "Deficit"} moved into retained funds: <Money minor={Math.abs(preview.netIncomeMinor)} currency={club.currency} /></p>
+            <p className="mb-3 text-sm font-bold">{preview.netIncomeMinor >= 0 ? "Surplus" : "Deficit"} moved into retained funds: <Money minor={Math.abs(preview.netIncomeMinor)} currency={club.currency} locale={club.locale} /></p>
             {preview.problem ? <p className="mb-3 text-sm text-ink-700"><span aria-hidden="true">▲ </span>{preview.problem}</p> : null}
             {canClose && !preview.problem ? (
               <ActionForm action={closeYearAction} slug={club.slug} label={`Close ${year}`} submitLabel={`Close ${year} and lock it`} pendingText="Closing…" hidden={{ year: String(year) }} fields={[]} />

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { Day, dayText } from "@/components/ui/day";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ReportStatusBadge } from "@/components/safety/status-shapes";
@@ -28,10 +29,10 @@ export default async function ReportPage({ params }: { params: Promise<{ club: s
   return (
     <div className="max-w-5xl">
       <p className="mb-2 text-sm"><Link href={`${base}/reports`}>← Reports</Link></p>
-      <PageHeader title={`Safety report of ${report.occurredOn}`} lead={<span className="inline-flex flex-wrap items-center gap-2"><ReportStatusBadge status={report.status} /> {report.anonymous ? "Filed anonymously — no link to the reporter is stored." : `Filed by ${getReporterName(db, club.id, report) ?? "a member"}.`}</span>} />
+      <PageHeader title={`Safety report of ${dayText(report.occurredOn, club.locale)}`} lead={<span className="inline-flex flex-wrap items-center gap-2"><ReportStatusBadge status={report.status} /> {report.anonymous ? "Filed anonymously — no link to the reporter is stored." : `Filed by ${getReporterName(db, club.id, report) ?? "a member"}.`}</span>} />
       <article className="card mb-6">
         <dl className="mb-4 grid gap-x-6 gap-y-2 sm:grid-cols-3">
-          <div><dt className="text-sm font-bold text-ink-700">When</dt><dd>{report.occurredOn}{report.occurredTime ? ` ${report.occurredTime}` : ""}</dd></div>
+          <div><dt className="text-sm font-bold text-ink-700">When</dt><dd><Day date={report.occurredOn} locale={club.locale} />{report.occurredTime ? ` ${report.occurredTime}` : ""}</dd></div>
           <div><dt className="text-sm font-bold text-ink-700">Where</dt><dd className="break-words">{report.location}</dd></div>
           <div><dt className="text-sm font-bold text-ink-700">Aircraft</dt><dd>{aircraft.find((a) => a.id === report.aircraftId)?.label ?? (report.aircraftId ? "A club aircraft" : "None given")}</dd></div>
         </dl>
