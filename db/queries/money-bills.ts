@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, inArray, isNull, sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
-import { bills, ledgerAccounts, moneySettings, uploads, users, type BillRow } from "@/db/schema";
+import { auditLog, bills, ledgerAccounts, moneySettings, uploads, users, type BillRow } from "@/db/schema";
 import { accountId } from "@/db/queries/money-accounts";
 import { openPostingDate, postEntry } from "@/db/queries/money-post-entry";
 import { billEntryLines, billNeedsApproval, billPaymentLines } from "@/lib/money/bills";
@@ -87,6 +87,9 @@ export function payBill(tx: Tx, clubId: string, bill: BillRow, userId: string, p
   return done.changes === 1 ? entryId : null;
 }
 
+/** The audit action of a bill the scheduled run entered (no person): db/queries/money-recurring.ts. */
+export const SCHEDULED_BILL_AUDIT = "money.bill.enter.scheduled";
+
 export type BillListRow = BillRow & { enteredBy: string; approvedBy: string | null; categoryName: string; attachments: { id: string; name: string }[] };
 
 export function listBills(db: Db, clubId: string): BillListRow[] {
@@ -101,12 +104,16 @@ export function listBills(db: Db, clubId: string): BillListRow[] {
     .all();
   const ids = rows.map((r) => r.bill.id);
   const files = ids.length ? db.select({ id: uploads.id, subjectId: uploads.subjectId, name: uploads.originalName }).from(uploads).where(and(eq(uploads.clubId, clubId), eq(uploads.subjectType, "Bill"), inArray(uploads.subjectId, ids))).all() : [];
+  // A bill the scheduled run entered names no person as its enterer, whoever set the recurring bill up.
+  const byTick = new Set(
+    ids.length ? db.select({ id: auditLog.subjectId }).from(auditLog).where(and(eq(auditLog.clubId, clubId), eq(auditLog.action, SCHEDULED_BILL_AUDIT), inArray(auditLog.subjectId, ids))).all().map((a) => a.id) : [],
+  );
   const approvers = new Map(
     db.select({ id: users.id, name: sql<string>`coalesce(${users.name}, ${users.email})` }).from(users).where(inArray(users.id, rows.map((r) => r.bill.approvedById).filter((x): x is string => !!x).concat(["-"]))).all().map((u) => [u.id, u.name]),
   );
   return rows.map((r) => ({
     ...r.bill,
-    enteredBy: r.enteredBy,
+    enteredBy: byTick.has(r.bill.id) ? `the scheduled run (recurring bill set up by ${r.enteredBy})` : r.enteredBy,
     approvedBy: r.bill.approvedById ? approvers.get(r.bill.approvedById) ?? null : null,
     categoryName: r.categoryName ?? r.bill.accountCode,
     attachments: files.filter((f) => f.subjectId === r.bill.id).map((f) => ({ id: f.id, name: f.name })),

@@ -6,7 +6,7 @@ import { dueOccurrences, type Cadence } from "@/lib/money/recurring";
 import { clubToday } from "@/lib/money/settings";
 import { writeAudit } from "@/lib/server/audit";
 import { logError } from "@/lib/server/log";
-import { billCategories, enterBill } from "./money-bills";
+import { billCategories, enterBill, SCHEDULED_BILL_AUDIT } from "./money-bills";
 
 // Recurring bills (insurance, hangar rent): the templates the treasurer keeps, and producing the
 // bills that are due. Each bill goes through the one bill write path (enterBill), once per
@@ -124,7 +124,7 @@ export function produceDueBills(tx: Tx, club: { id: string; currency: string }, 
 }
 
 /** The audit action of a bill the scheduled run entered (no person did). */
-export const SCHEDULED_BILL_AUDIT = "money.bill.enter.scheduled";
+export { SCHEDULED_BILL_AUDIT } from "./money-bills";
 
 export type ScheduledBillsResult = { clubs: number; bills: number };
 

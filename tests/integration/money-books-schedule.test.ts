@@ -11,6 +11,7 @@ import { POST as tickRoute } from "@/app/api/cron/tick/route";
 import { databaseFile } from "@/db/client";
 import { listAuditEntries } from "@/db/queries/audit";
 import { produceScheduledBills, SCHEDULED_BILL_AUDIT } from "@/db/queries/money-recurring";
+import { listBills } from "@/db/queries/money-bills";
 import { previewYearClose } from "@/db/queries/money-year-end";
 import { auditLog, bills, journalEntries, recurringBills, yearCloses } from "@/db/schema";
 import { approveBillAction } from "@/lib/actions/money/approve-bill";
@@ -87,6 +88,11 @@ describe("the treasurer's books on the schedule: recurring bills by the tick, ye
       expect(w.sentence).toBe("The scheduled run (no person) entered a recurring bill that fell due.");
       expect(w.details).toEqual(expect.arrayContaining(["vendor: Cove Hangar Trust", "amount: $120.00", `set up by: ${treasurer.name}`]));
     }
+
+    // The bills list names no person as the enterer of the run's bills.
+    const listed = listBills(db(), clubBySlug(SLUG).id).filter((b) => b.recurringBillId === templateId);
+    expect(listed).toHaveLength(3);
+    for (const b of listed) expect(b.enteredBy).toBe(`the scheduled run (recurring bill set up by ${treasurer.name})`);
 
     // The treasurer's button afterwards finds nothing left to enter.
     signInAs(TREASURER);
