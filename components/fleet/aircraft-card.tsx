@@ -31,19 +31,6 @@ export function AircraftCard({ entry, slug, blockLines = [] }: { entry: FlightLi
         <StatusBadge status={entry.status} large />
       </header>
 
-      {blockLines.length ? (
-        <section aria-label={`Maintenance blocks for ${a.registration}`}>
-          <ul className="space-y-1 text-sm">
-            {blockLines.map((line) => (
-              <li key={line} className="flex gap-2 rounded border-l-4 border-sand-500 bg-sand-50 px-2 py-1 text-ink-900">
-                <svg aria-hidden="true" viewBox="0 0 16 16" className="mt-0.5 h-4 w-4 shrink-0" data-shape="block"><rect x="1.5" y="3.5" width="13" height="9" fill="none" stroke="currentColor" strokeWidth="1.5" /><path d="M4 12l5-8M8 12l5-8" stroke="currentColor" strokeWidth="1.5" /></svg>
-                <span className="min-w-0 break-words">{line}. Bookings are refused while it lasts.</span>
-              </li>
-            ))}
-          </ul>
-        </section>
-      ) : null}
-
       <section aria-label={`Reasons for ${a.registration}`}>
         {entry.reasons.length === 0 ? (
           <p className="text-sm text-ink-700">No open squawks, notices or due items on record.</p>
@@ -58,6 +45,19 @@ export function AircraftCard({ entry, slug, blockLines = [] }: { entry: FlightLi
           </ul>
         )}
       </section>
+
+      {blockLines.length ? (
+        <section aria-label={`Maintenance blocks for ${a.registration}`}>
+          <ul className="space-y-1 text-sm">
+            {blockLines.map((line) => (
+              <li key={line} className="flex gap-2 rounded border-l-4 border-sand-500 bg-sand-50 px-2 py-1 text-ink-900">
+                <svg aria-hidden="true" viewBox="0 0 16 16" className="mt-0.5 h-4 w-4 shrink-0" data-shape="block"><rect x="1.5" y="3.5" width="13" height="9" fill="none" stroke="currentColor" strokeWidth="1.5" /><path d="M4 12l5-8M8 12l5-8" stroke="currentColor" strokeWidth="1.5" /></svg>
+                <span className="min-w-0 break-words">{line}. Bookings are refused while it lasts.</span>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
 
       {next.length ? (
         <section aria-label={`Next due for ${a.registration}`}>
