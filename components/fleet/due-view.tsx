@@ -3,6 +3,7 @@ import { formatDateWords } from "@/lib/dates/words";
 import { DUE_EFFECT_WORDS, DUE_STATE_WORDS, dueMargin, dueState, groupForDueView, remainingWords, type DueState } from "@/lib/fleet/due-words";
 import type { DueSummary } from "@/lib/fleet/types";
 import { lateText, meterWord } from "./due-text";
+import { QuestionMark } from "@/components/ui/status-badge";
 
 // Our due view: each item a card that says in words how much remains, with a bar of the margin
 // left of its interval, grouped by what the item does when it comes due (grounds, stops IFR,
@@ -30,7 +31,7 @@ export function DueGlyph({ state, size = 16 }: { state: DueState; size?: number 
       return (
         <svg {...common}>
           <circle cx="10" cy="10" r="8" fill="none" stroke="currentColor" strokeWidth="2" strokeDasharray="3 2" />
-          <text x="10" y="14.2" textAnchor="middle" fontSize="11" fontWeight="700" fill="currentColor" fontFamily="sans-serif">?</text>
+          <QuestionMark />
         </svg>
       );
     case "soon":

@@ -27,6 +27,19 @@ export const STATUS_TEXT_TONE: Record<AircraftStatus, string> = {
   unknown: "text-fog-800",
 };
 
+/**
+ * The question mark of the "unknown" marks (20 × 20 box), drawn, not typed: a glyph must not add a
+ * character to the text around it (a badge's, a due item's).
+ */
+export function QuestionMark() {
+  return (
+    <>
+      <path d="M7.4 7.6 C7.4 5.9 8.6 5 10 5 C11.5 5 12.6 5.9 12.6 7.3 C12.6 8.6 11.7 9.1 10.9 9.6 C10.3 10 10 10.4 10 11.3" fill="none" stroke="currentColor" strokeWidth="2" strokeLinecap="round" />
+      <circle cx="10" cy="14.3" r="1.3" fill="currentColor" />
+    </>
+  );
+}
+
 function known(status: StatusOrNothing): AircraftStatus {
   return status ?? "unknown";
 }
@@ -60,9 +73,7 @@ export function StatusShape({ status, size = 18 }: { status: StatusOrNothing; si
       return (
         <svg {...common}>
           <circle cx="10" cy="10" r="8.2" fill="none" stroke="currentColor" strokeWidth="2" strokeDasharray="3.2 2.2" />
-          {/* The question mark is drawn, not typed: a glyph must not add a character to the badge's text. */}
-          <path d="M7.4 7.6 C7.4 5.9 8.6 5 10 5 C11.5 5 12.6 5.9 12.6 7.3 C12.6 8.6 11.7 9.1 10.9 9.6 C10.3 10 10 10.4 10 11.3" fill="none" stroke="currentColor" strokeWidth="2" strokeLinecap="round" />
-          <circle cx="10" cy="14.3" r="1.3" fill="currentColor" />
+          <QuestionMark />
         </svg>
       );
   }
